@@ -1,0 +1,5 @@
+// Every benchmark `npm run bench` runs, in order. Add new ones here.
+import { databaseCommit } from './database.bench'
+import type { Benchmark } from './types'
+
+export const benchmarks: Benchmark[] = [databaseCommit]

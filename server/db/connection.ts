@@ -1,0 +1,68 @@
+// Opens Hobline's SQLite database through Sequelize. Plain Node: no Nitro auto-imports here, so the
+// migrate and seed scripts can use it too.
+import { mkdirSync } from 'node:fs'
+import { dirname, resolve } from 'node:path'
+import { QueryTypes, Sequelize, Transaction } from 'sequelize'
+import sqlite3 from 'sqlite3'
+
+export const BUSY_TIMEOUT_MS = 5000
+
+type Sqlite3Connection = sqlite3.Database & { hoblineConfigured?: boolean }
+
+export function resolveDatabasePath(path: string): string {
+  return path === ':memory:' ? path : resolve(path)
+}
+
+/**
+ * One Sequelize instance on one SQLite file. WAL journal (readers never wait for the writer), foreign
+ * keys on for every connection, a busy timeout so a second connection waits instead of failing, and
+ * IMMEDIATE transactions so a transaction takes the write lock up front and cannot deadlock on upgrade.
+ */
+export async function openDatabase(path: string): Promise<Sequelize> {
+  const storage = resolveDatabasePath(path)
+  if (storage !== ':memory:') mkdirSync(dirname(storage), { recursive: true })
+  const sequelize = new Sequelize({
+    dialect: 'sqlite',
+    // Passed explicitly so the server bundler keeps the native module.
+    dialectModule: sqlite3,
+    storage,
+    logging: false,
+    transactionType: Transaction.TYPES.IMMEDIATE,
+    define: { underscored: true },
+  })
+  // Sequelize's SQLite connection manager opens a new connection per transaction and runs no hooks,
+  // so the busy timeout is set here on every connection it hands out.
+  const manager = sequelize.connectionManager as unknown as {
+    getConnection: (options?: object) => Promise<Sqlite3Connection>
+  }
+  const getConnection = manager.getConnection.bind(manager)
+  manager.getConnection = async (options) => {
+    const connection = await getConnection(options)
+    if (!connection.hoblineConfigured) {
+      connection.configure('busyTimeout', BUSY_TIMEOUT_MS)
+      connection.hoblineConfigured = true
+    }
+    return connection
+  }
+  if (storage !== ':memory:') await sequelize.query('PRAGMA journal_mode = WAL')
+  await sequelize.query('PRAGMA synchronous = NORMAL')
+  return sequelize
+}
+
+export interface DatabasePragmas {
+  journalMode: string
+  foreignKeys: boolean
+  busyTimeoutMs: number
+}
+
+export async function readPragmas(sequelize: Sequelize): Promise<DatabasePragmas> {
+  const one = async (pragma: string) => {
+    const rows = await sequelize.query<Record<string, unknown>>(`PRAGMA ${pragma}`, { type: QueryTypes.SELECT })
+    return Object.values(rows[0] ?? {})[0]
+  }
+  return {
+    journalMode: String(await one('journal_mode')),
+    foreignKeys: Number(await one('foreign_keys')) === 1,
+    busyTimeoutMs: Number(await one('busy_timeout')),
+  }
+}

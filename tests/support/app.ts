@@ -1,0 +1,50 @@
+// Start the built app for one test file: its own temporary database, its own port.
+import { mkdtempSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join, resolve } from 'node:path'
+import { $fetch, setup } from '@nuxt/test-utils/e2e'
+import { beforeAll } from 'vitest'
+import { chromiumLaunchOptions } from './chromium'
+
+export const rootDir = resolve(import.meta.dirname, '../..')
+
+export interface AppOptions {
+  browser?: boolean
+  seed?: 'always' | 'never'
+  env?: Record<string, string>
+}
+
+export function tempDatabasePath(label = 'test'): string {
+  return join(mkdtempSync(join(tmpdir(), `hobline-${label}-`)), 'hobline.sqlite')
+}
+
+/** Registers the suite's beforeAll/afterAll. Returns the database path the server uses. */
+export async function useBuiltApp(options: AppOptions = {}): Promise<{ databasePath: string }> {
+  const databasePath = tempDatabasePath()
+  // nuxt-auth-utils refuses to seal sessions without a 32+ character password.
+  process.env.NUXT_SESSION_PASSWORD ||= 'test-session-password-of-at-least-32-characters'
+  await setup({
+    rootDir,
+    build: false,
+    server: true,
+    browser: options.browser ?? false,
+    browserOptions: { type: 'chromium', launch: chromiumLaunchOptions() },
+    nuxtConfig: { nitro: { output: { dir: resolve(rootDir, '.output') } } },
+    setupTimeout: 120_000,
+    env: {
+      NUXT_DATABASE_PATH: databasePath,
+      NUXT_DATABASE_SEED: options.seed ?? 'always',
+      ...options.env,
+    },
+  })
+  // Nitro listens before the database plugin has finished migrating: wait for it.
+  beforeAll(async () => {
+    for (let i = 0; i < 300; i++) {
+      const health = await $fetch<{ status: string }>('/api/health').catch(() => null)
+      if (health?.status === 'ok') return
+      await new Promise((r) => setTimeout(r, 50))
+    }
+    throw new Error('the built app never reported a healthy database')
+  })
+  return { databasePath }
+}
