@@ -1,0 +1,243 @@
+// Ingredient lines: "1½ cups plain flour, sifted" → amount, unit, item and prep note.
+//
+// Read, in order: an optional approximation or size word (about, heaped, scant…), an amount
+// (number, fraction, mixed number, word), an optional range ("5-6", "5–6", "5 to 6", "1 or 2"),
+// an optional parenthesis ("1 (400 g) can" keeps "(400 g)" with the item), an optional unit
+// (names, plurals, abbreviations: see shared/data/unit-names.ts), an optional second amount
+// of the same kind ("2 1/2 cups plus 2 tablespoons", "1 lb 4 oz"), which is added in the first
+// unit, and "of". The rest is the item, and after its first top-level comma the prep note.
+// "optional" anywhere sets the optional flag, "to taste" sets toTaste and leaves no amount.
+// Nothing is dropped: words that were not understood stay in the item or prep text, and
+// anything doubtful is listed in `warnings`.
+import { UNIT_NAMES } from '../data/unit-names'
+import { formatAmountExact, normaliseAmountText, readAmountAt } from './amount-text'
+import { convertAmount, unitKind, unitLabel, type UnitId } from './units'
+
+export interface QuantityPart {
+  amount: number
+  unit: UnitId
+}
+
+export interface ParsedQuantity {
+  /** The line as given. */
+  text: string
+  min: number | null
+  max: number | null
+  unit: UnitId | null
+  item: string
+  prep: string | null
+  optional: boolean
+  toTaste: boolean
+  /** A compound amount as written ("2½ cups plus 2 tbsp"); empty for a simple amount. */
+  parts: QuantityPart[]
+  warnings: string[]
+}
+
+export interface QuantityParseOptions {
+  /** What a bare "cup" means: the US cup (default) or the 250 mL metric cup. */
+  cups?: 'us' | 'metric'
+  /** What bare "pint", "quart", "gallon", "fl oz" mean: US (default) or UK imperial. */
+  fluid?: 'us' | 'imperial'
+}
+
+const QUALIFIERS = /(about|approx\.?|approximately|roughly|around|heaped|heaping|scant|level|rounded|generous|good)\s+/iy
+const UNIT_QUALIFIERS = /(heaped|heaping|scant|level|rounded|generous|good)\s+/iy
+const RANGE = /\s?(?:-|to|or)\s?/iy
+const COMPOUND = /\s?(?:\+|plus|and)\s/iy
+const UNIT_END = /(?=$|[\s.,;:()])/y
+
+function readUnit(text: string, pos: number, options: QuantityParseOptions): { unit: UnitId; end: number } | null {
+  const lower = text.toLowerCase()
+  for (const u of UNIT_NAMES) {
+    const src = u.caseSensitive ? text : lower
+    if (!src.startsWith(u.name, pos)) continue
+    let end = pos + u.name.length
+    UNIT_END.lastIndex = end
+    if (!UNIT_END.test(text)) continue
+    if (text[end] === '.') end += 1 // "tbsp." "oz."
+    let unit = u.id
+    if (u.generic === 'cup' && options.cups === 'metric') unit = 'metric-cup'
+    if (u.generic === 'fluid' && options.fluid === 'imperial') unit = `imp-${u.id}` as UnitId
+    return { unit, end }
+  }
+  return null
+}
+
+function skipSpace(text: string, pos: number): number {
+  while (text[pos] === ' ') pos++
+  return pos
+}
+
+function readRange(text: string, pos: number): { min: number; max: number | null; end: number } | null {
+  const first = readAmountAt(text, pos)
+  if (!first) return null
+  RANGE.lastIndex = first.end
+  if (RANGE.exec(text)) {
+    const second = readAmountAt(text, RANGE.lastIndex)
+    if (second) return { min: first.value, max: second.value, end: second.end }
+  }
+  return { min: first.value, max: null, end: first.end }
+}
+
+/** Split at the first comma outside parentheses. */
+function splitPrep(rest: string): [string, string] {
+  let depth = 0
+  for (let i = 0; i < rest.length; i++) {
+    const ch = rest[i]
+    if (ch === '(') depth++
+    else if (ch === ')') depth = Math.max(0, depth - 1)
+    else if (ch === ',' && depth === 0) return [rest.slice(0, i), rest.slice(i + 1)]
+  }
+  return [rest, '']
+}
+
+const tidy = (s: string) => s.replace(/\(\s*[,;]?\s*\)/g, '').replace(/\s*,\s*(,\s*)+/g, ', ').replace(/\s+/g, ' ').replace(/^[\s,;:.-]+|[\s,;:]+$/g, '').trim()
+
+/** Read one ingredient line. Never throws on text; doubtful readings are listed in `warnings`. */
+export function parseQuantity(text: string, options: QuantityParseOptions = {}): ParsedQuantity {
+  const warnings: string[] = []
+  let s = normaliseAmountText(String(text ?? ''))
+  let optional = false
+  let toTaste = false
+  if (/\boptional\b/i.test(s)) {
+    optional = true
+    s = s.replace(/\boptional\b:?/gi, '')
+  }
+  const taste = /\b((?:or |and )?(?:more |less )?to taste)\b/i.exec(s)
+  if (taste) {
+    toTaste = true
+    s = s.replace(taste[0], '')
+  }
+  s = s.replace(/\(\s*[,;]?\s*\)/g, '').replace(/\s*,\s*(,\s*)+/g, ', ').replace(/\s+/g, ' ').replace(/^[\s,;:]+|[\s,;:]+$/g, '')
+
+  const qualifiers: string[] = []
+  let pos = 0
+  let min: number | null = null
+  let max: number | null = null
+  let unit: UnitId | null = null
+  let paren = ''
+  const parts: QuantityPart[] = []
+
+  QUALIFIERS.lastIndex = 0
+  const q = QUALIFIERS.exec(s)
+  const afterQualifier = q ? QUALIFIERS.lastIndex : 0
+  const range = readRange(s, afterQualifier)
+  if (range) {
+    if (q) qualifiers.push(q[1]!)
+    min = range.min
+    max = range.max ?? range.min
+    pos = skipSpace(s, range.end)
+    const p = /\([^()]*\)\s?/y
+    p.lastIndex = pos
+    const pm = p.exec(s)
+    if (pm) {
+      paren = pm[0].trim()
+      pos = p.lastIndex
+    }
+    UNIT_QUALIFIERS.lastIndex = pos
+    const uq = UNIT_QUALIFIERS.exec(s)
+    const u = readUnit(s, uq ? UNIT_QUALIFIERS.lastIndex : pos, options)
+    if (u) {
+      if (uq) qualifiers.push(uq[1]!)
+      unit = u.unit
+      pos = u.end
+      pos = readCompound(s, pos, unit, range.max !== null, parts, warnings, qualifiers, options, (extra) => {
+        min! += extra
+        max! += extra
+      }, () => ({ min: min!, max: max! }))
+      // "1 cup (250 mL) milk": a parenthesis after the unit also stays with the item
+      p.lastIndex = skipSpace(s, pos)
+      const pm2 = p.exec(s)
+      if (pm2) {
+        paren = [paren, pm2[0].trim()].filter(Boolean).join(' ')
+        pos = p.lastIndex
+      }
+    }
+  } else {
+    // "pinch of salt", "dash of vinegar": a counted unit with no number means one.
+    const u = readUnit(s, 0, options)
+    if (u && unitKind(u.unit) === 'count' && /^\s?of\b/i.test(s.slice(u.end))) {
+      min = max = 1
+      unit = u.unit
+      pos = u.end
+    }
+  }
+  if (/^\s?of\s/i.test(s.slice(pos))) pos = s.slice(pos).search(/of\s/i) + pos + 3
+
+  const [itemRaw, prepRaw] = splitPrep(s.slice(pos))
+  const item = tidy([itemRaw, paren].filter(Boolean).join(' '))
+  // With an amount, "to taste" is advice ("1 tsp salt, or to taste"): it stays in the prep note.
+  if (toTaste && min !== null) {
+    toTaste = false
+    qualifiers.push(taste![1]!)
+  }
+  const prep = tidy([prepRaw, ...qualifiers].filter(Boolean).join(', '))
+
+  if (min !== null && max !== null) {
+    if (!Number.isFinite(min) || !Number.isFinite(max)) {
+      warnings.push(`The amount in "${text}" could not be read as a number`)
+      min = max = null
+      unit = null
+    } else if (max < min) {
+      warnings.push(`The range in "${text}" runs downwards; read it as ${formatAmountExact(max)} to ${formatAmountExact(min)}`)
+      ;[min, max] = [max, min]
+    } else if (max === 0) warnings.push(`The amount in "${text}" is zero`)
+  }
+  if (!item) warnings.push(`"${text}" names no ingredient`)
+  return { text: String(text ?? ''), min, max, unit, item, prep: prep || null, optional, toTaste, parts, warnings }
+}
+
+/** "plus 2 tablespoons", "1 lb 4 oz": a second amount of the same kind, added in the first unit. */
+function readCompound(
+  s: string, pos: number, unit: UnitId, isRange: boolean, parts: QuantityPart[], warnings: string[],
+  qualifiers: string[], options: QuantityParseOptions, add: (extra: number) => void, current: () => { min: number; max: number },
+): number {
+  if (unitKind(unit) === 'count') return pos
+  COMPOUND.lastIndex = pos
+  const joined = COMPOUND.exec(s)
+  const start = joined ? COMPOUND.lastIndex : skipSpace(s, pos)
+  const amount = readAmountAt(s, start)
+  if (!amount) return pos
+  const u2 = readUnit(s, skipSpace(s, amount.end), options)
+  if (!u2 || u2.unit === unit || unitKind(u2.unit) === 'count') return pos
+  if (unitKind(u2.unit) !== unitKind(unit)) {
+    if (!joined) return pos
+    const piece = s.slice(pos, u2.end).trim()
+    warnings.push(`"${piece}" adds ${unitKind(u2.unit)} to ${unitKind(unit)}; kept it in the prep note`)
+    qualifiers.push(piece)
+    return u2.end
+  }
+  const first = current()
+  parts.push({ amount: isRange ? first.max : first.min, unit }, { amount: amount.value, unit: u2.unit })
+  add(convertAmount(amount.value, u2.unit, unit))
+  return u2.end
+}
+
+/** The amount and unit as written exactly: "1½ cups", "5–6", "2 tbsp", "" for no amount. */
+export function formatQuantityText(min: number | null, max: number | null, unit: UnitId | null): string {
+  if (min === null && max === null) return ''
+  const lo = min ?? max!
+  const hi = max ?? min!
+  const amount = lo === hi ? formatAmountExact(lo) : `${formatAmountExact(lo)}–${formatAmountExact(hi)}`
+  return unit ? `${amount} ${unitLabel(unit, hi)}` : amount
+}
+
+export interface IngredientLineParts {
+  min: number | null
+  max: number | null
+  unit: UnitId | null
+  item: string
+  prep?: string | null
+  optional?: boolean
+  toTaste?: boolean
+}
+
+/** One ingredient as a line that parseQuantity reads back the same: "2 onions, thinly sliced (optional)". */
+export function formatIngredientLine(ing: IngredientLineParts): string {
+  const amount = formatQuantityText(ing.min, ing.max, ing.unit)
+  let line = [amount, ing.item].filter(Boolean).join(' ')
+  if (ing.prep) line += `, ${ing.prep}`
+  if (ing.toTaste && ing.min === null) line += ', to taste'
+  if (ing.optional) line += ' (optional)'
+  return line
+}
