@@ -1,0 +1,93 @@
+// Who may send which shoot command, and reading a command from the wire. The server enforces
+// both; the screens use the same table to show only the controls a role may use.
+import {
+  SHOOT_COMMAND_TYPES, shootCommandSchema,
+  type ShootCommand, type ShootCommandError, type ShootCommandType, type ShootRole,
+} from '../types/shoot'
+
+const DRIVE: ShootRole[] = ['producer', 'host']
+const ON_SET: ShootRole[] = ['producer', 'host', 'camera']
+
+/**
+ * The roles of DESIGN.md: the producer may do everything; the host drives the shoot (start, pause,
+ * resume, advance, timers, markers) but neither ends it, sets the rehearsal speed nor the rolling
+ * flag; the camera adds markers and toggles rolling; a viewer only reads.
+ */
+export const SHOOT_COMMAND_ROLES: Readonly<Record<ShootCommandType, readonly ShootRole[]>> = {
+  'shoot.start': DRIVE,
+  'shoot.pause': DRIVE,
+  'shoot.resume': DRIVE,
+  'shoot.end': ['producer'],
+  'step.next': DRIVE,
+  'step.previous': DRIVE,
+  'step.jump': DRIVE,
+  'timer.start': DRIVE,
+  'timer.pause': DRIVE,
+  'timer.resume': DRIVE,
+  'timer.addTime': DRIVE,
+  'timer.cancel': DRIVE,
+  'timer.acknowledge': DRIVE,
+  'rolling.set': ['producer', 'camera'],
+  'clock.speed': ['producer'],
+  'marker.add': ON_SET,
+}
+
+/** What a command does, in words, for messages ("may not start timers"). */
+export const SHOOT_COMMAND_PHRASES: Readonly<Record<ShootCommandType, string>> = {
+  'shoot.start': 'start the shoot',
+  'shoot.pause': 'pause the shoot',
+  'shoot.resume': 'resume the shoot',
+  'shoot.end': 'end the shoot',
+  'step.next': 'move to the next step',
+  'step.previous': 'move to the previous step',
+  'step.jump': 'jump to a step',
+  'timer.start': 'start timers',
+  'timer.pause': 'pause timers',
+  'timer.resume': 'resume timers',
+  'timer.addTime': 'change the time on timers',
+  'timer.cancel': 'cancel timers',
+  'timer.acknowledge': 'acknowledge alarms',
+  'rolling.set': 'set the camera rolling flag',
+  'clock.speed': 'change the rehearsal speed',
+  'marker.add': 'add markers',
+}
+
+export function isShootCommandType(type: unknown): type is ShootCommandType {
+  return typeof type === 'string' && (SHOOT_COMMAND_TYPES as readonly string[]).includes(type)
+}
+
+/** Whether a role may send a command type; false for anything unknown. */
+export function shootCommandAllowed(role: ShootRole | string, commandType: ShootCommandType | string): boolean {
+  if (!isShootCommandType(commandType)) return false
+  return (SHOOT_COMMAND_ROLES[commandType] as readonly string[]).includes(role)
+}
+
+const ROLE_WORDS: Record<ShootRole, string> = {
+  producer: 'the producer', host: 'the host', camera: 'a camera operator', viewer: 'a viewer',
+}
+
+/** The refusal for a role that may not send a command: who may instead. */
+export function shootCommandForbiddenMessage(role: ShootRole | string, commandType: ShootCommandType): string {
+  const who = ROLE_WORDS[role as ShootRole] ?? `the role "${role}"`
+  const allowed = SHOOT_COMMAND_ROLES[commandType].map((r) => ROLE_WORDS[r])
+  const list = allowed.length > 1 ? `${allowed.slice(0, -1).join(', ')} or ${allowed.at(-1)}` : allowed[0]
+  const text = `${who} may not ${SHOOT_COMMAND_PHRASES[commandType]}; ${list} may`
+  return text.charAt(0).toUpperCase() + text.slice(1) + '.'
+}
+
+export type ShootCommandParse = { ok: true; command: ShootCommand } | { ok: false; error: ShootCommandError }
+
+/** Reads a command from untrusted input; the error names the field at fault and what to send. */
+export function parseShootCommand(input: unknown): ShootCommandParse {
+  const parsed = shootCommandSchema.safeParse(input)
+  if (parsed.success) return { ok: true, command: parsed.data }
+  const issue = parsed.error.issues[0]!
+  const field = issue.path.map(String).join('.') || 'command'
+  if (issue.code === 'invalid_union' && field === 'type') {
+    const type = (input as { type?: unknown } | null)?.type
+    const said = type === undefined ? 'a command needs a type' : `"${String(type)}" is not a shoot command`
+    return { ok: false, error: { code: 'invalid', field, message: `type: ${said}; use one of ${SHOOT_COMMAND_TYPES.join(', ')}` } }
+  }
+  const message = issue.message.startsWith(field) ? issue.message : `${field}: ${issue.message}`
+  return { ok: false, error: { code: 'invalid', field, message } }
+}
