@@ -1,0 +1,88 @@
+// Shoot timers as deadlines. A running timer is a deadline on the server clock and the speed it
+// runs at (kitchen ms per server ms, see shoot-clock.ts); what is left is always drawn from the
+// deadline, never counted down. A paused timer keeps its kitchen time left.
+import type { ShootState, ShootTimer } from '../types/shoot'
+
+/** Running, paused or due: a timer that still holds its slot and needs someone's attention. */
+export function isShootTimerLive(timer: ShootTimer): boolean {
+  return timer.state === 'running' || timer.state === 'paused' || timer.state === 'due'
+}
+
+/**
+ * Kitchen time left on a timer at a server time, in ms: (deadline − now) × speed while running,
+ * the stored remainder while paused, 0 once due, acknowledged or cancelled. On a screen pass
+ * serverNow(local now, offset) as the time.
+ */
+export function timerRemainingMs(timer: ShootTimer, nowServerMs: number): number {
+  if (timer.state === 'running' && timer.deadlineServerMs !== null) {
+    return Math.max(0, (timer.deadlineServerMs - nowServerMs) * timer.speed)
+  }
+  if (timer.state === 'paused') return timer.remainingMs ?? 0
+  return 0
+}
+
+/** How long a due timer has been ringing, in server ms (0 for any other timer). */
+export function timerOverdueMs(timer: ShootTimer, nowServerMs: number): number {
+  if (timer.state !== 'due' || timer.dueAtServerMs === null) return 0
+  return Math.max(0, nowServerMs - timer.dueAtServerMs)
+}
+
+/**
+ * Which ring of a repeating alarm a due timer is on: 0 when it falls due, 1 after repeatEveryMs,
+ * and so on until acknowledged; null when it is not due. Every screen derives the same number from
+ * the server time, so repeats ring together and a reloaded screen picks up where the others are.
+ */
+export function timerAlarmRound(timer: ShootTimer, nowServerMs: number, repeatEveryMs: number): number | null {
+  if (!(repeatEveryMs > 0)) throw new RangeError(`an alarm repeats after a positive time (got ${repeatEveryMs} ms)`)
+  if (timer.state !== 'due') return null
+  return Math.floor(timerOverdueMs(timer, nowServerMs) / repeatEveryMs)
+}
+
+/** A timer paused at a server time, keeping its kitchen time left (rounded up to the ms, so a timer
+ * that has not rung never keeps 0 left). */
+export function shootTimerPausedAt(timer: ShootTimer, nowServerMs: number, heldByShoot = false): ShootTimer {
+  return {
+    ...timer,
+    state: 'paused',
+    remainingMs: Math.ceil(timerRemainingMs(timer, nowServerMs)),
+    deadlineServerMs: null,
+    heldByShoot,
+  }
+}
+
+/** A timer running from a server time with a kitchen time left, at a clock speed. */
+export function shootTimerRunningFrom(timer: ShootTimer, nowServerMs: number, remainingMs: number, speed: number): ShootTimer {
+  return {
+    ...timer,
+    state: 'running',
+    deadlineServerMs: nowServerMs + remainingMs / speed,
+    remainingMs: null,
+    speed,
+    heldByShoot: false,
+    dueAtServerMs: null,
+    acknowledgedBy: null,
+    acknowledgedAtServerMs: null,
+  }
+}
+
+/** A timer due at a server time (its deadline, or now when time was taken off). */
+export function shootTimerDueAt(timer: ShootTimer, dueAtServerMs: number): ShootTimer {
+  return { ...timer, state: 'due', deadlineServerMs: dueAtServerMs, remainingMs: null, heldByShoot: false, dueAtServerMs }
+}
+
+/**
+ * Marks every running timer whose deadline has passed as due, at its deadline (so a timer that
+ * expired while the server was down is due from when it expired). Returns the same state object
+ * when nothing fell due; otherwise a new state with seq raised by one, and the newly due timers.
+ */
+export function markDueTimers(state: ShootState, nowServerMs: number): { state: ShootState; due: ShootTimer[] } {
+  const due: ShootTimer[] = []
+  const timers = state.timers.map((t) => {
+    if (t.state !== 'running' || t.deadlineServerMs === null || t.deadlineServerMs > nowServerMs) return t
+    const marked = shootTimerDueAt(t, t.deadlineServerMs)
+    due.push(marked)
+    return marked
+  })
+  if (due.length === 0) return { state, due }
+  return { state: { ...state, timers, seq: state.seq + 1 }, due }
+}
