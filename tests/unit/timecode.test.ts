@@ -109,16 +109,23 @@ describe('against FFmpeg libavutil/timecode.c as an oracle (fast-check)', () => 
       it(`${fps} fps ${drop ? 'drop-frame' : 'non-drop'}: same label for any frame over two days`, () => {
         fc.assert(fc.property(fc.integer({ min: 0, max: 2 * 86_400 * 60 }), (frames) => {
           expect(framesToTimecode(frames, rate)).toBe(ffmpegMakeString(frames, ROUNDED[fps]!, drop))
-        }), { numRuns: 2000 })
+        }), { numRuns: 1000 })
       })
     }
   }
   it('29.97 drop-frame: same label for every frame of the first 20 minutes and around each minute', () => {
-    for (let f = 0; f < 2 * 17_982; f++) expect(framesToTimecode(f, DF2997)).toBe(ffmpegMakeString(f, 30, true))
+    const differ: string[] = []
+    const check = (f: number) => {
+      const ours = framesToTimecode(f, DF2997)
+      const theirs = ffmpegMakeString(f, 30, true)
+      if (ours !== theirs) differ.push(`${f}: ${ours} ≠ ${theirs}`)
+    }
+    for (let f = 0; f < 2 * 17_982; f++) check(f)
     for (let minute = 1; minute < 1440; minute++) {
       const at = timecodeToFrames(`${String(Math.floor(minute / 60)).padStart(2, '0')}:${String(minute % 60).padStart(2, '0')}:00;${minute % 10 ? '02' : '00'}`, DF2997)
-      for (let f = at - 3; f <= at + 3; f++) expect(framesToTimecode(f, DF2997)).toBe(ffmpegMakeString(f, 30, true))
+      for (let f = at - 3; f <= at + 3; f++) check(f)
     }
+    expect(differ).toEqual([])
   })
   it('label → frames → label is the identity over a day, at every rate', () => {
     for (const rate of [DF2997, DF5994, { fps: 25 }, { fps: 23.976 }, { fps: 60 }] as TimecodeRate[]) {
