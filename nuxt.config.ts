@@ -19,6 +19,11 @@ export default defineNuxtConfig({
     },
   },
   runtimeConfig: {
+    // nuxt-auth-utils: sealed cookie, HttpOnly, SameSite=Lax, Secure outside dev (NUXT_SESSION_COOKIE_SECURE).
+    session: {
+      maxAge: 60 * 60 * 24 * 14,
+      cookie: { sameSite: 'lax', httpOnly: true, secure: process.env.NODE_ENV === 'production' },
+    },
     // Overridden by NUXT_DATABASE_PATH.
     databasePath: '.data/hobline.sqlite',
     // Overridden by NUXT_DATABASE_SEED: 'auto' seeds an empty database in dev, 'always' seeds an empty database anywhere, 'never' never.

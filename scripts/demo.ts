@@ -2,7 +2,7 @@
 import { spawn, spawnSync } from 'node:child_process'
 import { randomBytes } from 'node:crypto'
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs'
-import { demoStudio } from '../server/db/demo'
+import { DEMO_PASSWORD, demoCrew, demoStudio } from '../server/db/demo'
 import { databasePath } from './env'
 
 const port = process.env.PORT || '3000'
@@ -38,6 +38,8 @@ for (let i = 0; i < 120; i++) {
   if (health?.status === 'ok') {
     console.log(`\nHobline is running at ${url}`)
     console.log(`Demo studio: ${demoStudio.name} (database ${databasePath})`)
+    console.log(`Demo accounts, all with the password ${DEMO_PASSWORD}:`)
+    for (const person of demoCrew) console.log(`  ${person.role.padEnd(9)} ${person.email}  (${person.name})`)
     console.log('Stop with Ctrl+C.\n')
     break
   }

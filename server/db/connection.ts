@@ -1,5 +1,6 @@
 // Opens Hobline's SQLite database through Sequelize. Plain Node: no Nitro auto-imports here, so the
 // migrate and seed scripts can use it too.
+import { AsyncLocalStorage } from 'node:async_hooks'
 import { mkdirSync } from 'node:fs'
 import { dirname, resolve } from 'node:path'
 import { QueryTypes, Sequelize, Transaction } from 'sequelize'
@@ -8,6 +9,21 @@ import sqlite3 from 'sqlite3'
 export const BUSY_TIMEOUT_MS = 5000
 
 type Sqlite3Connection = sqlite3.Database & { hoblineConfigured?: boolean }
+
+// Every query made inside `sequelize.transaction(async () => …)` joins that transaction without
+// passing `{ transaction }` by hand: Sequelize 6 looks the transaction up in a "CLS namespace",
+// provided here on Node's AsyncLocalStorage (get/set/run/bind is all Sequelize calls).
+// Without it, a query outside the transaction would wait on the transaction's own write lock.
+const transactionContext = new AsyncLocalStorage<Map<string, unknown>>()
+Sequelize.useCLS({
+  get: (key: string) => transactionContext.getStore()?.get(key),
+  set: (key: string, value: unknown) => transactionContext.getStore()?.set(key, value),
+  run: (fn: (context: Map<string, unknown>) => unknown) => {
+    const context = new Map(transactionContext.getStore())
+    return transactionContext.run(context, () => fn(context))
+  },
+  bind: <F>(fn: F) => fn,
+} as unknown as Parameters<typeof Sequelize.useCLS>[0])
 
 export function resolveDatabasePath(path: string): string {
   return path === ':memory:' ? path : resolve(path)

@@ -1,7 +1,19 @@
-// The demo studio. Every name, dish and price here is invented.
+// The demo studio and its crew. Every name, address and password here is invented; the addresses
+// use the reserved .test domain, so no mail to them can reach anyone.
+import type { StudioRole } from '../../shared/utils/roles'
+
 export const demoStudio = {
   name: 'Brackenford Test Kitchen',
   slug: 'brackenford',
   locale: 'en-GB',
   currency: 'GBP',
 }
+
+export const DEMO_PASSWORD = 'hob-demo-2026'
+
+export const demoCrew: { name: string; email: string; role: StudioRole }[] = [
+  { name: 'Ines Marrow', email: 'producer@brackenford.test', role: 'producer' },
+  { name: 'Tobiah Quill', email: 'host@brackenford.test', role: 'host' },
+  { name: 'Wren Adeyemi-Holt', email: 'camera@brackenford.test', role: 'camera' },
+  { name: 'Saoirse Lindqvist', email: 'viewer@brackenford.test', role: 'viewer' },
+]

@@ -1,22 +1,29 @@
-// Demo data: an invented studio. Runs in one transaction and only on an empty database, so running it
-// twice, or killing it half-way, never leaves a half-seeded studio behind.
+// Demo data: an invented studio and its crew, one account per role. Runs in one transaction and only
+// on an empty database, so running it twice, or killing it half-way, never leaves half a studio.
 import type { Sequelize } from 'sequelize'
-import { demoStudio } from './demo'
-import { Studio } from './models'
+import { DEMO_PASSWORD, demoCrew, demoStudio } from './demo'
+import { Membership, Studio, User } from './models'
 
 export interface SeedResult {
   seeded: boolean
   studio: string
 }
 
+export type PasswordHasher = (password: string) => Promise<string>
+
 export async function isEmpty(): Promise<boolean> {
   return (await Studio.count()) === 0
 }
 
-export async function seedDemo(sequelize: Sequelize): Promise<SeedResult> {
-  return sequelize.transaction(async (transaction) => {
-    if ((await Studio.count({ transaction })) > 0) return { seeded: false, studio: demoStudio.name }
-    await Studio.create({ ...demoStudio }, { transaction })
+export async function seedDemo(sequelize: Sequelize, hashPassword: PasswordHasher): Promise<SeedResult> {
+  const passwordHash = await hashPassword(DEMO_PASSWORD)
+  return sequelize.transaction(async () => {
+    if ((await Studio.count()) > 0) return { seeded: false, studio: demoStudio.name }
+    const studio = await Studio.create({ ...demoStudio })
+    for (const person of demoCrew) {
+      const user = await User.create({ name: person.name, email: person.email, passwordHash })
+      await Membership.create({ userId: user.id, studioId: studio.id, role: person.role })
+    }
     return { seeded: true, studio: demoStudio.name }
   })
 }

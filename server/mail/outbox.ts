@@ -4,16 +4,17 @@ import { Mail } from '../db/models'
 
 export const OUTBOX_PAGE_MAX = 100
 
-const wholeNumber = (what: string, min: number, max?: number) => {
+// The message follows the field's name (server/utils/validate.ts puts "limit: " in front).
+const wholeNumber = (min: number, max?: number) => {
   const range = max === undefined ? `${min} or more` : `from ${min} to ${max}`
-  const message = `${what} must be a whole number ${range}.`
+  const message = `must be a whole number ${range}.`
   const base = z.coerce.number({ error: message }).int(message).min(min, message)
   return max === undefined ? base : base.max(max, message)
 }
 
 export const outboxQuerySchema = z.object({
-  limit: wholeNumber('limit', 1, OUTBOX_PAGE_MAX).default(50),
-  offset: wholeNumber('offset', 0).default(0),
+  limit: wholeNumber(1, OUTBOX_PAGE_MAX).default(50),
+  offset: wholeNumber(0).default(0),
 })
 
 export interface OutboxEntry {

@@ -31,6 +31,24 @@ describe('connection', () => {
   })
 })
 
+describe('transactions', () => {
+  it('carry every query made inside them without passing the transaction by hand, and roll back together', async () => {
+    const sequelize = await openDatabase(tempDatabasePath('cls'))
+    open.push(sequelize)
+    await migrate(sequelize)
+    const insert = (slug: string) => sequelize.query("INSERT INTO studios (name, slug, locale, currency, created_at, updated_at) VALUES ('K', ?, 'en-GB', 'GBP', datetime('now'), datetime('now'))", { replacements: [slug] })
+    await sequelize.transaction(async () => {
+      await insert('kept')
+    })
+    await expect(sequelize.transaction(async () => {
+      await insert('rolled-back')
+      throw new Error('undo')
+    })).rejects.toThrow('undo')
+    const rows = await sequelize.query<{ slug: string }>('SELECT slug FROM studios ORDER BY slug', { type: QueryTypes.SELECT })
+    expect(rows.map((r) => r.slug)).toEqual(['kept'])
+  })
+})
+
 describe('migrations', () => {
   it('apply every migration once, and a second run applies nothing', async () => {
     const sequelize = await openDatabase(tempDatabasePath('migrate'))
@@ -76,9 +94,11 @@ describe('seeding', () => {
     const { sequelize, seeded } = await startDatabase(tempDatabasePath('seed'), true)
     open.push(sequelize)
     expect(seeded).toBe(true)
-    expect((await seedDemo(sequelize)).seeded).toBe(false)
+    expect((await seedDemo(sequelize, async () => 'unused')).seeded).toBe(false)
     const rows = await sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM studios', { type: QueryTypes.SELECT })
     expect(rows[0]?.n).toBe(1)
+    const crew = await sequelize.query<{ role: string }>('SELECT role FROM memberships ORDER BY role', { type: QueryTypes.SELECT })
+    expect(crew.map((c) => c.role)).toEqual(['camera', 'host', 'producer', 'viewer'])
   })
 })
 

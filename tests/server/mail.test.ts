@@ -200,15 +200,16 @@ describe('local SMTP catcher', () => {
     expect(outboxQuerySchema.parse({})).toEqual({ limit: 50, offset: 0 })
     expect(outboxQuerySchema.parse({ limit: '5', offset: '10' })).toEqual({ limit: 5, offset: 10 })
     for (const [query, message] of [
-      [{ limit: '0' }, 'limit must be a whole number from 1 to 100.'],
-      [{ limit: '101' }, 'limit must be a whole number from 1 to 100.'],
-      [{ limit: 'lots' }, 'limit must be a whole number from 1 to 100.'],
-      [{ offset: '-1' }, 'offset must be a whole number 0 or more.'],
-      [{ offset: '1.5' }, 'offset must be a whole number 0 or more.'],
+      [{ limit: '0' }, 'must be a whole number from 1 to 100.'],
+      [{ limit: '101' }, 'must be a whole number from 1 to 100.'],
+      [{ limit: 'lots' }, 'must be a whole number from 1 to 100.'],
+      [{ offset: '-1' }, 'must be a whole number 0 or more.'],
+      [{ offset: '1.5' }, 'must be a whole number 0 or more.'],
     ] as const) {
       const result = outboxQuerySchema.safeParse(query)
       expect(result.success).toBe(false)
       expect(result.error?.issues[0]?.message).toBe(message)
+      expect(result.error?.issues[0]?.path).toEqual(Object.keys(query))
     }
   })
 
@@ -248,8 +249,8 @@ describe('built app: mail catcher and outbox routes', async () => {
     expect(rows).toEqual([{ studio_id: studio!.id, kind: 'invite', subject: invite().subject }])
   })
 
-  it('refuses the outbox to a signed-out caller with 401', async () => {
-    for (const path of ['/api/studios/1/outbox', '/api/studios/1/outbox/1']) {
+  it('refuses the outbox to a signed-out caller with 401, before looking at the mail id', async () => {
+    for (const path of ['/api/studios/1/outbox', '/api/studios/1/outbox/1', '/api/studios/1/outbox/abc']) {
       const res = await fetch(path)
       expect(res.status).toBe(401)
       expect((await res.json()).message).toBe('Sign in first.')

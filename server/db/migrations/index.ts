@@ -2,6 +2,9 @@
 // here by name. Add new ones at the end; never edit one that has shipped.
 import type { QueryInterface, Sequelize, Transaction } from 'sequelize'
 import m0001 from './0001-studios'
+import m0002 from './0002-accounts'
+import m0003 from './0003-mail'
+import m0004 from './0004-join-codes'
 
 export interface MigrationContext {
   queryInterface: QueryInterface
@@ -16,4 +19,4 @@ export interface Migration {
   down: (ctx: MigrationContext) => Promise<void>
 }
 
-export const migrations: Migration[] = [m0001]
+export const migrations: Migration[] = [m0001, m0002, m0003, m0004]

@@ -1,9 +1,23 @@
-// Every model, initialised once on the process's Sequelize instance.
+// Every model, initialised once on the process's Sequelize instance, with their associations.
 import type { Sequelize } from 'sequelize'
+import { Invite, Membership, PasswordReset, User, initAccountModels } from './account'
+import { Mail, initMailModel } from './mail'
+import { JoinCode, Shoot, initShootModels } from './shoot'
 import { Studio, initStudio } from './studio'
 
-export { Studio }
+export { Invite, JoinCode, Mail, Membership, PasswordReset, Shoot, Studio, User }
 
 export function initModels(sequelize: Sequelize) {
   initStudio(sequelize)
+  initAccountModels(sequelize)
+  initShootModels(sequelize)
+  initMailModel(sequelize)
+
+  User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' })
+  Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' })
+  Studio.hasMany(Membership, { foreignKey: 'studioId', as: 'memberships' })
+  Membership.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' })
+  Invite.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' })
+  JoinCode.belongsTo(Shoot, { foreignKey: 'shootId', as: 'shoot' })
+  Mail.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' })
 }

@@ -1,0 +1,117 @@
+// The cook plan (shared/utils/plan.ts): time to plan episodes of 60, 500 and 2,000 steps against the
+// critical path method alone on the same steps (the baseline, measured in the same run), and the
+// average optimality gap on a fixed set of small random plans against exhaustive search
+// (plan-exact.ts), with the latest-start rule alone, no justification, as the baseline.
+import { planCriticalPath, planCook } from '../shared/utils/plan'
+import { planCriticalTimes } from '../shared/utils/plan-cpm'
+import { planCookExhaustive } from '../shared/utils/plan-exact'
+import { planBuildNetwork } from '../shared/utils/plan-network'
+import { planSerialSchedule } from '../shared/utils/plan-sgs'
+import type { PlanInput, PlanStation, PlanStep } from '../shared/utils/plan-types'
+import { percentile, type Benchmark } from './types'
+
+function seeded(seed: number) {
+  let a = seed >>> 0
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0
+    let t = a
+    t = Math.imul(t ^ (t >>> 15), t | 1)
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
+  }
+}
+
+/** An episode of `count` steps in recipes of 6–14 steps: prep, pans, ovens, rests, a few ties. */
+export function planBenchEpisode(count: number, seed = 1): PlanInput {
+  const random = seeded(seed)
+  const pick = <T>(xs: T[]) => xs[Math.floor(random() * xs.length)]!
+  const steps: PlanStep[] = []
+  for (let r = 0; steps.length < count; r++) {
+    const size = Math.min(count - steps.length, 6 + Math.floor(random() * 9))
+    const first = steps.length
+    for (let k = 0; k < size; k++) {
+      const handsOn = random() < 0.55
+      const station: PlanStation | null = handsOn ? pick<PlanStation | null>(['counter', 'counter', 'burner', null]) : pick<PlanStation | null>(['burner', 'burner', 'oven', null])
+      const duration = 60 * (handsOn ? 1 + Math.floor(random() * 10) : 5 + Math.floor(random() * 40))
+      const step: PlanStep = { id: `r${r}s${k}`, label: `recipe ${r} step ${k}`, recipe: `r${r}`, duration, handsOn, station, links: [] }
+      if (k > 0) {
+        const from = steps[first + Math.max(0, k - 1 - Math.floor(random() * 3))]!
+        const roll = random()
+        if (roll < 0.06 && !handsOn && station === null && from.duration >= duration) step.links!.push({ from: from.id, kind: 'finish-together' })
+        else if (roll < 0.15) step.links!.push({ from: from.id, kind: 'start-start', lag: 60 * Math.floor(random() * 5) })
+        else step.links!.push({ from: from.id })
+        if (k > 2 && random() < 0.3) step.after = [steps[first + Math.floor(random() * (k - 1))]!.id].filter((id) => id !== from.id)
+      }
+      steps.push(step)
+    }
+  }
+  return { steps, kitchen: count > 100 ? { hands: 2, burners: 4, ovens: 2, racksPerOven: 2 } : { hands: 1, burners: 4, ovens: 1, racksPerOven: 2 } }
+}
+
+/** A small random plan, 6–8 steps, in a tight kitchen so that capacity matters. */
+export function planBenchSmall(seed: number): PlanInput {
+  const random = seeded(seed)
+  const n = 6 + Math.floor(random() * 3)
+  const steps: PlanStep[] = []
+  for (let j = 0; j < n; j++) {
+    const handsOn = random() < 0.5
+    const station = [null, 'burner', 'oven', 'counter'][Math.floor(random() * 4)] as PlanStation | null
+    const step: PlanStep = { id: `s${j}`, duration: 60 * (1 + Math.floor(random() * 12)), handsOn, station, links: [] }
+    for (let i = 0; i < j; i++) {
+      if (random() < 0.25) step.links!.push(random() < 0.75 ? { from: `s${i}` } : { from: `s${i}`, kind: 'start-start', lag: 60 * Math.floor(random() * 4) })
+    }
+    steps.push(step)
+  }
+  return { steps, kitchen: { hands: 1, burners: 1 + Math.floor(random() * 2), ovens: 1, racksPerOven: 1, counters: random() < 0.5 ? 1 : undefined } }
+}
+
+function timed(run: () => unknown, rounds: number): number[] {
+  for (let i = 0; i < 2; i++) run()
+  const times: number[] = []
+  for (let i = 0; i < rounds; i++) {
+    const t0 = performance.now()
+    run()
+    times.push(performance.now() - t0)
+  }
+  return times
+}
+
+function planTime(count: number, rounds: number, bound: number): Benchmark {
+  return {
+    name: `plan: ${count.toLocaleString('en')} steps, p50`,
+    async run() {
+      const input = planBenchEpisode(count)
+      const plan = planCook(input)
+      const figure = percentile(timed(() => planCook(input), rounds), 50)
+      const baseline = percentile(timed(() => planCriticalPath(input), rounds), 50)
+      const gap = (plan.bounds.gap * 100).toFixed(1)
+      return { figure, unit: 'ms', baseline, bound, note: `${rounds} runs; baseline: critical path method alone; makespan ${gap} % over the lower bound; best rule: ${plan.rule}` }
+    },
+  }
+}
+
+const SMALL = 40
+
+export const planOptimalityGap: Benchmark = {
+  name: 'plan: optimality gap on small random plans, average',
+  async run() {
+    let gap = 0
+    let single = 0
+    let optimal = 0
+    for (let seed = 1; seed <= SMALL; seed++) {
+      const input = planBenchSmall(seed)
+      const best = planCookExhaustive(input).makespan
+      const plan = planCook(input).makespan
+      const net = planBuildNetwork(input)
+      const times = planCriticalTimes(net)
+      const S = planSerialSchedule(net, times.ls, times.es)!
+      const lst = Math.max(...net.dur.map((d, v) => S[v]! + d)) / 1000
+      gap += (plan - best) / best
+      single += (lst - best) / best
+      if (plan === best) optimal++
+    }
+    return { figure: (100 * gap) / SMALL, unit: '%', baseline: (100 * single) / SMALL, bound: 5, note: `${SMALL} plans of 6–8 steps against exhaustive search; optimal in ${optimal}; baseline: latest-start rule alone` }
+  },
+}
+
+export const planBenchmarks: Benchmark[] = [planTime(60, 40, 5), planTime(500, 10, 50), planTime(2000, 5, 200), planOptimalityGap]

@@ -1,0 +1,15 @@
+// Public. Always the same answer, so it cannot tell whether an address has an account.
+export default defineEventHandler(async (event) => {
+  const { email } = await validateBody(event, resetRequestBodySchema)
+  const key = `reset:${email}`
+  assertUnderLimit(event, key, 3, `reset mails for ${email}`)
+  countAttempt(key)
+  const reset = await requestPasswordReset(email)
+  if (reset) {
+    const link = `${siteUrl(event)}/reset/${reset.token}`
+    const mail = passwordResetMail({ name: reset.user.name, link, expiresAt: reset.expiresAt })
+    await sendMail({ ...mail, to: reset.user.email, kind: 'password-reset' })
+  }
+  setResponseStatus(event, 202)
+  return { sent: true, message: 'If that address has a Hobline account, a reset link is on its way. It works once, for one hour.' }
+})

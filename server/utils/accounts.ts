@@ -1,0 +1,115 @@
+// Accounts: users, their memberships, sign-in and password resets. Route handlers stay thin and
+// call these; these return plain objects, never Sequelize instances.
+import type { H3Event } from 'h3'
+import type { UserSession } from '#auth-utils'
+import type { Transaction } from 'sequelize'
+import { Membership, PasswordReset, Studio, User } from '../db/models'
+import { passwordProblem } from '../../shared/utils/password-policy'
+import type { StudioRole } from '../../shared/utils/roles'
+
+export const RESET_LIFETIME_MS = 60 * 60 * 1000
+
+export interface MembershipView {
+  studioId: number
+  studioName: string
+  role: StudioRole
+}
+
+export function publicUser(user: User) {
+  return { id: user.id, name: user.name, email: user.email }
+}
+
+export function assertPasswordAllowed(password: string, email: string) {
+  const problem = passwordProblem(password, email)
+  if (problem) throw createError({ statusCode: 400, statusMessage: `password: ${problem}`, data: { field: 'password' } })
+}
+
+export async function membershipsOf(userId: number): Promise<MembershipView[]> {
+  const rows = await Membership.findAll({ where: { userId }, include: [{ model: Studio, as: 'studio', attributes: ['id', 'name'] }], order: [['id', 'ASC']] })
+  return rows.map((m) => {
+    const studio = (m as Membership & { studio: Studio }).studio
+    return { studioId: studio.id, studioName: studio.name, role: m.role }
+  })
+}
+
+export function slugFor(name: string): string {
+  const base = name.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 60) || 'studio'
+  return `${base}-${Math.random().toString(36).slice(2, 8)}`
+}
+
+export async function createUser(input: { name: string; email: string; password: string }, transaction: Transaction): Promise<User> {
+  assertPasswordAllowed(input.password, input.email)
+  if (await User.findOne({ where: { email: input.email }, transaction })) {
+    throw createError({ statusCode: 409, statusMessage: 'email: An account with this e-mail address already exists. Sign in instead, or reset the password.', data: { field: 'email' } })
+  }
+  return User.create({ name: input.name, email: input.email, passwordHash: await hashPassword(input.password) }, { transaction })
+}
+
+export async function signUp(input: { name: string; email: string; password: string; studioName: string }) {
+  const sequelize = await useDb()
+  return sequelize.transaction(async (transaction) => {
+    const user = await createUser(input, transaction)
+    const studio = await Studio.create({ name: input.studioName, slug: slugFor(input.studioName) }, { transaction })
+    await Membership.create({ userId: user.id, studioId: studio.id, role: 'producer' }, { transaction })
+    return { user: publicUser(user), studioId: studio.id }
+  })
+}
+
+// A real scrypt hash of a random string, so an unknown e-mail costs the same time as a wrong password.
+let decoyHash: Promise<string> | undefined
+
+export async function checkCredentials(email: string, password: string): Promise<User | null> {
+  await useDb()
+  const user = await User.findOne({ where: { email } })
+  if (!user) {
+    decoyHash ??= hashPassword(crypto.randomUUID())
+    await verifyPassword(await decoyHash, password)
+    return null
+  }
+  return (await verifyPassword(user.passwordHash, password)) ? user : null
+}
+
+/**
+ * A new session with a new id, whatever cookie the request brought (no session fixation).
+ * h3's session update re-reads the request's cookie after a clear and would keep its id, so the
+ * incoming session cookie is dropped from this request before the new session is written.
+ */
+export async function startFreshSession(event: H3Event, data: Omit<UserSession, 'id'>) {
+  await clearUserSession(event)
+  const name = useRuntimeConfig().session.name || 'nuxt-session'
+  const cookies = (event.node.req.headers.cookie ?? '').split(';').filter((c) => !c.trim().startsWith(`${name}=`))
+  event.node.req.headers.cookie = cookies.join(';')
+  await setUserSession(event, data)
+}
+
+export async function startMemberSession(event: H3Event, user: User, studioId?: number) {
+  await startFreshSession(event, { user: publicUser(user), studioId, loggedInAt: Date.now() })
+}
+
+export async function requestPasswordReset(email: string): Promise<{ user: User; token: string; expiresAt: Date } | null> {
+  await useDb()
+  const user = await User.findOne({ where: { email } })
+  if (!user) return null
+  const { token, hash } = newToken()
+  const expiresAt = new Date(Date.now() + RESET_LIFETIME_MS)
+  await PasswordReset.create({ userId: user.id, tokenHash: hash, expiresAt })
+  return { user, token, expiresAt }
+}
+
+export async function resetPassword(token: string, password: string) {
+  const sequelize = await useDb()
+  return sequelize.transaction(async (transaction) => {
+    const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) }, transaction })
+    if (!reset || reset.usedAt || reset.expiresAt.getTime() < Date.now()) {
+      throw createError({ statusCode: 410, statusMessage: 'This reset link has expired or was already used. Ask for a new one from the sign-in page.' })
+    }
+    const user = await User.findByPk(reset.userId, { transaction })
+    if (!user) throw createError({ statusCode: 410, statusMessage: 'The account for this link no longer exists.' })
+    assertPasswordAllowed(password, user.email)
+    user.passwordHash = await hashPassword(password)
+    await user.save({ transaction })
+    // This link and every other open link for the account stop working.
+    await PasswordReset.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: null }, transaction })
+    return publicUser(user)
+  })
+}

@@ -1,0 +1,79 @@
+// A recipe as Hobline edits, imports, exports, scales and costs it: plain, serialisable data
+// (JSON-safe: strings, numbers, booleans, null, arrays), stored by the server as it is.
+// Amounts are kept as the recipe states them (1½ cup) and converted only for display or maths.
+import type { IngredientAllergens } from '../utils/allergens'
+import type { CautionId } from '../utils/cautions'
+import type { UnitId } from '../utils/units'
+
+export type RecipeStation = 'burner' | 'oven' | 'counter'
+
+export interface RecipeIngredientDraft {
+  /** Stable within the recipe; step text names it as {{key}} (see step-text.ts). Letters, digits, "-" and "_". */
+  key: string
+  /** 1-based order in the recipe. */
+  position: number
+  /** The amount as a range; equal for a single amount; both null for no amount ("to taste"). */
+  min: number | null
+  max: number | null
+  unit: UnitId | null
+  item: string
+  /** Prep note: "thinly sliced". */
+  prep: string | null
+  optional: boolean
+  /** True for "salt, to taste": no amount, and the line says so. */
+  toTaste: boolean
+  /** Ingredient group heading: "For the sauce". */
+  group: string | null
+  allergens: IngredientAllergens
+  /** The studio price this ingredient is costed with. */
+  priceId?: string | null
+}
+
+export interface RecipeStepDraft {
+  /** 1-based order in the recipe. */
+  position: number
+  /** What to do. May name ingredients as {{key}} tokens, which follow the scale. */
+  text: string
+  /** What to say on camera, one line each. */
+  script: string[]
+  /** Hands-on (true) or unattended wait (false). */
+  handsOn: boolean
+  /** Duration as a range in seconds; both null for none. */
+  durationMin: number | null
+  durationMax: number | null
+  station: RecipeStation | null
+  /** Positions of earlier steps this one waits for. */
+  after: number[]
+  cameraShot: string | null
+  cameraNote: string | null
+  cautions: CautionId[]
+  /** Step group (a schema.org HowToSection name): "Make the sauce". */
+  group: string | null
+}
+
+export interface RecipeTimes {
+  /** Seconds, from schema.org prepTime, cookTime, totalTime. */
+  prep: number | null
+  cook: number | null
+  total: number | null
+}
+
+export interface RecipeDraft {
+  title: string
+  summary: string | null
+  /** Yield in servings, a positive number. */
+  servings: number
+  /** Yield as stated when it says more than a number ("1 loaf, 12 slices"). */
+  yieldText: string | null
+  tags: string[]
+  notes: string | null
+  times: RecipeTimes
+  ingredients: RecipeIngredientDraft[]
+  steps: RecipeStepDraft[]
+}
+
+/** Something an import could not understand: the field (a schema.org path) and why. */
+export interface RecipeImportProblem {
+  field: string
+  reason: string
+}

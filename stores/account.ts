@@ -1,0 +1,54 @@
+// Who is signed in, their studios, and which one the app shell is working in.
+import { defineStore } from 'pinia'
+import { roleCan, type StudioAction, type StudioRole } from '~~/shared/utils/roles'
+
+export interface MembershipInfo {
+  studioId: number
+  studioName: string
+  role: StudioRole
+}
+
+interface MeResponse {
+  user: { id: number; name: string; email: string } | null
+  memberships: MembershipInfo[]
+  device: { shootId: number; studioId: number; role: 'host' | 'camera'; until: number } | null
+  studioId: number | null
+}
+
+export const useAccountStore = defineStore('account', {
+  state: () => ({
+    loaded: false,
+    user: null as MeResponse['user'],
+    memberships: [] as MembershipInfo[],
+    device: null as MeResponse['device'],
+    studioId: null as number | null,
+  }),
+  getters: {
+    signedIn: (s) => !!s.user,
+    current: (s): MembershipInfo | undefined => s.memberships.find((m) => m.studioId === s.studioId),
+  },
+  actions: {
+    async load() {
+      const headers = import.meta.server ? useRequestHeaders(['cookie']) : undefined
+      const me = await $fetch<MeResponse>('/api/me', { headers }).catch(() => null)
+      this.user = me?.user ?? null
+      this.memberships = me?.memberships ?? []
+      this.device = me?.device ?? null
+      this.studioId = me?.studioId ?? null
+      this.loaded = true
+    },
+    can(action: StudioAction): boolean {
+      return !!this.current && roleCan(this.current.role, action)
+    },
+    async switchStudio(studioId: number) {
+      await $fetch('/api/me/studio', { method: 'PUT', body: { studioId } })
+      this.studioId = studioId
+    },
+    async signOut() {
+      await $fetch('/api/auth/logout', { method: 'POST' })
+      this.$reset()
+      this.loaded = true
+      await useUserSession().fetch()
+    },
+  },
+})

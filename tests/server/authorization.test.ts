@@ -1,0 +1,117 @@
+// The authorisation matrix: every route × every kind of caller, asserting the exact status.
+// A route file under server/api without a row here fails the completeness check at the bottom.
+import { readdirSync, statSync } from 'node:fs'
+import { join, relative } from 'node:path'
+import { beforeAll, describe, expect, it } from 'vitest'
+import { rootDir, useBuiltApp } from '../support/app'
+import { Client, demo, signedIn, uniqueEmail } from '../support/client'
+import { insertShoot } from '../support/shoot-row'
+
+type CallerName = 'anon' | 'producer' | 'host' | 'camera' | 'viewer' | 'outsider' | 'hostDevice' | 'cameraDevice'
+const CALLERS: CallerName[] = ['anon', 'producer', 'host', 'camera', 'viewer', 'outsider', 'hostDevice', 'cameraDevice']
+
+interface Row {
+  /** The route file, relative to server/api. */
+  file: string
+  method: string
+  path: (ids: Ids) => string
+  body?: (ids: Ids) => unknown
+  expect: Record<CallerName, number>
+}
+interface Ids { studio: number; shoot: number }
+
+const all = (status: number) => Object.fromEntries(CALLERS.map((c) => [c, status])) as Record<CallerName, number>
+/** Studio routes: signed out 401, another studio's member 404, a device 403; members as given. */
+const studio = (producer: number, host: number, camera: number, viewer: number): Record<CallerName, number> =>
+  ({ anon: 401, producer, host, camera, viewer, outsider: 404, hostDevice: 403, cameraDevice: 403 })
+/** Shoot routes: like studio routes, but the shoot's own devices are checked by role. */
+const shoot = (producer: number, host: number, camera: number, viewer: number, hostDevice: number, cameraDevice: number): Record<CallerName, number> =>
+  ({ anon: 401, producer, host, camera, viewer, outsider: 404, hostDevice, cameraDevice })
+
+const rows: Row[] = [
+  { file: 'health.get.ts', method: 'GET', path: () => '/api/health', expect: all(200) },
+  { file: 'auth/signup.post.ts', method: 'POST', path: () => '/api/auth/signup', body: () => ({ name: 'N', email: demo.producer, password: 'long enough password', studioName: 'S' }), expect: all(409) },
+  { file: 'auth/login.post.ts', method: 'POST', path: () => '/api/auth/login', body: () => ({ email: uniqueEmail('nobody'), password: 'wrong password' }), expect: all(401) },
+  { file: 'auth/logout.post.ts', method: 'POST', path: () => '/api/auth/logout', expect: all(204) },
+  { file: 'auth/password-reset/index.post.ts', method: 'POST', path: () => '/api/auth/password-reset', body: () => ({ email: uniqueEmail('matrix') }), expect: all(202) },
+  { file: 'auth/password-reset/[token].post.ts', method: 'POST', path: () => '/api/auth/password-reset/not-a-token', body: () => ({ password: 'long enough password' }), expect: all(410) },
+  { file: 'me.get.ts', method: 'GET', path: () => '/api/me', expect: { ...all(200), anon: 401 } },
+  { file: 'me/studio.put.ts', method: 'PUT', path: () => '/api/me/studio', body: (i) => ({ studioId: i.studio }), expect: { ...studio(200, 200, 200, 200), hostDevice: 401, cameraDevice: 401 } },
+  { file: 'studios/[studioId]/members/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}/members`, expect: studio(200, 200, 200, 200) },
+  { file: 'studios/[studioId]/members/[userId].patch.ts', method: 'PATCH', path: (i) => `/api/studios/${i.studio}/members/999999`, body: () => ({ role: 'viewer' }), expect: studio(404, 403, 403, 403) },
+  { file: 'studios/[studioId]/members/[userId].delete.ts', method: 'DELETE', path: (i) => `/api/studios/${i.studio}/members/999999`, expect: studio(404, 403, 403, 403) },
+  { file: 'studios/[studioId]/invites/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}/invites`, expect: studio(200, 403, 403, 403) },
+  { file: 'studios/[studioId]/invites/index.post.ts', method: 'POST', path: (i) => `/api/studios/${i.studio}/invites`, body: () => ({ email: uniqueEmail('matrix'), role: 'viewer' }), expect: studio(201, 403, 403, 403) },
+  { file: 'studios/[studioId]/invites/[inviteId]/resend.post.ts', method: 'POST', path: (i) => `/api/studios/${i.studio}/invites/999999/resend`, expect: studio(404, 403, 403, 403) },
+  { file: 'studios/[studioId]/invites/[inviteId].delete.ts', method: 'DELETE', path: (i) => `/api/studios/${i.studio}/invites/999999`, expect: studio(404, 403, 403, 403) },
+  { file: 'studios/[studioId]/outbox/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}/outbox`, expect: studio(200, 403, 403, 403) },
+  { file: 'studios/[studioId]/outbox/[mailId].get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}/outbox/999999`, expect: studio(404, 403, 403, 403) },
+  { file: 'invites/[token].get.ts', method: 'GET', path: () => '/api/invites/not-a-token', expect: all(404) },
+  { file: 'invites/[token]/accept.post.ts', method: 'POST', path: () => '/api/invites/not-a-token/accept', body: () => ({ name: 'N', password: 'long enough password' }), expect: all(404) },
+  { file: 'shoots/[id]/index.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}`, expect: shoot(200, 200, 200, 200, 200, 200) },
+  { file: 'shoots/[id]/join-codes/index.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}/join-codes`, expect: shoot(200, 403, 403, 403, 403, 403) },
+  { file: 'shoots/[id]/join-codes/index.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/join-codes`, body: () => ({ role: 'camera' }), expect: shoot(201, 403, 403, 403, 403, 403) },
+  { file: 'shoots/[id]/join-codes/[codeId].delete.ts', method: 'DELETE', path: (i) => `/api/shoots/${i.shoot}/join-codes/999999`, expect: shoot(404, 403, 403, 403, 403, 403) },
+  { file: 'join.post.ts', method: 'POST', path: () => '/api/join', body: () => ({ code: 'QQQ-QQQ' }), expect: all(404) },
+]
+
+// Routes added by nuxt-auth-utils itself: reading and clearing one's own session.
+const moduleRoutes: Row[] = [
+  { file: '(nuxt-auth-utils) GET /api/_auth/session', method: 'GET', path: () => '/api/_auth/session', expect: all(200) },
+  { file: '(nuxt-auth-utils) DELETE /api/_auth/session', method: 'DELETE', path: () => '/api/_auth/session', expect: all(200) },
+]
+
+function routeFiles(dir: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const full = join(dir, name)
+    return statSync(full).isDirectory() ? routeFiles(full) : [relative(join(rootDir, 'server/api'), full)]
+  })
+}
+
+describe('authorisation matrix', async () => {
+  const { databasePath } = await useBuiltApp()
+  const ids: Ids = { studio: 0, shoot: 0 }
+  const callers = {} as Record<CallerName, () => Promise<Client>>
+
+  beforeAll(async () => {
+    const producer = await signedIn(demo.producer)
+    ids.studio = (await producer.get('/api/me')).body.memberships[0].studioId
+    ids.shoot = await insertShoot(databasePath, ids.studio, 'Matrix shoot')
+    const outsiderEmail = uniqueEmail('outsider')
+    await new Client().post('/api/auth/signup', { name: 'Outsider', email: outsiderEmail, password: 'some other studio', studioName: 'Elsewhere Kitchen' })
+    const device = async (role: 'host' | 'camera') => {
+      const { body } = await (await signedIn(demo.producer)).post(`/api/shoots/${ids.shoot}/join-codes`, { role })
+      const client = new Client()
+      await client.post('/api/join', { code: body.code })
+      return client
+    }
+    // Each call gets a fresh caller, so a route that ends a session cannot change the next row.
+    Object.assign(callers, {
+      anon: async () => new Client(),
+      producer: () => signedIn(demo.producer),
+      host: () => signedIn(demo.host),
+      camera: () => signedIn(demo.camera),
+      viewer: () => signedIn(demo.viewer),
+      outsider: () => signedIn(outsiderEmail, 'some other studio'),
+      hostDevice: () => device('host'),
+      cameraDevice: () => device('camera'),
+    })
+  })
+
+  for (const row of [...rows, ...moduleRoutes]) {
+    it(`${row.method} ${row.file}`, async () => {
+      const got: Record<string, number> = {}
+      for (const name of CALLERS) {
+        const client = await callers[name]()
+        const body = row.body?.(ids)
+        got[name] = (await client.call(row.method, row.path(ids), body ?? (row.method === 'GET' || row.method === 'DELETE' ? undefined : {}))).status
+      }
+      expect(got).toEqual(row.expect)
+    })
+  }
+
+  it('covers every route file under server/api', () => {
+    const covered = new Set(rows.map((r) => r.file))
+    expect(routeFiles(join(rootDir, 'server/api')).filter((f) => !covered.has(f))).toEqual([])
+  })
+})

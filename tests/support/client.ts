@@ -1,0 +1,67 @@
+// A tiny HTTP client for server tests: one cookie jar per person, raw status and headers kept.
+import { url } from '@nuxt/test-utils/e2e'
+import { DEMO_PASSWORD } from '../../server/db/demo'
+
+export interface Reply<T = any> {
+  status: number
+  body: T
+  headers: Headers
+}
+
+export class Client {
+  cookie = ''
+
+  async call<T = any>(method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<Reply<T>> {
+    const res = await fetch(url(path), {
+      method,
+      headers: {
+        accept: 'application/json',
+        ...(body !== undefined && typeof body !== 'string' ? { 'content-type': 'application/json' } : {}),
+        ...(this.cookie ? { cookie: this.cookie } : {}),
+        ...headers,
+      },
+      body: body === undefined ? undefined : typeof body === 'string' ? body : JSON.stringify(body),
+      redirect: 'manual',
+    })
+    const setCookie = res.headers.getSetCookie().find((c) => c.startsWith('nuxt-session='))
+    if (setCookie) this.cookie = setCookie.split(';')[0]!
+    const text = await res.text()
+    let parsed: unknown = text
+    try {
+      parsed = text ? JSON.parse(text) : null
+    } catch {}
+    return { status: res.status, body: parsed as T, headers: res.headers }
+  }
+
+  get = <T = any>(path: string) => this.call<T>('GET', path)
+  post = <T = any>(path: string, body?: unknown) => this.call<T>('POST', path, body ?? {})
+  put = <T = any>(path: string, body?: unknown) => this.call<T>('PUT', path, body ?? {})
+  patch = <T = any>(path: string, body?: unknown) => this.call<T>('PATCH', path, body ?? {})
+  delete = <T = any>(path: string) => this.call<T>('DELETE', path)
+}
+
+export async function signedIn(email: string, password = DEMO_PASSWORD): Promise<Client> {
+  const client = new Client()
+  const res = await client.post('/api/auth/login', { email, password })
+  if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${JSON.stringify(res.body)}`)
+  return client
+}
+
+export const demo = {
+  producer: 'producer@brackenford.test',
+  host: 'host@brackenford.test',
+  camera: 'camera@brackenford.test',
+  viewer: 'viewer@brackenford.test',
+} as const
+
+let counter = 0
+export function uniqueEmail(label: string) {
+  return `${label}-${Date.now().toString(36)}-${++counter}@example.test`
+}
+
+/** Mail the server sent, read straight from the catcher's table (for mail with no studio, such as resets). */
+export function linkIn(text: string, path: string): string {
+  const m = new RegExp(`https?://[^\\s"<>]+${path}[^\\s"<>]*`).exec(text)
+  if (!m) throw new Error(`no ${path} link in: ${text.slice(0, 300)}`)
+  return new URL(m[0]).pathname
+}
