@@ -1,0 +1,132 @@
+// Shapes of the cook plan (shared/utils/plan.ts): what goes in, what comes out, and the one error it throws.
+// Times are seconds from the start of the cook; inside the scheduler they are kept to the millisecond.
+
+export type PlanStation = 'burner' | 'oven' | 'counter'
+
+/**
+ * How a step waits for an earlier one (`from`):
+ * - `finish-start` (the default): it starts `lag` seconds (default 0) after `from` finishes;
+ * - `start-start`: it starts `lag` seconds (default 0) after `from` starts;
+ * - `finish-together`: it goes in `lag` seconds before `from` finishes, its lead (default: its own
+ *   duration, so both finish at the same moment): the eggs go into the simmering sauce for its last
+ *   six minutes. The lead must be at least the step's own duration (it may not outlast `from`) and at
+ *   most the duration of `from` (it may not start before `from` has begun).
+ */
+export type PlanLinkKind = 'finish-start' | 'start-start' | 'finish-together'
+
+export interface PlanLink {
+  from: string
+  kind?: PlanLinkKind
+  /** Seconds, never negative; for `finish-together` the lead. */
+  lag?: number
+}
+
+export interface PlanStep {
+  id: string
+  /** Planned duration in seconds (the planned value of the step's range). */
+  duration: number
+  /** Hands-on steps hold a cook's hands; unattended steps hold only their station. */
+  handsOn: boolean
+  station?: PlanStation | null
+  /** Finish-to-start links with no lag, the short form of `links`. */
+  after?: string[]
+  links?: PlanLink[]
+  /** Which recipe the step belongs to: used for cues and for kitchens that cook one recipe at a time. */
+  recipe?: string
+  /** What the cook reads in cues; the id when absent. */
+  label?: string
+}
+
+export interface PlanKitchen {
+  /** Cooks' hands, one lane per cook (default 1). */
+  hands?: number
+  /** Default 4. */
+  burners?: number
+  /** Default 1. */
+  ovens?: number
+  /**
+   * Dishes one oven takes at once (default 1: two dishes share an oven only when they want the same
+   * temperature, which the plan does not know; common practice).
+   */
+  racksPerOven?: number
+  /** Counter places; unlimited when absent. */
+  counters?: number
+  /** Whether two recipes may cook at once (default true); when false, each recipe's steps run in one span. */
+  parallelRecipes?: boolean
+}
+
+export interface PlanInput {
+  steps: PlanStep[]
+  kitchen?: PlanKitchen
+}
+
+export interface PlannedStep {
+  id: string
+  start: number
+  end: number
+  /** The lane drawn for the step: its station (`burner-2`), else its cook (`hands-1`), else `aside-n`. */
+  lane: string
+  /** The cook whose hands the step holds (`hands-1`), null for unattended steps. */
+  handsLane: string | null
+  /** For oven steps: which rack of the oven (1…racksPerOven); null otherwise. */
+  rack: number | null
+  /** Critical path method, ignoring capacity: latest start − earliest start. */
+  slack: number
+  /** Slack is zero. */
+  critical: boolean
+  earliestStart: number
+  latestStart: number
+}
+
+/** "Start the unattended step now, while you are on this hands-on step" — for the prompter. */
+export interface PlanCue {
+  stepId: string
+  at: number
+  endsAt: number
+  /** The hands-on step under way at that moment, null when the cook's hands are free. */
+  during: string | null
+  text: string
+}
+
+/** Lower bounds on any feasible plan, in seconds, beside the plan's own length. */
+export interface PlanBounds {
+  /** Critical path length, ignoring capacity. */
+  criticalPath: number
+  /** Total hands-on work ÷ hands. */
+  handsOn: number
+  /** Total burner time ÷ burners, oven time ÷ oven places, counter time ÷ counters (0 when unlimited). */
+  burners: number
+  ovens: number
+  counters: number
+  /** The largest of the bounds above. */
+  lower: number
+  /** (makespan − lower) ÷ lower, 0 when lower is 0. */
+  gap: number
+}
+
+export interface PlanResult {
+  makespan: number
+  /** In the order of the input. */
+  steps: PlannedStep[]
+  lanes: string[]
+  bounds: PlanBounds
+  /** One chain of critical steps from the start to the end of the cook (critical path method). */
+  criticalPath: string[]
+  /** One cue per unattended step, in time order. */
+  cues: PlanCue[]
+  /** The priority rule (and pass) that gave this plan. */
+  rule: string
+}
+
+export type PlanErrorCode = 'cycle' | 'missing-station' | 'impossible-lag' | 'bad-input'
+
+export class PlanError extends Error {
+  readonly code: PlanErrorCode
+  readonly stepIds: string[]
+  constructor(code: PlanErrorCode, message: string, stepIds: string[] = []) {
+    super(message)
+    this.name = 'PlanError'
+    this.code = code
+    this.stepIds = stepIds
+  }
+}
