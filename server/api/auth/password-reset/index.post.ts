@@ -1,3 +1,5 @@
+import { passwordResetMail } from '../../../mail/templates'
+
 // Public. Always the same answer, so it cannot tell whether an address has an account.
 export default defineEventHandler(async (event) => {
   const { email } = await validateBody(event, resetRequestBodySchema)
