@@ -19,15 +19,19 @@ export type SmtpTarget = string | { host: string; port: number }
 
 const transports = new Map<string, Transporter>()
 
+// A request waits for its mail, so a mail server that does not answer must fail in seconds, not in
+// nodemailer's defaults (2 minutes to connect, 10 minutes of silence).
+const TIMEOUTS = { connectionTimeout: 15_000, greetingTimeout: 15_000, socketTimeout: 30_000 }
+
 function transportFor(target: SmtpTarget): Transporter {
   const key = typeof target === 'string' ? target : `catcher:${target.host}:${target.port}`
   let transport = transports.get(key)
   if (!transport) {
     transport =
       typeof target === 'string'
-        ? nodemailer.createTransport(target)
+        ? nodemailer.createTransport({ url: target, ...TIMEOUTS })
         : // The catcher offers no TLS and needs no login: plain SMTP on loopback.
-          nodemailer.createTransport({ host: target.host, port: target.port, secure: false, ignoreTLS: true })
+          nodemailer.createTransport({ host: target.host, port: target.port, secure: false, ignoreTLS: true, ...TIMEOUTS })
     transports.set(key, transport)
   }
   return transport

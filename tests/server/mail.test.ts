@@ -157,6 +157,13 @@ describe('local SMTP catcher', () => {
     expect(stored!.receivedAt).toBeInstanceOf(Date)
   })
 
+  it('sends to an SMTP server given as a URL, as NUXT_MAIL_SMTP_URL configures it', async () => {
+    const sent = await deliverMail(`smtp://${catcher.host}:${catcher.port}`, FROM, { to: 'wren@example.test', ...invite(), kind: 'invite', studioId })
+    const stored = await Mail.findOne({ where: { messageId: sent.messageId } })
+    expect(stored?.studioId).toBe(studioId)
+    expect(stored?.subject).toBe(invite().subject)
+  })
+
   it('files a mail with no studio, or an unknown one, under no studio', async () => {
     const reset = passwordResetMail({ name: 'Ida', link: 'https://hobline.example/reset/1', expiresAt: EXPIRES })
     const none = await deliverMail(target(), FROM, { to: 'ida@example.test', ...reset, kind: 'password-reset' })
