@@ -1,0 +1,90 @@
+// Amounts in step text that follow the scale.
+//
+// Token syntax (in a step's text, linked to an ingredient by its key):
+//   {{key}}            the ingredient's amount, scaled and kitchen-rounded: "Whisk in {{milk}}" → "Whisk in 240 mL"
+//   {{key|item}}       amount, unit and item:   "Add {{flour|item}}" → "Add 1½ cups plain flour"
+//   {{key*1/2}}        a share of the amount:    "Add {{butter*1/2}} of the butter" → "Add 50 g of the butter"
+//   {{key*0.25|item}}  both (the share is a decimal or a fraction n/d, above zero)
+// Spaces inside the braces are allowed ({{ milk | item }}). A key is letters, digits, "-" and "_".
+// An ingredient with no amount renders as its item ("salt to taste" when it is to taste).
+// A token whose key no ingredient has is left as written and reported, so nothing is lost; text
+// with "{{" that is not a token is left alone.
+import type { RecipeIngredientDraft } from '../types/recipe'
+import { formatKitchenAmount, scaleAmount, type KitchenDisplayOptions } from './scale'
+
+export interface StepToken {
+  raw: string
+  key: string
+  /** Share of the ingredient's amount (1 for all of it). */
+  factor: number
+  withItem: boolean
+  start: number
+  end: number
+}
+
+const TOKEN = /\{\{\s*([A-Za-z0-9_-]+)\s*(?:\*\s*(\d+(?:\.\d+)?(?:\s*\/\s*\d+(?:\.\d+)?)?)\s*)?(?:\|\s*(item)\s*)?\}\}/g
+
+/** Every well-formed token in a step's text, in order. */
+export function findStepTokens(text: string): StepToken[] {
+  const out: StepToken[] = []
+  for (const m of text.matchAll(TOKEN)) {
+    let factor = 1
+    if (m[2]) {
+      const [n, d] = m[2].split('/').map((x) => Number(x.trim()))
+      factor = d === undefined ? n! : n! / d
+    }
+    out.push({ raw: m[0], key: m[1]!, factor, withItem: m[3] === 'item', start: m.index!, end: m.index! + m[0].length })
+  }
+  return out
+}
+
+/** Tokens that name no ingredient or ask for an impossible share, with what to fix. */
+export function stepTokenProblems(text: string, ingredientKeys: readonly string[]): Array<{ token: string; reason: string }> {
+  return findStepTokens(text).flatMap((t) => {
+    if (!ingredientKeys.includes(t.key)) return [{ token: t.raw, reason: `No ingredient has the key "${t.key}"; use one of: ${ingredientKeys.join(', ') || '(none yet)'}` }]
+    if (!Number.isFinite(t.factor) || t.factor <= 0) return [{ token: t.raw, reason: `The share in ${t.raw} must be above zero` }]
+    return []
+  })
+}
+
+export interface StepTextSegment {
+  text: string
+  /** Set on a rendered amount: the ingredient it came from and its exact value for the hover. */
+  ingredientKey?: string
+  exactText?: string
+}
+
+export interface RenderStepTextOptions extends KitchenDisplayOptions {
+  ingredients: readonly Pick<RecipeIngredientDraft, 'key' | 'min' | 'max' | 'unit' | 'item' | 'toTaste'>[]
+  fromServings: number
+  toServings: number
+}
+
+/** A step's text with its tokens replaced by scaled, kitchen-rounded amounts. */
+export function renderStepText(text: string, options: RenderStepTextOptions): { text: string; segments: StepTextSegment[]; problems: Array<{ token: string; reason: string }> } {
+  const problems = stepTokenProblems(text, options.ingredients.map((i) => i.key))
+  const bad = new Set(problems.map((p) => p.token))
+  const segments: StepTextSegment[] = []
+  let at = 0
+  for (const t of findStepTokens(text)) {
+    const ing = options.ingredients.find((i) => i.key === t.key)
+    if (!ing || bad.has(t.raw)) continue
+    if (t.start > at) segments.push({ text: text.slice(at, t.start) })
+    const share = (v: number | null) => (v === null ? null : scaleAmount(v, options.fromServings, options.toServings) * t.factor)
+    const amount = formatKitchenAmount(share(ing.min), share(ing.max), ing.unit, options, ing.toTaste)
+    const rendered = amount.min === null ? (ing.toTaste ? `${ing.item} to taste` : ing.item) : t.withItem ? `${amount.text} ${ing.item}` : amount.text
+    segments.push({ text: rendered, ingredientKey: ing.key, ...(amount.exactText ? { exactText: amount.exactText } : {}) })
+    at = t.end
+  }
+  if (at < text.length) segments.push({ text: text.slice(at) })
+  return { text: segments.map((s) => s.text).join(''), segments, problems }
+}
+
+/** A key for a new ingredient, from its item and unique among `taken`: "plain flour" → "plain-flour". */
+export function makeIngredientKey(item: string, taken: Iterable<string> = []): string {
+  const used = new Set(taken)
+  const base = item.normalize('NFD').replace(/[\u0300-\u036f]/g, '').toLowerCase()
+    .replace(/\([^)]*\)/g, ' ').replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 24).replace(/-+$/, '') || 'ingredient'
+  if (!used.has(base)) return base
+  for (let n = 2; ; n++) if (!used.has(`${base}-${n}`)) return `${base}-${n}`
+}
