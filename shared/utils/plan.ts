@@ -4,10 +4,12 @@
 // 2. Serial schedule-generation scheme (plan-sgs.ts) under several priority rules from Kolisch,
 //    "Serial and parallel resource-constrained project scheduling methods revisited" (EJOR 1996):
 //    latest start, latest finish, minimum slack, most total successors, greatest rank positional
-//    weight; plus "unattended first", a kitchen rule, and latest start with seeded noise. Each plan is
+//    weight; plus "unattended first", a kitchen rule; then, for small and middling plans, seeded
+//    samples (latest start blended with random keys, and the best plan so far shaken). Each plan is
 //    then justified: decoded backwards in time by finish order and forwards again by start order
-//    (the forward–backward improvement of Valls, Ballestín & Quintanilla, EJOR 2005). The shortest
-//    plan wins; ties keep the earlier rule, so the same input always gives the same plan.
+//    (forward–backward improvement; Valls, Ballestín & Quintanilla, "Justification and RCPSP: a
+//    technique that pays", EJOR 2005, from memory). The shortest plan wins, ties keep the earlier
+//    rule, and the search stops early at the lower bound: the same input always gives the same plan.
 // 3. Lanes, cues for the prompter, and lower bounds beside the result.
 import { planCriticalChain, planCriticalTimes, type PlanTimes } from './plan-cpm'
 import { PLAN_HANDS, planBuildNetwork, type PlanNet } from './plan-network'
@@ -16,7 +18,8 @@ import type { PlanBounds, PlanCue, PlanInput, PlannedStep, PlanResult } from './
 
 interface Rule {
   name: string
-  prio: ArrayLike<number>
+  /** Made when the rule's turn comes, so a sample can start from the best plan so far. */
+  prio: () => ArrayLike<number>
   tie: ArrayLike<number>
 }
 
@@ -64,33 +67,49 @@ function seeded(seed: number) {
 }
 
 /** How many seeded samples to add: many for a small plan, none for a large one. */
-const sampleCount = (n: number) => Math.min(48, Math.floor(600 / Math.max(n, 1)))
+const sampleCount = (n: number) => Math.min(64, Math.floor(1000 / Math.max(n, 1)))
 
 function priorityRules(net: PlanNet, times: PlanTimes): Rule[] {
   const { n, dur } = net
   const { es, ls } = times
   const at = (f: (v: number) => number) => Float64Array.from({ length: n }, (_, v) => f(v))
   const rules: Rule[] = [
-    { name: 'latest start', prio: ls, tie: es },
-    { name: 'latest finish', prio: at((v) => ls[v]! + dur[v]!), tie: ls },
-    { name: 'minimum slack', prio: at((v) => ls[v]! - es[v]!), tie: ls },
-    { name: 'unattended first', prio: at((v) => net.hands[v]!), tie: ls },
+    { name: 'latest start', prio: () => ls, tie: es },
+    { name: 'latest finish', prio: () => at((v) => ls[v]! + dur[v]!), tie: ls },
+    { name: 'minimum slack', prio: () => at((v) => ls[v]! - es[v]!), tie: ls },
+    { name: 'unattended first', prio: () => at((v) => net.hands[v]!), tie: ls },
   ]
   const succ = successorCounts(net)
-  if (succ) rules.push({ name: 'most total successors', prio: at((v) => -succ[v]!), tie: ls })
+  if (succ) rules.push({ name: 'most total successors', prio: () => at((v) => -succ[v]!), tie: ls })
   const weight = at((v) => {
     let w = dur[v]!
     for (let k = net.outOff[v]!; k < net.outOff[v + 1]!; k++) if (net.ePlain[net.outEdges[k]!]) w += dur[net.eTo[net.outEdges[k]!]!]!
     return w
   })
-  rules.push({ name: 'rank positional weight', prio: at((v) => -weight[v]!), tie: ls })
+  rules.push({ name: 'rank positional weight', prio: () => at((v) => -weight[v]!), tie: ls })
+  return rules
+}
+
+/**
+ * Seeded samples, in turn: latest start blended with random keys (from a little noise to a random
+ * order of the eligible steps), and the best plan so far, shaken.
+ */
+function sampledRules(net: PlanNet, times: PlanTimes, best: () => Float64Array): Rule[] {
+  const { n } = net
   const random = seeded(0x5eed)
   const spread = Math.max(times.length, 1)
-  for (let s = 0, count = sampleCount(n); s < count; s++) {
-    const scale = [0.05, 0.1, 0.2, 0.4][s % 4]! * spread
-    rules.push({ name: `latest start, sample ${s + 1}`, prio: at((v) => ls[v]! + (random() - 0.5) * scale), tie: ls })
-  }
-  return rules
+  return Array.from({ length: sampleCount(n) }, (_, s): Rule => {
+    const fromBest = s % 2 === 1
+    const mix = [0.05, 0.15, 0.4, 1][(s >> 1) % 4]!
+    return {
+      name: `${fromBest ? 'best so far' : 'latest start'}, sample ${s + 1}`,
+      prio: () => {
+        const base = fromBest ? best() : times.ls
+        return Float64Array.from({ length: n }, (_, v) => (fromBest ? base[v]! + (random() - 0.5) * mix * 0.5 * spread : (1 - mix) * base[v]! + mix * random() * spread))
+      },
+      tie: times.ls,
+    }
+  })
 }
 
 const lengthOf = (net: PlanNet, S: Float64Array) => {
@@ -125,9 +144,11 @@ function bestSchedule(net: PlanNet, times: PlanTimes): { S: Float64Array; rule: 
   }
   const finish = new Float64Array(n)
   const start = new Float64Array(n)
-  for (const rule of priorityRules(net, times)) {
+  const rules = [...priorityRules(net, times), ...sampledRules(net, times, () => best!)]
+  for (const rule of rules) {
     if (bestLength <= lower) break
-    const forward = forwardScheme(rule.prio, rule.tie)
+    const prio = rule.prio()
+    const forward = forwardScheme(prio, rule.tie)
     consider(forward, rule.name)
     if (!forward || bestLength <= lower) continue
     // Backwards in time: the step that finishes last goes first.
@@ -137,7 +158,7 @@ function bestSchedule(net: PlanNet, times: PlanTimes): { S: Float64Array; rule: 
     const length = lengthOf(net, back)
     for (let v = 0; v < n; v++) back[v] = length - back[v]! - dur[v]!
     consider(back, `${rule.name}, right-justified`)
-    consider(forwardScheme(back, rule.prio), `${rule.name}, justified`)
+    consider(forwardScheme(back, prio), `${rule.name}, justified`)
   }
   if (!best) throw new Error('The cook plan found no schedule; this is a fault in the planner.')
   return { S: best, rule: bestRule }
