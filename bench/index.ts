@@ -1,5 +1,6 @@
 // Every benchmark `npm run bench` runs, in order. Add new ones here.
 import { databaseCommit } from './database.bench'
+import { planBenchmarks } from './plan.bench'
 import type { Benchmark } from './types'
 
-export const benchmarks: Benchmark[] = [databaseCommit]
+export const benchmarks: Benchmark[] = [databaseCommit, ...planBenchmarks]
