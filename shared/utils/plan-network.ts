@@ -3,6 +3,7 @@
 // "S(to) ≥ S(from) + w" in milliseconds. Finish-together links add a back edge with −w, which makes
 // the pair's offset exact; such ties are the only cycles the network may hold, so its strongly
 // connected components are the groups of steps that have to be placed together.
+import { planCheckAcyclic, planCsr, planRecipeOrder, planStronglyConnected, planTopoRanks, type PlanEdge } from './plan-graph'
 import { PlanError, type PlanInput, type PlanLinkKind, type PlanStation } from './plan-types'
 
 export const PLAN_HANDS = 0
@@ -64,8 +65,6 @@ function countOf(kitchen: Record<string, unknown>, key: string, fallback: number
 
 const quoted = (labels: string[]) => labels.slice(0, 3).map((l) => `“${l}”`).join(', ') + (labels.length > 3 ? ` and ${labels.length - 3} more` : '')
 
-interface Edge { from: number; to: number; w: number; plain: boolean }
-
 /** Checks the input and builds the network; throws PlanError for anything it cannot plan. */
 export function planBuildNetwork(input: PlanInput): PlanNet {
   if (!input || typeof input !== 'object' || !Array.isArray(input.steps)) throw new PlanError('bad-input', 'The plan needs a list of steps.')
@@ -107,7 +106,7 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
     if (typeof step.handsOn !== 'boolean') throw new PlanError('bad-input', `Say whether “${label}” is hands-on or unattended.`, [id])
     hands.push(step.handsOn ? 1 : 0)
     const st = step.station ?? null
-    if (st !== null && !(st in STATIONS)) throw new PlanError('bad-input', `“${label}” names an unknown station “${String(st)}”; use burner, oven, counter or none.`, [id])
+    if (st !== null && !Object.hasOwn(STATIONS, st as string)) throw new PlanError('bad-input', `“${label}” names an unknown station “${String(st)}”; use burner, oven, counter or none.`, [id])
     station.push(st === null ? 0 : STATIONS[st as PlanStation])
   })
 
@@ -127,7 +126,7 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
   }
 
   // Links → edges.
-  const edges: Edge[] = []
+  const edges: PlanEdge[] = []
   steps.forEach((step, j) => {
     const label = labels[j]!
     const links: { from: unknown; kind?: unknown; lag?: unknown }[] = []
@@ -166,12 +165,12 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
       }
     }
   })
-  checkAcyclic(stepCount, edges, labels, ids, stepCount)
+  planCheckAcyclic(stepCount, edges, labels, ids, stepCount)
 
   // One recipe at a time: a milestone between consecutive recipes, in an order the links allow.
   let n = stepCount
   if (!parallel) {
-    const order = recipeOrder(recipes, edges)
+    const order = planRecipeOrder(recipes, edges)
     for (let k = 0; k + 1 < order.length; k++) {
       const m = n++
       recipes.forEach((r, i) => {
@@ -180,186 +179,19 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
       })
       ids.push(''), labels.push(''), recipes.push(null), dur.push(0), hands.push(0), station.push(0)
     }
-    checkAcyclic(n, edges, labels, ids, stepCount)
+    planCheckAcyclic(n, edges, labels, ids, stepCount)
   }
 
   const eFrom = Int32Array.from(edges, (e) => e.from)
   const eTo = Int32Array.from(edges, (e) => e.to)
-  const [outOff, outEdges] = csr(n, eFrom)
-  const [inOff, inEdges] = csr(n, eTo)
+  const [outOff, outEdges] = planCsr(n, eFrom)
+  const [inOff, inEdges] = planCsr(n, eTo)
   const net: PlanNet = {
     n, stepCount, ids, labels, recipes, dur, hands: Uint8Array.from(hands), station: Int8Array.from(station), cap, ovens, racks,
     eFrom, eTo, eW: Float64Array.from(edges, (e) => e.w), ePlain: Uint8Array.from(edges, (e) => (e.plain ? 1 : 0)),
     outOff, outEdges, inOff, inEdges, comp: new Int32Array(n), comps: [],
   }
-  const rank = topoRanks(n, eFrom, eTo, Uint8Array.from(edges, (e) => (e.plain ? 1 : 0)))!
-  stronglyConnected(net, rank)
+  const rank = planTopoRanks(n, eFrom, eTo, Uint8Array.from(edges, (e) => (e.plain ? 1 : 0)))!
+  planStronglyConnected(net, rank)
   return net
-}
-
-/** Adjacency in compressed rows: offsets per node, then edge indices grouped by `key` node. */
-function csr(n: number, key: Int32Array): [Int32Array, Int32Array] {
-  const off = new Int32Array(n + 1)
-  for (const k of key) off[k + 1]!++
-  for (let i = 0; i < n; i++) off[i + 1]! += off[i]!
-  const fill = off.slice(0, n)
-  const list = new Int32Array(key.length)
-  key.forEach((k, e) => (list[fill[k]!++] = e))
-  return [off, list]
-}
-
-/** Rank of each node in a topological order of the plain edges (ties by index); null when they hold a cycle. */
-function topoRanks(n: number, from: Int32Array, to: Int32Array, plain: Uint8Array): Int32Array | null {
-  const indeg = new Int32Array(n)
-  const out: number[][] = Array.from({ length: n }, () => [])
-  for (let e = 0; e < from.length; e++) if (plain[e]) indeg[to[e]!]!++, out[from[e]!]!.push(to[e]!)
-  // A binary heap keeps ties in input order, so the order is the same for the same input.
-  const heap: number[] = []
-  const push = (x: number) => {
-    heap.push(x)
-    for (let i = heap.length - 1; i > 0; ) {
-      const p = (i - 1) >> 1
-      if (heap[p]! <= x) break
-      ;[heap[p], heap[i]] = [x, heap[p]!]
-      i = p
-    }
-  }
-  const pop = () => {
-    const top = heap[0]!
-    const last = heap.pop()!
-    if (heap.length) {
-      heap[0] = last
-      for (let i = 0; ; ) {
-        const l = 2 * i + 1
-        const r = l + 1
-        let m = i
-        if (l < heap.length && heap[l]! < heap[m]!) m = l
-        if (r < heap.length && heap[r]! < heap[m]!) m = r
-        if (m === i) break
-        ;[heap[m], heap[i]] = [heap[i]!, heap[m]!]
-        i = m
-      }
-    }
-    return top
-  }
-  for (let i = 0; i < n; i++) if (!indeg[i]) push(i)
-  const rank = new Int32Array(n).fill(-1)
-  let next = 0
-  while (heap.length) {
-    const u = pop()
-    rank[u] = next++
-    for (const v of out[u]!) if (!--indeg[v]!) push(v)
-  }
-  return next === n ? rank : null
-}
-
-/** Throws a 'cycle' PlanError naming the steps of one circle of links, if there is one. */
-function checkAcyclic(n: number, edges: Edge[], labels: string[], ids: string[], stepCount: number) {
-  // Kahn's algorithm: whatever it cannot take in order lies on a circle or behind one.
-  const indeg = new Int32Array(n)
-  const out: number[][] = Array.from({ length: n }, () => [])
-  const preds: number[][] = Array.from({ length: n }, () => [])
-  for (const e of edges) if (e.plain) indeg[e.to]!++, out[e.from]!.push(e.to), preds[e.to]!.push(e.from)
-  const queue: number[] = []
-  for (let i = 0; i < n; i++) if (!indeg[i]) queue.push(i)
-  for (let q = 0; q < queue.length; q++) for (const v of out[queue[q]!]!) if (!--indeg[v]!) queue.push(v)
-  if (queue.length === n) return
-  const left = new Uint8Array(n).fill(1)
-  for (const u of queue) left[u] = 0
-  // Every node left waits for another node left: walk back until one repeats.
-  const seen = new Map<number, number>()
-  const walk: number[] = []
-  let u = left.indexOf(1)
-  while (!seen.has(u)) {
-    seen.set(u, walk.length)
-    walk.push(u)
-    u = preds[u]!.find((p) => left[p] === 1)!
-  }
-  const cycle = walk.slice(seen.get(u)).reverse()
-  const steps = cycle.filter((v) => v < stepCount)
-  const names = steps.map((v) => `“${labels[v]}”`)
-  const circle = [...names, names[0]].join(' → ')
-  throw new PlanError(
-    'cycle',
-    cycle.some((v) => v >= stepCount)
-      ? `These steps wait for one another across recipes (${circle}), so the recipes cannot cook one after the other; let two recipes cook at once, or remove a link.`
-      : `These steps wait for one another in a circle: ${circle}. Remove one of the links.`,
-    steps.map((v) => ids[v]!),
-  )
-}
-
-/** Recipes in an order their cross links allow, ties by first appearance. */
-function recipeOrder(recipes: (string | null)[], edges: Edge[]): string[] {
-  const names = [...new Set(recipes.filter((r): r is string => r !== null))]
-  const pos = new Map(names.map((r, i) => [r, i]))
-  const indeg = new Array<number>(names.length).fill(0)
-  const out: Set<number>[] = names.map(() => new Set())
-  for (const e of edges) {
-    const a = recipes[e.from]
-    const b = recipes[e.to]
-    if (e.plain && a != null && b != null && a !== b && !out[pos.get(a)!]!.has(pos.get(b)!)) out[pos.get(a)!]!.add(pos.get(b)!), indeg[pos.get(b)!]!++
-  }
-  const order: string[] = []
-  const done = new Uint8Array(names.length)
-  for (let k = 0; k < names.length; k++) {
-    // The first recipe (by appearance) that nothing left waits for; if none, keep appearance order and let the cycle check name the steps.
-    let pick = indeg.findIndex((d, i) => d === 0 && !done[i])
-    if (pick < 0) pick = done.indexOf(0)
-    done[pick] = 1
-    order.push(names[pick]!)
-    for (const v of out[pick]!) indeg[v]!--
-  }
-  return order
-}
-
-/** Tarjan's strongly connected components (iterative), numbered in topological order, members by link order. */
-function stronglyConnected(net: PlanNet, rank: Int32Array) {
-  const { n, outOff, outEdges, eTo } = net
-  const idx = new Int32Array(n).fill(-1)
-  const low = new Int32Array(n)
-  const onStack = new Uint8Array(n)
-  const stack: number[] = []
-  const found: number[][] = []
-  let counter = 0
-  const callStack: [number, number][] = []
-  for (let root = 0; root < n; root++) {
-    if (idx[root] !== -1) continue
-    callStack.push([root, outOff[root]!])
-    idx[root] = low[root] = counter++
-    stack.push(root), (onStack[root] = 1)
-    while (callStack.length) {
-      const frame = callStack[callStack.length - 1]!
-      const u = frame[0]
-      if (frame[1] < outOff[u + 1]!) {
-        const v = eTo[outEdges[frame[1]++]!]!
-        if (idx[v] === -1) {
-          idx[v] = low[v] = counter++
-          stack.push(v), (onStack[v] = 1)
-          callStack.push([v, outOff[v]!])
-        } else if (onStack[v]) low[u] = Math.min(low[u]!, idx[v]!)
-        continue
-      }
-      callStack.pop()
-      if (callStack.length) {
-        const parent = callStack[callStack.length - 1]![0]
-        low[parent] = Math.min(low[parent]!, low[u]!)
-      }
-      if (low[u] === idx[u]) {
-        const members: number[] = []
-        let v: number
-        do {
-          v = stack.pop()!
-          onStack[v] = 0
-          members.push(v)
-        } while (v !== u)
-        found.push(members)
-      }
-    }
-  }
-  // Tarjan finds components in reverse topological order.
-  found.reverse()
-  net.comps = found.map((members, c) => {
-    for (const v of members) net.comp[v] = c
-    return Int32Array.from(members.sort((a, b) => rank[a]! - rank[b]!))
-  })
 }

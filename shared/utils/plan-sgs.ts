@@ -5,83 +5,13 @@
 // that are placed together: each member within the time window its placed partners leave it; when a
 // member's window has no room, the group is taken out and tried again later. Past the moment every
 // earlier step has finished the kitchen is empty for the group, so a group that fits in an empty
-// kitchen (checked once, planCheckTies) always fits there, and the search ends.
+// kitchen (checked once, planCheckTies) always fits there, and the search ends. (That holds for runs
+// forwards in time; a run backwards that cannot place a group gives no plan and is passed over.)
 import { PLAN_HANDS, type PlanNet } from './plan-network'
+import { PlanProfile } from './plan-profile'
 import { PlanError } from './plan-types'
 
 const RETRIES = 16
-
-/** Usage of one resource over time: segment k is [t[k], t[k+1]) at level u[k]; the last runs on. */
-class Profile {
-  t: number[] = [0]
-  u: number[] = [0]
-  constructor(readonly cap: number) {}
-
-  private find(x: number): number {
-    let lo = 0
-    let hi = this.t.length - 1
-    while (lo < hi) {
-      const mid = (lo + hi + 1) >> 1
-      if (this.t[mid]! <= x) lo = mid
-      else hi = mid - 1
-    }
-    return lo
-  }
-
-  /** Earliest y ≥ x with a free unit throughout [y, y + d). */
-  fit(x: number, d: number): number {
-    const { t, u, cap } = this
-    let y = x
-    let k = this.find(x)
-    scan: for (;;) {
-      const end = y + d
-      for (let j = k; j < t.length && t[j]! < end; j++) {
-        if (u[j]! >= cap) {
-          y = t[j + 1]!
-          k = j + 1
-          continue scan
-        }
-      }
-      return y
-    }
-  }
-
-  private split(x: number): number {
-    const k = this.find(x)
-    if (this.t[k] === x) return k
-    this.t.splice(k + 1, 0, x)
-    this.u.splice(k + 1, 0, this.u[k]!)
-    return k + 1
-  }
-
-  /** Adds q units over [s, e), then merges equal neighbours so a busy stretch stays one segment. */
-  add(s: number, e: number, q: number) {
-    const a = this.split(s)
-    const b = this.split(e)
-    const { t, u } = this
-    for (let k = a; k < b; k++) u[k]! += q
-    if (u[b] === u[b - 1]) t.splice(b, 1), u.splice(b, 1)
-    if (a > 0 && u[a] === u[a - 1]) t.splice(a, 1), u.splice(a, 1)
-  }
-}
-
-/** The same network run backwards in time: start' = T − finish. Edges turn round; groups stay. */
-export function planMirror(net: PlanNet): PlanNet {
-  const { eFrom, eTo, eW, dur, comps } = net
-  const last = comps.length - 1
-  return {
-    ...net,
-    eFrom: eTo,
-    eTo: eFrom,
-    eW: eW.map((w, e) => w + dur[eTo[e]!]! - dur[eFrom[e]!]!),
-    outOff: net.inOff,
-    outEdges: net.inEdges,
-    inOff: net.outOff,
-    inEdges: net.outEdges,
-    comp: net.comp.map((c) => last - c),
-    comps: comps.map((_, c) => comps[last - c]!.slice().reverse()),
-  }
-}
 
 /** One run of the serial scheme over a network; reusable for the tie check. */
 class SerialRun {
@@ -93,7 +23,7 @@ class SerialRun {
   private readonly placed: Uint8Array
   private readonly inQueue: Uint8Array
   private readonly queue: Int32Array
-  profiles: (Profile | null)[] = []
+  profiles: (PlanProfile | null)[] = []
   maxEnd = 0
   /** The member that found no room in the last failed attempt. */
   failed = -1
@@ -126,11 +56,11 @@ class SerialRun {
   }
 
   emptyKitchen() {
-    this.profiles = this.net.cap.map((c) => (Number.isFinite(c) ? new Profile(c) : null))
+    this.profiles = this.net.cap.map((c) => (Number.isFinite(c) ? new PlanProfile(c) : null))
     this.maxEnd = 0
   }
 
-  private resource(v: number, r: number): Profile | null {
+  private resource(v: number, r: number): PlanProfile | null {
     if (r === PLAN_HANDS) return this.net.hands[v] ? this.profiles[PLAN_HANDS]! : null
     const s = this.net.station[v]!
     return s ? this.profiles[s]! : null

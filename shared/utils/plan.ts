@@ -13,104 +13,10 @@
 // 3. Lanes, cues for the prompter, and lower bounds beside the result.
 import { planCriticalChain, planCriticalTimes, type PlanTimes } from './plan-cpm'
 import { PLAN_HANDS, planBuildNetwork, type PlanNet } from './plan-network'
-import { planCheckTies, planMirror, planSerialScheme } from './plan-sgs'
+import { planMirror } from './plan-graph'
+import { planPriorityRules, planSampledRules } from './plan-rules'
+import { planCheckTies, planSerialScheme } from './plan-sgs'
 import type { PlanBounds, PlanCue, PlanInput, PlannedStep, PlanResult } from './plan-types'
-
-interface Rule {
-  name: string
-  /** Made when the rule's turn comes, so a sample can start from the best plan so far. */
-  prio: () => ArrayLike<number>
-  tie: ArrayLike<number>
-}
-
-/** Total successors of each node through links, counted with bit sets (skipped for very large plans). */
-function successorCounts(net: PlanNet): Float64Array | null {
-  const { n } = net
-  const words = (n + 31) >> 5
-  if (n * words > 4_000_000) return null
-  const bits = new Uint32Array(n * words)
-  const order = net.comps.flatMap((members) => [...members])
-  const count = new Float64Array(n)
-  for (let i = n - 1; i >= 0; i--) {
-    const v = order[i]!
-    const row = v * words
-    for (let k = net.outOff[v]!; k < net.outOff[v + 1]!; k++) {
-      const e = net.outEdges[k]!
-      if (!net.ePlain[e]) continue
-      const w = net.eTo[e]!
-      const other = w * words
-      for (let j = 0; j < words; j++) bits[row + j]! |= bits[other + j]!
-      bits[row + (w >> 5)]! |= 1 << (w & 31)
-    }
-    let c = 0
-    for (let j = 0; j < words; j++) {
-      let x = bits[row + j]!
-      x -= (x >>> 1) & 0x55555555
-      x = (x & 0x33333333) + ((x >>> 2) & 0x33333333)
-      c += (((x + (x >>> 4)) & 0x0f0f0f0f) * 0x01010101) >>> 24
-    }
-    count[v] = c
-  }
-  return count
-}
-
-/** A small seeded generator (mulberry32), so sampled priorities are the same on every run. */
-function seeded(seed: number) {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
-
-/** How many seeded samples to add: many for a small plan, none for a large one. */
-const sampleCount = (n: number) => Math.min(64, Math.floor(1000 / Math.max(n, 1)))
-
-function priorityRules(net: PlanNet, times: PlanTimes): Rule[] {
-  const { n, dur } = net
-  const { es, ls } = times
-  const at = (f: (v: number) => number) => Float64Array.from({ length: n }, (_, v) => f(v))
-  const rules: Rule[] = [
-    { name: 'latest start', prio: () => ls, tie: es },
-    { name: 'latest finish', prio: () => at((v) => ls[v]! + dur[v]!), tie: ls },
-    { name: 'minimum slack', prio: () => at((v) => ls[v]! - es[v]!), tie: ls },
-    { name: 'unattended first', prio: () => at((v) => net.hands[v]!), tie: ls },
-  ]
-  const succ = successorCounts(net)
-  if (succ) rules.push({ name: 'most total successors', prio: () => at((v) => -succ[v]!), tie: ls })
-  const weight = at((v) => {
-    let w = dur[v]!
-    for (let k = net.outOff[v]!; k < net.outOff[v + 1]!; k++) if (net.ePlain[net.outEdges[k]!]) w += dur[net.eTo[net.outEdges[k]!]!]!
-    return w
-  })
-  rules.push({ name: 'rank positional weight', prio: () => at((v) => -weight[v]!), tie: ls })
-  return rules
-}
-
-/**
- * Seeded samples, in turn: latest start blended with random keys (from a little noise to a random
- * order of the eligible steps), and the best plan so far, shaken.
- */
-function sampledRules(net: PlanNet, times: PlanTimes, best: () => Float64Array): Rule[] {
-  const { n } = net
-  const random = seeded(0x5eed)
-  const spread = Math.max(times.length, 1)
-  return Array.from({ length: sampleCount(n) }, (_, s): Rule => {
-    const fromBest = s % 2 === 1
-    const mix = [0.05, 0.15, 0.4, 1][(s >> 1) % 4]!
-    return {
-      name: `${fromBest ? 'best so far' : 'latest start'}, sample ${s + 1}`,
-      prio: () => {
-        const base = fromBest ? best() : times.ls
-        return Float64Array.from({ length: n }, (_, v) => (fromBest ? base[v]! + (random() - 0.5) * mix * 0.5 * spread : (1 - mix) * base[v]! + mix * random() * spread))
-      },
-      tie: times.ls,
-    }
-  })
-}
 
 const lengthOf = (net: PlanNet, S: Float64Array) => {
   let t = 0
@@ -118,14 +24,19 @@ const lengthOf = (net: PlanNet, S: Float64Array) => {
   return t
 }
 
-/** No plan can be shorter than this (ms): the critical path, and each resource's work ÷ its capacity. */
-function lowerBoundMs(net: PlanNet, times: PlanTimes): number {
+/** Work held on each resource (hands, burners, oven places, counters), ms. */
+function workOf(net: PlanNet): number[] {
   const work = [0, 0, 0, 0]
   for (let v = 0; v < net.stepCount; v++) {
     if (net.hands[v]) work[PLAN_HANDS]! += net.dur[v]!
     if (net.station[v]) work[net.station[v]!]! += net.dur[v]!
   }
-  return Math.max(times.length, ...work.map((w, r) => (w && Number.isFinite(net.cap[r]) ? Math.ceil(w / net.cap[r]!) : 0)))
+  return work
+}
+
+/** No plan can be shorter than this (ms): the critical path, and each resource's work ÷ its capacity. */
+function lowerBoundMs(net: PlanNet, times: PlanTimes): number {
+  return Math.max(times.length, ...workOf(net).map((w, r) => (w && Number.isFinite(net.cap[r]) ? Math.ceil(w / net.cap[r]!) : 0)))
 }
 
 /** The best plan over every rule, each with its forward–backward justification; stops early at the lower bound. */
@@ -144,7 +55,7 @@ function bestSchedule(net: PlanNet, times: PlanTimes): { S: Float64Array; rule: 
   }
   const finish = new Float64Array(n)
   const start = new Float64Array(n)
-  const rules = [...priorityRules(net, times), ...sampledRules(net, times, () => best!)]
+  const rules = [...planPriorityRules(net, times), ...planSampledRules(net, times, () => best!)]
   for (const rule of rules) {
     if (bestLength <= lower) break
     const prio = rule.prio()
@@ -157,8 +68,10 @@ function bestSchedule(net: PlanNet, times: PlanTimes): { S: Float64Array; rule: 
     if (!back) continue
     const length = lengthOf(net, back)
     for (let v = 0; v < n; v++) back[v] = length - back[v]! - dur[v]!
-    consider(back, `${rule.name}, right-justified`)
-    consider(forwardScheme(back, prio), `${rule.name}, justified`)
+    // Forwards again by start order; on a tie the plan that starts everything early is kept.
+    const again = forwardScheme(back, prio)
+    if (again && lengthOf(net, again) <= length) consider(again, `${rule.name}, justified`)
+    else consider(back, `${rule.name}, right-justified`)
   }
   if (!best) throw new Error('The cook plan found no schedule; this is a fault in the planner.')
   return { S: best, rule: bestRule }
@@ -254,11 +167,7 @@ function leadCues(net: PlanNet, S: Float64Array, handsLane: (string | null)[]): 
 }
 
 function lowerBounds(net: PlanNet, times: PlanTimes, makespan: number): PlanBounds {
-  const work = [0, 0, 0, 0]
-  for (let v = 0; v < net.stepCount; v++) {
-    if (net.hands[v]) work[PLAN_HANDS]! += net.dur[v]!
-    if (net.station[v]) work[net.station[v]!]! += net.dur[v]!
-  }
+  const work = workOf(net)
   const share = (r: number) => (work[r]! && Number.isFinite(net.cap[r]) ? work[r]! / net.cap[r]! / 1000 : 0)
   const bounds = { criticalPath: times.length / 1000, handsOn: share(0), burners: share(1), ovens: share(2), counters: share(3) }
   const lower = Math.max(...Object.values(bounds))

@@ -305,6 +305,7 @@ describe('refusals', () => {
       [{ steps: [{ id: 'a', duration: Number.NaN, handsOn: true, station: null }] }, /duration/, ['a']],
       [{ steps: [{ id: 'a', duration: 5, handsOn: 'yes' as unknown as boolean, station: null }] }, /hands-on or unattended/, ['a']],
       [{ steps: [{ id: 'a', duration: 5, handsOn: true, station: 'grill' as never }] }, /unknown station “grill”/, ['a']],
+      [{ steps: [{ id: 'a', duration: 5, handsOn: true, station: 'toString' as never }] }, /unknown station/, ['a']],
       [{ steps: [step('a', 1, true, null), step('b', 1, true, null, { links: [{ from: 'a', lag: -60 }] })] }, /zero or more seconds/, ['a', 'b']],
       [{ steps: [step('a', 1, true, null), step('b', 1, true, null, { links: [{ from: 'a', kind: 'sideways' as never }] })] }, /unknown kind/, ['b']],
       [{ steps: [step('a', 1, true, null)], kitchen: { burners: 2.5 } }, /burners must be a whole number/, []],
