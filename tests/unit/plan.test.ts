@@ -10,10 +10,10 @@ const WEEK = 7 * 24 * 3600
 
 /**
  * Hillier & Lieberman, Introduction to Operations Research, chapter "Project Management with PERT/CPM",
- * the prototype example "the Reliable Construction Co. project" and the section on scheduling it with
- * PERT/CPM (chapter 10 in the 7th–9th editions). The activity list, the durations (weeks) and the
- * immediate predecessors are reproduced from memory; the published figures we expect, also from
- * memory: the project takes 44 weeks, the critical path is START → A → B → C → E → F → J → L → N →
+ * the prototype example "the Reliable Construction Co. project" and the section "Scheduling a project
+ * with PERT/CPM" (sections 10.1 and 10.3 in the 8th and 9th editions, from memory). The activity
+ * list, the durations (weeks) and the immediate predecessors are reproduced from memory; the
+ * published figures we expect, also from memory: the project takes 44 weeks, the critical path is START → A → B → C → E → F → J → L → N →
  * FINISH, and the slacks are D 4, G 4, H 4, I 2, K 1, M 4 and 0 for the others. The earliest and
  * latest starts below follow from the forward and backward passes the book describes, worked by hand.
  */
