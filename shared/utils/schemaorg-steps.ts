@@ -1,0 +1,129 @@
+// schema.org recipeInstructions → Hobline steps. schema.org allows Text, a list of Text, HowToStep,
+// HowToSection (a named group of steps; its name becomes the step group) and, inside a step,
+// HowToDirection and HowToTip. HowToDirection carries performTime, prepTime and totalTime
+// (ISO 8601), which become the step's duration; HowToStep itself has no times, but one that
+// carries them anyway is read too. ListItem and ItemList wrappers are unwrapped.
+// Hobline's own step fields travel in "hobline:"-prefixed properties (see schemaorg-export.ts).
+import type { RecipeImportProblem, RecipeStepDraft } from '../types/recipe'
+import { isCautionId, suggestStepCautions } from './cautions'
+import { parseIsoDuration } from './duration'
+import { cleanSchemaText, hasSchemaType, isJsonObject, schemaText, type JsonObject } from './schemaorg-read'
+
+/** Hobline's JSON-LD vocabulary for what schema.org has no property for. */
+export const HOBLINE_LD_PREFIX = 'hobline'
+export const HOBLINE_LD_NAMESPACE = 'https://hobline.invalid/ns#'
+
+/** A Hobline extension property of a node, by compact ("hobline:x") or full IRI. */
+export function hoblineProperty(node: JsonObject, name: string): unknown {
+  return node[`${HOBLINE_LD_PREFIX}:${name}`] ?? node[`${HOBLINE_LD_NAMESPACE}${name}`]
+}
+
+interface StepContext {
+  steps: RecipeStepDraft[]
+  problems: RecipeImportProblem[]
+  tips: string[]
+}
+
+const asList = (v: unknown): unknown[] => (v === undefined || v === null ? [] : Array.isArray(v) ? v : [v])
+const unwrap = (v: unknown): unknown => (isJsonObject(v) && hasSchemaType(v, 'ListItem') && v.item !== undefined ? v.item : v)
+
+/** Seconds of a HowToDirection (or a step that carries times): totalTime, else performTime + prepTime. */
+function timeOf(node: JsonObject, field: string, problems: RecipeImportProblem[]): number | null {
+  const read = (key: string) => {
+    const v = node[key]
+    if (v === undefined || v === null || v === '') return null
+    try {
+      return parseIsoDuration(String(v))
+    } catch (e) {
+      problems.push({ field: `${field}.${key}`, reason: (e as Error).message })
+      return null
+    }
+  }
+  const total = read('totalTime')
+  const perform = read('performTime')
+  const prep = read('prepTime')
+  if (total !== null) return total
+  return perform === null && prep === null ? null : (perform ?? 0) + (prep ?? 0)
+}
+
+function extensions(node: JsonObject, field: string, problems: RecipeImportProblem[], text: string): Partial<RecipeStepDraft> & { durationMaxOverride?: number | null } {
+  const out: Partial<RecipeStepDraft> & { durationMaxOverride?: number | null } = {}
+  const bad = (name: string, want: string) => problems.push({ field: `${field}.${HOBLINE_LD_PREFIX}:${name}`, reason: `should be ${want}; ignored` })
+  const script = hoblineProperty(node, 'script')
+  if (script !== undefined) Array.isArray(script) && script.every((l) => typeof l === 'string') ? (out.script = script as string[]) : bad('script', 'a list of lines')
+  const handsOn = hoblineProperty(node, 'handsOn')
+  if (handsOn !== undefined) typeof handsOn === 'boolean' ? (out.handsOn = handsOn) : bad('handsOn', 'true or false')
+  const station = hoblineProperty(node, 'station')
+  if (station !== undefined) station === null || station === 'burner' || station === 'oven' || station === 'counter' ? (out.station = station) : bad('station', '"burner", "oven", "counter" or null')
+  const after = hoblineProperty(node, 'after')
+  if (after !== undefined) Array.isArray(after) && after.every((n) => Number.isInteger(n) && n > 0) ? (out.after = after as number[]) : bad('after', 'a list of earlier step positions')
+  for (const name of ['cameraShot', 'cameraNote'] as const) {
+    const v = hoblineProperty(node, name)
+    if (v !== undefined) v === null || typeof v === 'string' ? (out[name] = v) : bad(name, 'text')
+  }
+  const cautions = hoblineProperty(node, 'cautions')
+  if (cautions !== undefined) Array.isArray(cautions) && cautions.every(isCautionId) ? (out.cautions = cautions) : bad('cautions', 'a list of caution ids')
+  else out.cautions = [...new Set(suggestStepCautions(text).map((c) => c.id))]
+  const max = hoblineProperty(node, 'durationMax')
+  if (max !== undefined) {
+    try {
+      out.durationMaxOverride = parseIsoDuration(String(max))
+    } catch (e) {
+      problems.push({ field: `${field}.${HOBLINE_LD_PREFIX}:durationMax`, reason: (e as Error).message })
+    }
+  }
+  return out
+}
+
+function addStep(ctx: StepContext, node: JsonObject | null, text: string, group: string | null, field: string, seconds: number | null): void {
+  const ext = node ? extensions(node, field, ctx.problems, text) : { cautions: [...new Set(suggestStepCautions(text).map((c) => c.id))] }
+  const { durationMaxOverride, ...fields } = ext as typeof ext & { durationMaxOverride?: number | null }
+  ctx.steps.push({
+    position: ctx.steps.length + 1, text, script: [], handsOn: true, durationMin: seconds, durationMax: durationMaxOverride ?? seconds,
+    station: null, after: [], cameraShot: null, cameraNote: null, cautions: [], group, ...fields,
+  })
+}
+
+function stepFromNode(node: JsonObject, group: string | null, field: string, ctx: StepContext): void {
+  const parts = asList(node.itemListElement).map(unwrap)
+  const directions = parts.filter((p): p is JsonObject => hasSchemaType(p, 'HowToDirection'))
+  for (const tip of parts.filter((p) => hasSchemaType(p, 'HowToTip'))) {
+    const t = schemaText((tip as JsonObject).text)
+    if (t) ctx.tips.push(t)
+  }
+  const text = schemaText(node.text) ?? (directions.map((d) => schemaText(d.text)).filter(Boolean).join(' ') || schemaText(node.name))
+  if (!text) return void ctx.problems.push({ field, reason: 'the step has no text; skipped' })
+  const times = [node, ...directions].map((n, i) => timeOf(n, i ? `${field}.itemListElement[${i - 1}]` : field, ctx.problems)).filter((t): t is number => t !== null)
+  addStep(ctx, node, text, group, field, times.length ? times.reduce((a, b) => a + b, 0) : null)
+}
+
+function walk(v: unknown, group: string | null, field: string, ctx: StepContext): void {
+  v = unwrap(v)
+  if (typeof v === 'string') {
+    const lines = cleanSchemaText(v, true).split('\n').map((l) => l.replace(/^(?:step\s*)?\d+\s*[.):]\s+/i, '').trim()).filter(Boolean)
+    lines.forEach((line) => addStep(ctx, null, line, group, field, null))
+    return
+  }
+  if (Array.isArray(v)) return v.forEach((x, i) => walk(x, group, `${field}[${i}]`, ctx))
+  if (!isJsonObject(v)) return void ctx.problems.push({ field, reason: 'not text or a HowToStep; skipped' })
+  if (hasSchemaType(v, 'HowToSection')) {
+    const name = schemaText(v.name)
+    return walk(v.itemListElement ?? [], name ?? group, `${field}.itemListElement`, ctx)
+  }
+  if (hasSchemaType(v, 'HowToTip')) {
+    const t = schemaText(v.text)
+    if (t) ctx.tips.push(t)
+    return
+  }
+  if (hasSchemaType(v, 'ItemList')) return walk(v.itemListElement ?? [], group, `${field}.itemListElement`, ctx)
+  if (hasSchemaType(v, 'HowToStep') || hasSchemaType(v, 'HowToDirection') || typeof v.text === 'string') return stepFromNode(v, group, field, ctx)
+  ctx.problems.push({ field, reason: `a ${String(v['@type'] ?? 'node without @type')} is not a step; skipped` })
+}
+
+/** Steps from a recipe's recipeInstructions, with problems listed and tips returned for the notes. */
+export function readSchemaOrgInstructions(value: unknown): { steps: RecipeStepDraft[]; problems: RecipeImportProblem[]; tips: string[] } {
+  const ctx: StepContext = { steps: [], problems: [], tips: [] }
+  if (value === undefined || value === null) ctx.problems.push({ field: 'recipeInstructions', reason: 'missing; the recipe has no steps yet' })
+  else walk(value, null, 'recipeInstructions', ctx)
+  return ctx
+}
