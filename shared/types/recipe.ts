@@ -25,8 +25,8 @@ export interface RecipeIngredientDraft {
   /** Ingredient group heading: "For the sauce". */
   group: string | null
   allergens: IngredientAllergens
-  /** The studio price this ingredient is costed with. */
-  priceId?: string | null
+  /** The studio price this ingredient is costed with (not exported: prices belong to the studio). */
+  priceId?: string | number | null
 }
 
 export interface RecipeStepDraft {

@@ -8,13 +8,16 @@ import { UnitConversionError, unitKind, unitLabel } from './units'
 import { convertIngredientAmount, type UserDensity } from './density'
 import { currencyMinorDigits, roundMinor } from './money'
 
+/** A price's id as the studio stores it. */
+export type PriceId = string | number
+
 export interface StudioPrice {
-  id: string
+  id: PriceId
   item: string
   /** Package size in `packageUnit`; for things priced each, the number in the pack. */
   packageSize: number
-  /** null: priced by the piece ("each"). */
-  packageUnit: UnitId | null
+  /** null or "each": priced by the piece. */
+  packageUnit: UnitId | 'each' | null
   /** Package price in integer minor units of `currency`. */
   priceMinor: number
   currency: string
@@ -30,7 +33,7 @@ export interface CostedIngredient {
   max: number | null
   unit: UnitId | null
   optional: boolean
-  priceId?: string | null
+  priceId?: PriceId | null
 }
 
 export type CostLineStatus = 'priced' | 'no-price' | 'no-amount' | 'cannot-convert' | 'other-currency'
@@ -40,7 +43,7 @@ export interface CostLine {
   item: string
   optional: boolean
   status: CostLineStatus
-  priceId: string | null
+  priceId: PriceId | null
   /** Amount used for the recipe as written, in the package's unit. */
   amountUsed: number | null
   /** Cost for the recipe as written, in exact (unrounded) minor units. */
@@ -81,7 +84,7 @@ export interface RecipeCost {
   budget: { perServingMinor: number; over: boolean; overWithOptional: boolean } | null
 }
 
-const isEach = (u: UnitId | null) => u === null || u === 'piece'
+const isEach = (u: UnitId | 'each' | null): u is 'each' | 'piece' | null => u === null || u === 'each' || u === 'piece'
 
 function amountFor(ing: CostedIngredient, rangeAt: CostOptions['rangeAt']): number | null {
   const lo = ing.min ?? ing.max
@@ -90,11 +93,11 @@ function amountFor(ing: CostedIngredient, rangeAt: CostOptions['rangeAt']): numb
   return rangeAt === 'min' ? lo : rangeAt === 'mid' ? (lo + hi) / 2 : hi
 }
 
-function costLine(ing: CostedIngredient, prices: ReadonlyMap<string, StudioPrice>, o: CostOptions, scale: number): CostLine {
+function costLine(ing: CostedIngredient, prices: ReadonlyMap<PriceId, StudioPrice>, o: CostOptions, scale: number): CostLine {
   const base = { key: ing.key, item: ing.item, optional: ing.optional, priceId: ing.priceId ?? null, amountUsed: null, costExact: null, costMinor: null }
   const amount = amountFor(ing, o.rangeAt)
   if (amount === null) return { ...base, status: 'no-amount', message: `"${ing.item}" has no amount, so it is not costed` }
-  const price = ing.priceId ? prices.get(ing.priceId) : undefined
+  const price = ing.priceId != null ? prices.get(ing.priceId) : undefined
   if (!price) return { ...base, status: 'no-price', message: `"${ing.item}" has no price; link it to one in the studio price list` }
   if (price.currency !== o.currency) {
     return { ...base, status: 'other-currency', message: `The price for "${ing.item}" is in ${price.currency}, the studio costs in ${o.currency}; enter a ${o.currency} price` }
@@ -106,15 +109,16 @@ function costLine(ing: CostedIngredient, prices: ReadonlyMap<string, StudioPrice
   if (isEach(ing.unit) && isEach(price.packageUnit)) used = amount
   else if (isEach(ing.unit) || isEach(price.packageUnit)) {
     const byPiece = isEach(ing.unit) ? 'counted by the piece' : `measured in ${unitLabel(ing.unit!, 2)}`
-    const priced = isEach(price.packageUnit) ? 'priced by the piece' : `priced per ${unitLabel(price.packageUnit!, 1)}`
+    const priced = isEach(price.packageUnit) ? 'priced by the piece' : `priced per ${unitLabel(price.packageUnit as UnitId, 1)}`
     return { ...base, status: 'cannot-convert', message: `"${ing.item}" is ${byPiece} but ${priced}; use the same kind of unit in the recipe and the price` }
   } else {
     try {
-      used = convertIngredientAmount(amount, ing.unit!, price.packageUnit!, ing.item, o.densities)
+      used = convertIngredientAmount(amount, ing.unit!, price.packageUnit as UnitId, ing.item, o.densities)
     } catch (e) {
       if (!(e instanceof UnitConversionError)) throw e
-      const hint = unitKind(ing.unit!) === 'count' || unitKind(price.packageUnit!) === 'count'
-        ? `"${ing.item}" is used in ${unitLabel(ing.unit!, 2)} but priced per ${unitLabel(price.packageUnit!, 1)}; use the same unit in both`
+      const pu = price.packageUnit as UnitId
+      const hint = unitKind(ing.unit!) === 'count' || unitKind(pu) === 'count'
+        ? `"${ing.item}" is used in ${unitLabel(ing.unit!, 2)} but priced per ${unitLabel(pu, 1)}; use the same unit in both`
         : e.message
       return { ...base, status: 'cannot-convert', message: hint }
     }

@@ -69,6 +69,11 @@ describe('costRecipe: worked example (4 servings, GBP)', () => {
 })
 
 describe('costRecipe rules', () => {
+  it('takes "each" and numeric price ids as the studio stores them', () => {
+    const p = [{ id: 7, item: 'lemons', packageSize: 4, packageUnit: 'each' as const, priceMinor: 120, currency: 'GBP' }]
+    const c = costRecipe([{ key: 'lemon', item: 'lemon', min: 1, max: 1, unit: null, optional: false, priceId: 7 }], p, { currency: 'GBP', servings: 1 })
+    expect(c.totalMinor).toBe(30)
+  })
   it('rounds once at the end, not per line: three lines of 0.4p make 1p, not 0p', () => {
     const p = [price('p', 'x', 10, 'g', 4)]
     const c = costRecipe([ing('a', 1, 'g', 'p'), ing('b', 1, 'g', 'p'), ing('c', 1, 'g', 'p')], p, { currency: 'GBP', servings: 1 })
