@@ -202,3 +202,14 @@ export function nearestGasMark(value: number, from: TemperatureScale = 'C'): Gas
   if (raw > 9) notes.push('This is hotter than gas mark 9.')
   return { mark, approximate: true, nominalF: 250 + 25 * mark, note: notes.join(' ') }
 }
+
+/**
+ * An oven setting in the other scale, rounded to 5 degrees as oven dials are marked (common
+ * practice): ovenTemperatureText(180, 'C') → { text: "355 °F", exact: 356 }. The exact value is
+ * returned for the hover.
+ */
+export function ovenTemperatureText(value: number, from: TemperatureScale): { text: string; exact: number; scale: TemperatureScale } {
+  const exact = convertTemperature(value, from)
+  const scale: TemperatureScale = from === 'C' ? 'F' : 'C'
+  return { text: `${Math.round(exact / 5) * 5} °${scale}`, exact, scale }
+}

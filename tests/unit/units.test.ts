@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
 import {
-  UNIT_IDS, UnitConversionError, convertAmount, convertTemperature, isUnitId, nearestGasMark,
+  UNIT_IDS, UnitConversionError, convertAmount, convertTemperature, isUnitId, nearestGasMark, ovenTemperatureText,
   unitBaseSize, unitKind, unitLabel, type UnitId,
 } from '../../shared/utils/units'
 
@@ -161,6 +161,11 @@ describe('temperature, NIST SP 811 (t/°C = (t/°F − 32)/1.8)', () => {
     expect(convertTemperature(350, 'F')).toBeCloseTo(176.6667, 4)
     expect(convertTemperature(180, 'C')).toBeCloseTo(356, 10)
     expect(convertTemperature(220, 'C')).toBeCloseTo(428, 10)
+  })
+  it('shows an oven setting in the other scale to 5 degrees, keeping the exact value (rounding: common practice)', () => {
+    expect(ovenTemperatureText(180, 'C')).toEqual({ text: '355 °F', exact: 356, scale: 'F' })
+    expect(ovenTemperatureText(350, 'F').text).toBe('175 °C') // 176.67 °C
+    expect(ovenTemperatureText(425, 'F').text).toBe('220 °C') // 218.33 °C
   })
   it('refuses an unknown scale or a non-number', () => {
     expect(() => convertTemperature(1, 'K' as 'C')).toThrow(/"C" or "F"/)
