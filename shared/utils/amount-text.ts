@@ -59,7 +59,8 @@ const READERS: Reader[] = [
   { re: new RegExp(`(\\d*[.,]\\d+|\\d+)${END}`, 'uy'), value: (m) => Number(m[1]!.replace(',', '.')) },
   { re: new RegExp(`(\\d*[.,]\\d+|\\d+)(?=\\p{L})`, 'uy'), value: (m) => Number(m[1]!.replace(',', '.')) }, // 400g, 1.5kg
   { re: new RegExp(`(${WORD})${END}`, 'iuy'), value: (m) => WORDS[m[1]!.toLowerCase()]! },
-  { re: new RegExp(`an?(?= )`, 'iuy'), value: () => 1 },
+  // "a pinch", "an onion" are one; "a few", "a little", "a splash" are no number at all
+  { re: new RegExp(`an?(?= (?!(?:few|little|couple|bit|splash|drizzle|dollop|knob|glug|squeeze|sprinkle|sprinkling|touch|generous)\\b))`, 'iuy'), value: () => 1 },
 ]
 
 export interface AmountReading {

@@ -45,6 +45,11 @@ describe('numbers (common practice)', () => {
     expect(amountOf('2 and a half cups milk')).toEqual([2.5, 2.5, 'cup'])
     expect(amountOf('a dozen eggs')).toEqual([12, 12, null])
   })
+  it('reads "a few", "a little", "a splash" as no amount, keeping the words', () => {
+    expect(parseQuantity('a few sprigs of thyme')).toMatchObject({ min: null, item: 'a few sprigs of thyme' })
+    expect(parseQuantity('a splash of milk')).toMatchObject({ min: null, item: 'a splash of milk' })
+    expect(parseQuantity('a large onion')).toMatchObject({ min: 1, item: 'large onion' })
+  })
   it('never reads a number out of a word (one in onions, a in apples)', () => {
     expect(parseQuantity('onions').min).toBeNull()
     expect(parseQuantity('apples').item).toBe('apples')
