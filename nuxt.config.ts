@@ -51,6 +51,8 @@ export default defineNuxtConfig({
   },
   nitro: {
     experimental: { websocket: true },
+    // Node 20 runs ES2022 natively (the unit maths uses BigInt literals for exact ratios).
+    esbuild: { options: { target: 'es2022' } },
   },
   typescript: { strict: true },
 })

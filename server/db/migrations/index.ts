@@ -5,6 +5,7 @@ import m0001 from './0001-studios'
 import m0002 from './0002-accounts'
 import m0003 from './0003-mail'
 import m0004 from './0004-join-codes'
+import m0005 from './0005-recipes'
 
 export interface MigrationContext {
   queryInterface: QueryInterface
@@ -19,4 +20,4 @@ export interface Migration {
   down: (ctx: MigrationContext) => Promise<void>
 }
 
-export const migrations: Migration[] = [m0001, m0002, m0003, m0004]
+export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005]

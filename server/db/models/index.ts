@@ -2,16 +2,18 @@
 import type { Sequelize } from 'sequelize'
 import { Invite, Membership, PasswordReset, User, initAccountModels } from './account'
 import { Mail, initMailModel } from './mail'
+import { Price, Recipe, RecipeIngredient, RecipeStep, initRecipeModels } from './recipe'
 import { JoinCode, Shoot, initShootModels } from './shoot'
 import { Studio, initStudio } from './studio'
 
-export { Invite, JoinCode, Mail, Membership, PasswordReset, Shoot, Studio, User }
+export { Invite, JoinCode, Mail, Membership, PasswordReset, Price, Recipe, RecipeIngredient, RecipeStep, Shoot, Studio, User }
 
 export function initModels(sequelize: Sequelize) {
   initStudio(sequelize)
   initAccountModels(sequelize)
   initShootModels(sequelize)
   initMailModel(sequelize)
+  initRecipeModels(sequelize)
 
   User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' })
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' })

@@ -6,6 +6,12 @@ export class Studio extends Model<InferAttributes<Studio>, InferCreationAttribut
   declare slug: string
   declare locale: CreationOptional<string>
   declare currency: CreationOptional<string>
+  /** Budget target per serving in minor units of the currency; null for none. */
+  declare budgetPerServingMinor: CreationOptional<number | null>
+  /** 'cup' (US, 236.6 mL) or 'metric-cup' (250 mL) for recipes that say "cup". */
+  declare cupUnit: CreationOptional<string>
+  /** The unit system shoots and views default to: 'metric' or 'us'. */
+  declare unitSystem: CreationOptional<string>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 }
@@ -18,6 +24,9 @@ export function initStudio(sequelize: Sequelize) {
       slug: { type: DataTypes.STRING(80), allowNull: false, unique: true },
       locale: { type: DataTypes.STRING(35), allowNull: false, defaultValue: 'en-GB' },
       currency: { type: DataTypes.STRING(3), allowNull: false, defaultValue: 'GBP' },
+      budgetPerServingMinor: DataTypes.INTEGER,
+      cupUnit: { type: DataTypes.STRING(12), defaultValue: 'cup' },
+      unitSystem: { type: DataTypes.STRING(8), defaultValue: 'metric' },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

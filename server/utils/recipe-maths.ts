@@ -1,0 +1,103 @@
+// Scaling, costing and the recipe list: the shared domain core applied to stored recipes.
+import { Op } from 'sequelize'
+import { Price, Recipe, RecipeIngredient, Studio } from '../db/models'
+import type { z } from 'zod'
+import type { studioSettingsSchema } from '../../shared/utils/recipe-schemas'
+import type { UnitId } from '../../shared/utils/units'
+
+export async function scaledRecipe(recipeId: number, studioId: number, servings?: number, units?: 'metric' | 'us') {
+  const recipe = (await loadRecipe(recipeId))!
+  const settings = await studioSettings(studioId)
+  const system = units ?? (settings.unitSystem as 'metric' | 'us')
+  const target = servings ?? recipe.servings
+  const draft = recipeDraft(recipe)
+  const scaled = scaleRecipeIngredients(draft.ingredients, recipe.servings, target, { system, metricCups: settings.cupUnit === 'metric-cup' })
+  const byKey = new Map(recipe.ingredients.map((i) => [i.key, i]))
+  const factor = target / recipe.servings
+  return {
+    servings: target,
+    units: system,
+    ingredients: scaled.ingredients.map((s) => {
+      const ing = byKey.get(s.key)!
+      return { id: ing.id, key: s.key, item: s.item, prep: s.prep, min: s.min, max: s.max, unit: s.unit, text: s.text, exactText: s.exactText, optional: s.optional, toTaste: s.toTaste, group: s.group }
+    }),
+    steps: recipe.steps.map((step) => {
+      const rendered = renderStepText(step.text, { system, metricCups: settings.cupUnit === 'metric-cup', ingredients: draft.ingredients, fromServings: recipe.servings, toServings: target })
+      return { id: step.id, position: step.position, text: rendered.text, segments: rendered.segments, problems: rendered.problems }
+    }),
+    factor,
+  }
+}
+
+async function pricesFor(studioId: number) {
+  return (await listPrices(studioId)).map(studioPrice)
+}
+
+function costInput(ingredients: { key: string; item: string; min: number | null; max: number | null; unit: string | null; optional: boolean; priceId: number | null }[]) {
+  return ingredients.map((i) => ({ key: i.key, item: i.item, min: i.min, max: i.max, unit: i.unit as UnitId | null, optional: i.optional, priceId: i.priceId ? String(i.priceId) : null }))
+}
+
+export async function recipeCostView(recipeId: number, studioId: number, servings?: number) {
+  const recipe = (await loadRecipe(recipeId))!
+  const settings = await studioSettings(studioId)
+  const cost = costRecipe(costInput(recipe.ingredients), await pricesFor(studioId), {
+    currency: settings.currency, servings: recipe.servings, forServings: servings ?? recipe.servings, budgetPerServingMinor: settings.budgetPerServingMinor,
+  })
+  const dec = (minor: number) => minorToDecimal(minor, cost.currency)
+  const fmt = (minor: number) => formatMoney(minor, cost.currency, settings.locale)
+  return {
+    currency: cost.currency,
+    locale: settings.locale,
+    servings: cost.servings,
+    total: dec(cost.totalMinor),
+    totalWithOptional: dec(cost.totalWithOptionalMinor),
+    perServing: dec(cost.perServingMinor),
+    perServingWithOptional: dec(cost.perServingWithOptionalMinor),
+    formatted: { total: fmt(cost.totalMinor), perServing: fmt(cost.perServingMinor), perServingWithOptional: fmt(cost.perServingWithOptionalMinor) },
+    minor: { total: cost.totalMinor, totalWithOptional: cost.totalWithOptionalMinor, perServing: cost.perServingMinor, perServingWithOptional: cost.perServingWithOptionalMinor },
+    complete: cost.complete,
+    budget: cost.budget && { ...cost.budget, perServing: dec(cost.budget.perServingMinor), formatted: fmt(cost.budget.perServingMinor) },
+    lines: cost.lines.map((l) => ({ ...l, cost: l.costMinor === null ? null : dec(l.costMinor), formatted: l.costMinor === null ? null : fmt(l.costMinor) })),
+    missing: cost.missing.map((l) => ({ key: l.key, item: l.item, message: l.message })),
+    problems: cost.problems.map((l) => ({ key: l.key, item: l.item, message: l.message })),
+  }
+}
+
+export async function listRecipes(studioId: number, filters: { q?: string; tag?: string; allergen?: string; without?: string }) {
+  await useDb()
+  const settings = await studioSettings(studioId)
+  const where: Record<string | symbol, unknown> = { studioId }
+  if (filters.q) where[Op.or] = [{ title: { [Op.like]: `%${filters.q}%` } }, { summary: { [Op.like]: `%${filters.q}%` } }]
+  const rows = await Recipe.findAll({ where, include: [{ model: RecipeIngredient, as: 'ingredients' }], order: [['title', 'ASC']] })
+  const prices = await pricesFor(studioId)
+  const recipes = rows.map((r) => {
+    const ings = (r as Recipe & { ingredients: RecipeIngredient[] }).ingredients
+    const allergens = listRecipeAllergens(ings as never)
+    const cost = costRecipe(costInput(ings), prices, { currency: settings.currency, servings: r.servings, budgetPerServingMinor: settings.budgetPerServingMinor })
+    return {
+      id: r.id, title: r.title, summary: r.summary, servings: r.servings, tags: r.tags, photo: photoUrl(r.photo), updatedAt: r.updatedAt,
+      allergens: { eu: allergens.eu.map((a: { id: string }) => a.id), us: allergens.us.map((a: { id: string }) => a.id) },
+      cost: {
+        perServing: minorToDecimal(cost.perServingMinor, cost.currency),
+        perServingWithOptional: minorToDecimal(cost.perServingWithOptionalMinor, cost.currency),
+        formatted: formatMoney(cost.perServingMinor, cost.currency, settings.locale),
+        complete: cost.complete,
+        overBudget: cost.budget?.over ?? false,
+      },
+    }
+  })
+  const filtered = recipes.filter((r) =>
+    (!filters.tag || r.tags.includes(filters.tag))
+    && (!filters.allergen || r.allergens.eu.includes(filters.allergen) || r.allergens.us.includes(filters.allergen))
+    && (!filters.without || (!r.allergens.eu.includes(filters.without) && !r.allergens.us.includes(filters.without))))
+  return { recipes: filtered, currency: settings.currency, budgetPerServingMinor: settings.budgetPerServingMinor }
+}
+
+export async function updateStudioSettings(studioId: number, body: z.output<typeof studioSettingsSchema>) {
+  await useDb()
+  if (body.currency) currencyMinorDigits(body.currency) // refuses a code Intl does not know
+  await Studio.update(body, { where: { id: studioId } })
+  return studioSettings(studioId)
+}
+
+export { Price }

@@ -1,0 +1,133 @@
+// Recipes: load, create, save with optimistic locking, delete, list. Plain objects out.
+import type { H3Event } from 'h3'
+import { Op } from 'sequelize'
+import { Recipe, RecipeIngredient, RecipeStep, Studio } from '../db/models'
+import type { RecipeCreateBody, RecipeUpdateBody } from '../../shared/utils/recipe-schemas'
+import type { StudioAction } from '../../shared/utils/roles'
+import type { RecipeDraft } from '../../shared/types/recipe'
+
+type Loaded = Recipe & { ingredients: RecipeIngredient[]; steps: RecipeStep[] }
+
+export function photoUrl(key: string | null | undefined) {
+  return key ? { url: `/api/photos/${key}`, thumbUrl: `/api/photos/${key}?size=thumb` } : null
+}
+
+export function recipeView(r: Loaded) {
+  const ingredients = [...r.ingredients].sort((a, b) => a.position - b.position).map((i) => ({
+    id: i.id, key: i.key, position: i.position, min: i.min, max: i.max, unit: i.unit, item: i.item, prep: i.prep,
+    optional: i.optional, toTaste: i.toTaste, group: i.group, allergens: i.allergens, priceId: i.priceId,
+  }))
+  const steps = [...r.steps].sort((a, b) => a.position - b.position).map((s) => ({
+    id: s.id, position: s.position, text: s.text, script: s.script, handsOn: s.handsOn, durationMin: s.durationMin, durationMax: s.durationMax,
+    station: s.station, after: s.after, cameraShot: s.cameraShot, cameraNote: s.cameraNote, cautions: s.cautions, group: s.group, photo: photoUrl(s.photo),
+  }))
+  return {
+    id: r.id, studioId: r.studioId, version: r.version, title: r.title, summary: r.summary, servings: r.servings, yieldText: r.yieldText,
+    tags: r.tags, notes: r.notes, times: r.times, photo: photoUrl(r.photo), ingredients, steps,
+    allergens: listRecipeAllergens(ingredients as never), updatedAt: r.updatedAt,
+  }
+}
+
+export type RecipeView = ReturnType<typeof recipeView>
+
+/** The recipe as a draft (shared/types/recipe.ts), for scaling, costing and export. */
+export function recipeDraft(view: RecipeView): RecipeDraft {
+  return {
+    title: view.title, summary: view.summary, servings: view.servings, yieldText: view.yieldText, tags: view.tags, notes: view.notes, times: view.times,
+    ingredients: view.ingredients.map(({ id: _id, priceId, ...i }) => ({ ...i, priceId: priceId === null ? null : String(priceId) })) as RecipeDraft['ingredients'],
+    steps: view.steps.map(({ id: _id, photo: _photo, ...s }) => s) as RecipeDraft['steps'],
+  }
+}
+
+const withParts = { include: [{ model: RecipeIngredient, as: 'ingredients' }, { model: RecipeStep, as: 'steps' }] }
+
+export async function loadRecipe(id: number): Promise<RecipeView | null> {
+  await useDb()
+  const r = (await Recipe.findByPk(id, withParts)) as Loaded | null
+  return r ? recipeView(r) : null
+}
+
+/** The guard for /api/recipes/:id/…: the caller may do `action` in the recipe's studio. */
+export async function requireRecipe(event: H3Event, action: StudioAction, param = 'id') {
+  const recipeId = routeId(event, param)
+  await useDb()
+  const row = await Recipe.findByPk(recipeId, { attributes: ['id', 'studioId'] })
+  if (!row) {
+    // Unknown id and another studio's recipe look the same, once the caller is known to be signed in.
+    await requireMember(event)
+    throw createError({ statusCode: 404, statusMessage: 'There is no such recipe.' })
+  }
+  const caller = await authorize(event, { studioId: row.studioId }, action)
+  if (caller.kind !== 'member') throw createError({ statusCode: 403, statusMessage: 'This device joined one shoot only and may open nothing else.' })
+  return { caller, recipeId, studioId: row.studioId }
+}
+
+async function writeParts(recipeId: number, body: RecipeCreateBody) {
+  const keepIngredients = body.ingredients.map((i) => i.id).filter((x): x is number => !!x)
+  await RecipeIngredient.destroy({ where: { recipeId, ...(keepIngredients.length ? { id: { [Op.notIn]: keepIngredients } } : {}) } })
+  for (const [index, { id, ...ing }] of body.ingredients.entries()) {
+    const values = { ...ing, recipeId, position: index + 1, priceId: ing.priceId ?? null } as never
+    const existing = id ? await RecipeIngredient.findOne({ where: { id, recipeId } }) : null
+    if (existing) await existing.update(values)
+    else await RecipeIngredient.create(values)
+  }
+  const keepSteps = body.steps.map((s) => s.id).filter((x): x is number => !!x)
+  await RecipeStep.destroy({ where: { recipeId, ...(keepSteps.length ? { id: { [Op.notIn]: keepSteps } } : {}) } })
+  for (const [index, { id, ...step }] of body.steps.entries()) {
+    const values = { ...step, recipeId, position: index + 1 } as never
+    const existing = id ? await RecipeStep.findOne({ where: { id, recipeId } }) : null
+    if (existing) await existing.update(values)
+    else await RecipeStep.create(values)
+  }
+}
+
+function recipeFields(body: RecipeCreateBody) {
+  const { title, summary, servings, yieldText, tags, notes, times } = body
+  return { title, summary, servings, yieldText, tags, notes, times }
+}
+
+export async function createRecipe(studioId: number, body: RecipeCreateBody): Promise<RecipeView> {
+  const sequelize = await useDb()
+  const id = await sequelize.transaction(async () => {
+    const recipe = await Recipe.create({ studioId, ...recipeFields(body) })
+    await writeParts(recipe.id, body)
+    return recipe.id
+  })
+  return (await loadRecipe(id))!
+}
+
+/**
+ * Saves only when the recipe is still at the version the editor started from. Otherwise a 409
+ * that carries the newer recipe, so the page can keep the editor's text and show what changed.
+ */
+export async function saveRecipe(recipeId: number, body: RecipeUpdateBody): Promise<RecipeView> {
+  const sequelize = await useDb()
+  await sequelize.transaction(async () => {
+    const [changed] = await Recipe.update(
+      { ...recipeFields(body), version: body.version + 1 },
+      { where: { id: recipeId, version: body.version } },
+    )
+    if (changed === 0) {
+      const current = await loadRecipe(recipeId)
+      throw createError({
+        statusCode: 409,
+        statusMessage: `Someone else saved this recipe while you were editing (now version ${current?.version}). Your changes are still in the editor: compare, then save again.`,
+        data: { current },
+      })
+    }
+    await writeParts(recipeId, body)
+  })
+  return (await loadRecipe(recipeId))!
+}
+
+export async function deleteRecipe(recipeId: number) {
+  await useDb()
+  await Recipe.destroy({ where: { id: recipeId } })
+}
+
+export async function studioSettings(studioId: number) {
+  await useDb()
+  const s = await Studio.findByPk(studioId)
+  if (!s) throw createError({ statusCode: 404, statusMessage: 'There is no such studio.' })
+  return { id: s.id, name: s.name, locale: s.locale, currency: s.currency, budgetPerServingMinor: s.budgetPerServingMinor ?? null, cupUnit: s.cupUnit, unitSystem: s.unitSystem }
+}

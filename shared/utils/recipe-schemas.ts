@@ -1,0 +1,97 @@
+// Request bodies for recipes and prices. The server validates with these; the editor can check the
+// same rules before saving. Field names follow shared/types/recipe.ts.
+import { z } from 'zod'
+import { EU_ALLERGENS, US_ALLERGENS } from './allergens'
+import { CAUTION_IDS } from './cautions'
+import { UNIT_IDS, type UnitId } from './units'
+
+const text = (field: string, max: number) => z.string({ error: `${field} must be text.` }).trim().max(max, `Use at most ${max} characters for ${field}.`)
+const optionalText = (field: string, max: number) => text(field, max).nullable().optional().transform((v) => (v ? v : null))
+const amount = (field: string) => z.number({ error: `${field} must be a number or null.` }).min(0, `${field} cannot be negative.`).max(1e6, `${field} is too large.`).nullable()
+const seconds = (field: string) => z.number({ error: `${field} must be a number of seconds or null.` }).int(`${field} must be whole seconds.`).min(0).max(7 * 24 * 3600, `${field} is longer than a week.`).nullable()
+const unitId = z.enum(UNIT_IDS as [UnitId, ...UnitId[]], { error: `unit must be one of: ${UNIT_IDS.join(', ')}.` })
+
+export const recipeIngredientSchema = z.object({
+  id: z.number().int().positive().optional(),
+  key: z.string({ error: 'key must be text.' }).regex(/^[A-Za-z0-9_-]{1,40}$/, 'key uses letters, digits, "-" and "_" (at most 40).'),
+  min: amount('min'),
+  max: amount('max'),
+  unit: unitId.nullable(),
+  item: text('item', 200).min(1, 'Name the ingredient (item).'),
+  prep: optionalText('prep', 200),
+  optional: z.boolean({ error: 'optional must be true or false.' }).default(false),
+  toTaste: z.boolean({ error: 'toTaste must be true or false.' }).default(false),
+  group: optionalText('group', 120),
+  allergens: z.object({
+    eu: z.array(z.enum(EU_ALLERGENS.map((a) => a.id) as [string, ...string[]], { error: 'Unknown EU allergen group.' })).max(14),
+    us: z.array(z.enum(US_ALLERGENS.map((a) => a.id) as [string, ...string[]], { error: 'Unknown US allergen.' })).max(9),
+  }).default({ eu: [], us: [] }),
+  priceId: z.number().int().positive().nullable().optional(),
+}).refine((i) => i.min === null || i.max === null || i.min <= i.max, { message: 'The lower amount (min) must not be above the upper one (max).', path: ['min'] })
+
+export const recipeStepSchema = z.object({
+  id: z.number().int().positive().optional(),
+  text: text('text', 4000).min(1, 'Say what to do in this step (text).'),
+  script: z.array(text('script line', 1000)).max(50, 'At most 50 script lines per step.').default([]),
+  handsOn: z.boolean({ error: 'handsOn must be true or false.' }).default(true),
+  durationMin: seconds('durationMin').default(null),
+  durationMax: seconds('durationMax').default(null),
+  station: z.enum(['burner', 'oven', 'counter'], { error: 'station must be burner, oven, counter or null.' }).nullable().default(null),
+  after: z.array(z.number().int().positive()).max(50).default([]),
+  cameraShot: optionalText('cameraShot', 200),
+  cameraNote: optionalText('cameraNote', 500),
+  cautions: z.array(z.enum(CAUTION_IDS, { error: `caution must be one of: ${CAUTION_IDS.join(', ')}.` })).max(CAUTION_IDS.length).default([]),
+  group: optionalText('group', 120),
+}).refine((s) => s.durationMin === null || s.durationMax === null || s.durationMin <= s.durationMax, { message: 'The shorter duration (durationMin) must not be above the longer one (durationMax).', path: ['durationMin'] })
+
+const recipeFields = {
+  title: text('title', 160).min(1, 'Give the recipe a title.'),
+  summary: optionalText('summary', 2000),
+  servings: z.number({ error: 'servings must be a number.' }).positive('servings must be above zero.').max(1000, 'servings is at most 1000.'),
+  yieldText: optionalText('yieldText', 120),
+  tags: z.array(text('tag', 40).min(1)).max(30, 'At most 30 tags.').default([]),
+  notes: optionalText('notes', 8000),
+  times: z.object({ prep: seconds('times.prep'), cook: seconds('times.cook'), total: seconds('times.total') }).default({ prep: null, cook: null, total: null }),
+  ingredients: z.array(recipeIngredientSchema).max(200, 'At most 200 ingredients.').default([]),
+  steps: z.array(recipeStepSchema).max(200, 'At most 200 steps.').default([]),
+}
+
+export const recipeCreateSchema = z.object(recipeFields).superRefine(checkReferences)
+
+/** A save names the version it started from, so a newer save by someone else is never overwritten. */
+export const recipeUpdateSchema = z.object({ version: z.number({ error: 'version must be the number the recipe had when you opened it.' }).int().positive(), ...recipeFields }).superRefine(checkReferences)
+
+function checkReferences(r: { ingredients: { key: string }[]; steps: { after: number[] }[] }, ctx: z.RefinementCtx) {
+  const seen = new Set<string>()
+  r.ingredients.forEach((ing, i) => {
+    if (seen.has(ing.key)) ctx.addIssue({ code: 'custom', path: ['ingredients', i, 'key'], message: `Two ingredients use the key "${ing.key}"; each needs its own.` })
+    seen.add(ing.key)
+  })
+  r.steps.forEach((step, i) => {
+    for (const p of step.after) {
+      if (p >= i + 1) ctx.addIssue({ code: 'custom', path: ['steps', i, 'after'], message: `Step ${i + 1} can only wait for earlier steps, not step ${p}.` })
+    }
+  })
+}
+
+export const priceBodySchema = z.object({
+  item: text('item', 120).min(1, 'Name the item.'),
+  packageSize: z.number({ error: 'packageSize must be a number.' }).positive('packageSize must be above zero.').max(1e6),
+  packageUnit: z.union([unitId, z.literal('each')], { error: `packageUnit must be "each" or one of: ${UNIT_IDS.join(', ')}.` }),
+  priceMinor: z.number({ error: 'priceMinor must be a whole number of minor units (pence, cents).' }).int('priceMinor must be a whole number of minor units (pence, cents).').min(0).max(1e9),
+  currency: z.string({ error: 'currency must be a three-letter code such as GBP.' }).regex(/^[A-Z]{3}$/, 'currency must be a three-letter code such as GBP.'),
+  shop: optionalText('shop', 120),
+  boughtOn: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'boughtOn must be a date as YYYY-MM-DD.').nullable().optional().transform((v) => v ?? null),
+})
+
+export const studioSettingsSchema = z.object({
+  name: text('name', 120).min(1, 'Give the studio a name.').optional(),
+  locale: z.string().regex(/^[a-z]{2,3}(-[A-Z][a-z]{3})?(-[A-Z]{2}|-\d{3})?$/, 'locale must be a language tag such as en-GB.').optional(),
+  currency: z.string().regex(/^[A-Z]{3}$/, 'currency must be a three-letter code such as GBP.').optional(),
+  budgetPerServingMinor: z.number().int('budgetPerServingMinor must be whole minor units.').min(0).max(1e8).nullable().optional(),
+  cupUnit: z.enum(['cup', 'metric-cup'], { error: 'cupUnit must be cup (US, 236.6 mL) or metric-cup (250 mL).' }).optional(),
+  unitSystem: z.enum(['metric', 'us'], { error: 'unitSystem must be metric or us.' }).optional(),
+})
+
+export type RecipeCreateBody = z.output<typeof recipeCreateSchema>
+export type RecipeUpdateBody = z.output<typeof recipeUpdateSchema>
