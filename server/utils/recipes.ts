@@ -131,3 +131,21 @@ export async function studioSettings(studioId: number) {
   if (!s) throw createError({ statusCode: 404, statusMessage: 'There is no such studio.' })
   return { id: s.id, name: s.name, locale: s.locale, currency: s.currency, budgetPerServingMinor: s.budgetPerServingMinor ?? null, cupUnit: s.cupUnit, unitSystem: s.unitSystem }
 }
+
+/** Reads an import into a body ready to save, with what could not be understood. */
+export async function readRecipeImport(studioId: number, text: string) {
+  const settings = await studioSettings(studioId)
+  let imported
+  try {
+    imported = importSchemaOrgRecipe(text, { cups: settings.cupUnit === 'metric-cup' ? 'metric' : 'us' })
+  } catch (error) {
+    if (error instanceof RecipeImportError) throw createError({ statusCode: 400, statusMessage: `body: ${error.message}`, data: { field: 'body' } })
+    throw error
+  }
+  const parsed = recipeCreateSchema.safeParse(imported.recipe)
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0]!
+    throw createError({ statusCode: 422, statusMessage: `The recipe was read, but ${issue.path.join('.')}: ${issue.message}`, data: { field: issue.path.join('.'), draft: imported.recipe, problems: imported.problems } })
+  }
+  return { draft: imported.recipe, body: parsed.data, problems: imported.problems, images: imported.images }
+}

@@ -18,7 +18,7 @@ interface Row {
   body?: (ids: Ids) => unknown
   expect: Record<CallerName, number>
 }
-interface Ids { studio: number; shoot: number }
+interface Ids { studio: number; shoot: number; recipe: number }
 
 const all = (status: number) => Object.fromEntries(CALLERS.map((c) => [c, status])) as Record<CallerName, number>
 /** Studio routes: signed out 401, another studio's member 404, a device 403; members as given. */
@@ -53,6 +53,24 @@ const rows: Row[] = [
   { file: 'shoots/[id]/join-codes/index.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/join-codes`, body: () => ({ role: 'camera' }), expect: shoot(201, 403, 403, 403, 403, 403) },
   { file: 'shoots/[id]/join-codes/[codeId].delete.ts', method: 'DELETE', path: (i) => `/api/shoots/${i.shoot}/join-codes/999999`, expect: shoot(404, 403, 403, 403, 403, 403) },
   { file: 'join.post.ts', method: 'POST', path: () => '/api/join', body: () => ({ code: 'QQQ-QQQ' }), expect: all(404) },
+  { file: 'studios/[studioId]/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}`, expect: studio(200, 200, 200, 200) },
+  { file: 'studios/[studioId]/index.patch.ts', method: 'PATCH', path: (i) => `/api/studios/${i.studio}`, body: () => ({ unitSystem: 'metric' }), expect: studio(200, 403, 403, 403) },
+  { file: 'studios/[studioId]/recipes/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}/recipes`, expect: studio(200, 200, 200, 200) },
+  { file: 'studios/[studioId]/recipes/index.post.ts', method: 'POST', path: (i) => `/api/studios/${i.studio}/recipes`, body: () => ({ title: 'Matrix soup', servings: 2 }), expect: studio(201, 201, 403, 403) },
+  { file: 'studios/[studioId]/recipes/import.post.ts', method: 'POST', path: (i) => `/api/studios/${i.studio}/recipes/import?preview=1`, body: () => ({ '@context': 'https://schema.org', '@type': 'Recipe', name: 'Matrix bread', recipeYield: '2' }), expect: studio(200, 200, 403, 403) },
+  { file: 'studios/[studioId]/prices/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}/prices`, expect: studio(200, 200, 200, 200) },
+  { file: 'studios/[studioId]/prices/index.post.ts', method: 'POST', path: (i) => `/api/studios/${i.studio}/prices`, body: () => ({ item: 'Matrix salt', packageSize: 1, packageUnit: 'kg', priceMinor: 65, currency: 'GBP' }), expect: studio(201, 403, 403, 403) },
+  { file: 'studios/[studioId]/prices/import.post.ts', method: 'POST', path: (i) => `/api/studios/${i.studio}/prices/import`, body: () => 'item,package size,unit,price,currency\nMatrix oats,1,kg,1.10,GBP\n', expect: studio(201, 403, 403, 403) },
+  { file: 'studios/[studioId]/prices/[priceId].patch.ts', method: 'PATCH', path: (i) => `/api/studios/${i.studio}/prices/999999`, body: () => ({ item: 'X', packageSize: 1, packageUnit: 'kg', priceMinor: 1, currency: 'GBP' }), expect: studio(404, 403, 403, 403) },
+  { file: 'studios/[studioId]/prices/[priceId].delete.ts', method: 'DELETE', path: (i) => `/api/studios/${i.studio}/prices/999999`, expect: studio(404, 403, 403, 403) },
+  { file: 'recipes/[id]/index.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}`, expect: studio(200, 200, 200, 200) },
+  { file: 'recipes/[id]/index.patch.ts', method: 'PATCH', path: (i) => `/api/recipes/${i.recipe}`, body: () => ({ version: 999999, title: 'Matrix', servings: 2 }), expect: studio(409, 409, 403, 403) },
+  // An unknown recipe: members and outsiders alike get 404, devices (no account) 401. The role check
+  // on an existing recipe is in tests/server/recipes.test.ts, since a producer's call would delete it.
+  { file: 'recipes/[id]/index.delete.ts', method: 'DELETE', path: () => '/api/recipes/999999', expect: { anon: 401, producer: 404, host: 404, camera: 404, viewer: 404, outsider: 404, hostDevice: 401, cameraDevice: 401 } },
+  { file: 'recipes/[id]/scaled.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/scaled?servings=3`, expect: studio(200, 200, 200, 200) },
+  { file: 'recipes/[id]/cost.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/cost`, expect: studio(200, 200, 200, 200) },
+  { file: 'recipes/[id]/export.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/export`, expect: studio(200, 200, 200, 200) },
 ]
 
 // Routes added by nuxt-auth-utils itself: reading and clearing one's own session.
@@ -70,13 +88,14 @@ function routeFiles(dir: string): string[] {
 
 describe('authorisation matrix', async () => {
   const { databasePath } = await useBuiltApp()
-  const ids: Ids = { studio: 0, shoot: 0 }
+  const ids: Ids = { studio: 0, shoot: 0, recipe: 0 }
   const callers = {} as Record<CallerName, () => Promise<Client>>
 
   beforeAll(async () => {
     const producer = await signedIn(demo.producer)
     ids.studio = (await producer.get('/api/me')).body.memberships[0].studioId
     ids.shoot = await insertShoot(databasePath, ids.studio, 'Matrix shoot')
+    ids.recipe = (await producer.post(`/api/studios/${ids.studio}/recipes`, { title: 'Matrix stew', servings: 4 })).body.id
     const outsiderEmail = uniqueEmail('outsider')
     await new Client().post('/api/auth/signup', { name: 'Outsider', email: outsiderEmail, password: 'some other studio', studioName: 'Elsewhere Kitchen' })
     const device = async (role: 'host' | 'camera') => {

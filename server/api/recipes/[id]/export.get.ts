@@ -1,0 +1,9 @@
+// The recipe as schema.org Recipe JSON-LD; importing this file gives the same recipe back.
+export default defineEventHandler(async (event) => {
+  const { recipeId } = await requireRecipe(event, 'recipe.read')
+  const recipe = (await loadRecipe(recipeId))!
+  const slug = recipe.title.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'recipe'
+  setResponseHeader(event, 'content-type', 'application/ld+json; charset=utf-8')
+  setResponseHeader(event, 'content-disposition', `attachment; filename="${slug}.jsonld"`)
+  return JSON.stringify(exportSchemaOrgRecipe(recipeDraft(recipe)), null, 2)
+})

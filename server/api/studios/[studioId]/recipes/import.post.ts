@@ -1,0 +1,16 @@
+// Import a schema.org Recipe: JSON-LD, an HTML page that embeds it (also inside @graph), or an
+// uploaded file of either (multipart field "file"). `?preview=1` only reads it and says what could
+// not be understood; without it the recipe is saved (201).
+import { z } from 'zod'
+
+const query = z.object({ preview: z.enum(['0', '1', 'true', 'false'], { error: 'preview must be 1 or 0.' }).optional() })
+
+export default defineEventHandler(async (event) => {
+  const { studioId } = await requireStudio(event, 'recipe.edit')
+  const { preview } = validateQuery(event, query)
+  const text = await readUploadText(event, 'file', 2 * 1024 * 1024)
+  const result = await readRecipeImport(studioId, text)
+  if (preview === '1' || preview === 'true') return result
+  setResponseStatus(event, 201)
+  return { recipe: await createRecipe(studioId, result.body), problems: result.problems, images: result.images }
+})
