@@ -1,0 +1,219 @@
+// Recipes through the built app: saving with optimistic locking, scaling, cost per serving,
+// schema.org import (three input kinds) and export, and the refusals.
+import { readFileSync } from 'node:fs'
+import { resolve } from 'node:path'
+import { beforeAll, describe, expect, it } from 'vitest'
+import { rootDir, useBuiltApp } from '../support/app'
+import { Client, demo, signedIn } from '../support/client'
+
+const fixture = readFileSync(resolve(rootDir, 'tests/fixtures/recipe-fennel-orzo.jsonld'), 'utf8')
+
+// NIST Handbook 44, Appendix C: 1 lb = 453.59237 g exactly; US cup = 8 fl oz = 1/16 gal of 231 in³
+// = 236.5882365 mL exactly.
+const GRAMS_PER_POUND = 453.59237
+const ML_PER_US_CUP = 236.5882365
+
+describe('recipes', async () => {
+  await useBuiltApp()
+  let producer: Client
+  let studioId: number
+  let spaghettiPrice: number
+  let basilPrice: number
+
+  beforeAll(async () => {
+    producer = await signedIn(demo.producer)
+    studioId = (await producer.get('/api/me')).body.memberships[0].studioId
+    spaghettiPrice = (await producer.post(`/api/studios/${studioId}/prices`, { item: 'Spaghetti', packageSize: 500, packageUnit: 'g', priceMinor: 95, currency: 'GBP', shop: 'Corner Grocer', boughtOn: '2026-11-20' })).body.id
+    basilPrice = (await producer.post(`/api/studios/${studioId}/prices`, { item: 'Basil', packageSize: 1, packageUnit: 'bunch', priceMinor: 80, currency: 'GBP' })).body.id
+  })
+
+  const pasta = () => ({
+    title: 'Weeknight spaghetti',
+    servings: 4,
+    tags: ['pasta'],
+    ingredients: [
+      { key: 'spaghetti', min: 400, max: 400, unit: 'g', item: 'spaghetti', priceId: spaghettiPrice },
+      { key: 'milk', min: 1, max: 1, unit: 'cup', item: 'whole milk', allergens: { eu: ['milk'], us: ['milk'] } },
+      { key: 'basil', min: 1, max: 1, unit: 'bunch', item: 'basil', optional: true, priceId: basilPrice },
+      { key: 'salt', min: null, max: null, unit: null, item: 'salt', toTaste: true },
+    ],
+    steps: [
+      { text: 'Boil {{spaghetti}} in salted water.', handsOn: false, durationMin: 540, durationMax: 600, station: 'burner', cautions: ['boiling'] },
+      { text: 'Warm {{milk}} and toss it through.', handsOn: true, after: [1], script: ['Now the milk goes in.'] },
+    ],
+  })
+
+  it('creates, reads and saves a recipe, keeping step ids across saves', async () => {
+    const created = await producer.post(`/api/studios/${studioId}/recipes`, pasta())
+    expect(created.status).toBe(201)
+    expect(created.body).toMatchObject({ version: 1, title: 'Weeknight spaghetti', servings: 4 })
+    expect(created.body.steps.map((s: { position: number }) => s.position)).toEqual([1, 2])
+    expect(created.body.allergens.eu).toEqual([expect.objectContaining({ id: 'milk', items: ['whole milk'] })])
+    const stepIds = created.body.steps.map((s: { id: number }) => s.id)
+
+    const edited = { ...pasta(), version: 1, title: 'Weeknight spaghetti, milky', steps: created.body.steps.map((s: object) => ({ ...s, photo: undefined })) }
+    const saved = await producer.patch(`/api/recipes/${created.body.id}`, edited)
+    expect(saved.status).toBe(200)
+    expect(saved.body.version).toBe(2)
+    expect(saved.body.steps.map((s: { id: number }) => s.id)).toEqual(stepIds)
+  })
+
+  it('refuses a save made from an older version, with a clear message and the newer recipe', async () => {
+    const { body: r } = await producer.post(`/api/studios/${studioId}/recipes`, pasta())
+    const host = await signedIn(demo.host)
+    const first = await host.patch(`/api/recipes/${r.id}`, { ...pasta(), version: 1, title: 'Saved by the host' })
+    expect(first.status).toBe(200)
+    const second = await producer.patch(`/api/recipes/${r.id}`, { ...pasta(), version: 1, title: 'Saved by the producer' })
+    expect(second.status).toBe(409)
+    expect(second.body.statusMessage).toMatch(/Someone else saved this recipe/)
+    expect(second.body.data.current).toMatchObject({ version: 2, title: 'Saved by the host' })
+    expect((await producer.get(`/api/recipes/${r.id}`)).body.title).toBe('Saved by the host')
+  })
+
+  it('scales to 6 servings: exact numbers in the unit shown, kitchen-rounded text, step text following', async () => {
+    const { body: r } = await producer.post(`/api/studios/${studioId}/recipes`, pasta())
+    const us = await producer.get(`/api/recipes/${r.id}/scaled?servings=6&units=us`)
+    expect(us.status).toBe(200)
+    const spaghetti = us.body.ingredients.find((i: { item: string }) => i.item === 'spaghetti')
+    // 400 g × 6/4 = 600 g = 600 / 453.59237 lb.
+    expect(spaghetti.unit).toBe('lb')
+    expect(spaghetti.min).toBeCloseTo(600 / GRAMS_PER_POUND, 9)
+    expect(spaghetti.text).toBe('1 lb 5 oz')
+    const milk = us.body.ingredients.find((i: { item: string }) => i.item === 'whole milk')
+    expect(milk).toMatchObject({ unit: 'cup', min: 1.5, max: 1.5, text: '1½ cups' })
+    expect(us.body.ingredients.find((i: { item: string }) => i.item === 'salt')).toMatchObject({ min: null, max: null, text: 'to taste' })
+    expect(us.body.steps[1].text).toBe('Warm 1½ cups and toss it through.')
+
+    const metric = await producer.get(`/api/recipes/${r.id}/scaled?servings=6&units=metric`)
+    const metricMilk = metric.body.ingredients.find((i: { item: string }) => i.item === 'whole milk')
+    // 1.5 US cups = 354.88235475 mL.
+    expect(metricMilk.unit).toBe('ml')
+    expect(metricMilk.min).toBeCloseTo(1.5 * ML_PER_US_CUP, 9)
+    expect(metric.body.ingredients.find((i: { item: string }) => i.item === 'spaghetti')).toMatchObject({ unit: 'g', min: 600, text: '600 g' })
+  })
+
+  it('costs per serving with and without the optional basil (DESIGN: Σ used ÷ package × price ÷ servings)', async () => {
+    const { body: r } = await producer.post(`/api/studios/${studioId}/recipes`, pasta())
+    const cost = await producer.get(`/api/recipes/${r.id}/cost`)
+    expect(cost.status).toBe(200)
+    // Spaghetti 400 g of a 500 g pack at £0.95 = 76p; basil 1 bunch at 80p; 4 servings.
+    expect(cost.body).toMatchObject({ currency: 'GBP', total: 0.76, totalWithOptional: 1.56, perServing: 0.19, perServingWithOptional: 0.39 })
+    expect(cost.body.formatted.perServing).toBe('£0.19')
+    expect(cost.body.missing.map((m: { item: string }) => m.item)).toEqual(['whole milk'])
+    expect(cost.body.lines.find((l: { item: string }) => l.item === 'spaghetti')).toMatchObject({ status: 'priced', cost: 0.76 })
+    // For 6 servings the total grows, the per-serving figure stays.
+    const six = await producer.get(`/api/recipes/${r.id}/cost?servings=6`)
+    expect(six.body).toMatchObject({ total: 1.14, perServing: 0.19 })
+  })
+
+  it('flags a recipe over the studio budget per serving', async () => {
+    const { body: r } = await producer.post(`/api/studios/${studioId}/recipes`, { ...pasta(), title: 'Budget check' })
+    expect((await producer.patch(`/api/studios/${studioId}`, { budgetPerServingMinor: 30 })).status).toBe(200)
+    const cost = await producer.get(`/api/recipes/${r.id}/cost`)
+    expect(cost.body.budget).toMatchObject({ perServing: 0.3, over: false, overWithOptional: true })
+    const list = await producer.get(`/api/studios/${studioId}/recipes?q=Budget`)
+    expect(list.body.recipes).toEqual([expect.objectContaining({ title: 'Budget check', cost: expect.objectContaining({ perServing: 0.19, overBudget: false }) })])
+    await producer.patch(`/api/studios/${studioId}`, { budgetPerServingMinor: null })
+  })
+
+  it('imports pasted JSON-LD, an HTML page with the recipe inside @graph, and an uploaded file', async () => {
+    const pasted = await producer.call('POST', `/api/studios/${studioId}/recipes/import`, fixture, { 'content-type': 'application/ld+json' })
+    expect(pasted.status).toBe(201)
+    expect(pasted.body.recipe).toMatchObject({ title: 'Fennel and lemon orzo', servings: 4, times: { prep: 600, cook: 1200, total: 1800 } })
+    expect(pasted.body.recipe.ingredients.map((i: { item: string }) => i.item)).toContain('orzo')
+    expect(pasted.body.recipe.ingredients.find((i: { item: string }) => i.item === 'parmesan')).toMatchObject({ optional: true, min: 30, unit: 'g', prep: 'grated' })
+    expect(pasted.body.recipe.steps.find((s: { durationMin: number | null }) => s.durationMin === 720)).toBeTruthy()
+
+    const html = `<!doctype html><html><head><title>Orzo</title><script type="application/ld+json">${JSON.stringify({ '@context': 'https://schema.org', '@graph': [{ '@type': 'WebPage', name: 'A page' }, JSON.parse(fixture)] })}</script></head><body>Hi</body></html>`
+    const page = await producer.call('POST', `/api/studios/${studioId}/recipes/import`, html, { 'content-type': 'text/html' })
+    expect(page.status).toBe(201)
+    expect(page.body.recipe.title).toBe('Fennel and lemon orzo')
+
+    const form = new FormData()
+    form.append('file', new Blob([fixture], { type: 'application/ld+json' }), 'orzo.jsonld')
+    const res = await fetch((await import('@nuxt/test-utils/e2e')).url(`/api/studios/${studioId}/recipes/import`), { method: 'POST', body: form, headers: { cookie: producer.cookie } })
+    expect(res.status).toBe(201)
+    expect((await res.json()).recipe.title).toBe('Fennel and lemon orzo')
+  })
+
+  it('previews an import without saving, listing what it could not read', async () => {
+    const before = (await producer.get(`/api/studios/${studioId}/recipes`)).body.recipes.length
+    const preview = await producer.call('POST', `/api/studios/${studioId}/recipes/import?preview=1`, JSON.stringify({ '@context': 'https://schema.org', '@type': 'Recipe', name: 'No yield soup', recipeIngredient: ['2 carrots'], cookTime: 'soon' }), { 'content-type': 'application/json' })
+    expect(preview.status).toBe(200)
+    expect(preview.body.draft.title).toBe('No yield soup')
+    expect(preview.body.problems.map((p: { field: string }) => p.field)).toEqual(expect.arrayContaining(['recipeYield', 'cookTime']))
+    expect((await producer.get(`/api/studios/${studioId}/recipes`)).body.recipes.length).toBe(before)
+    const nothing = await producer.call('POST', `/api/studios/${studioId}/recipes/import`, '<html><body>no recipe here</body></html>', { 'content-type': 'text/html' })
+    expect(nothing.status).toBe(400)
+    expect(nothing.body.statusMessage).toMatch(/^body: /)
+  })
+
+  it('exports application/ld+json that imports back to the same recipe', async () => {
+    const { body: r } = await producer.post(`/api/studios/${studioId}/recipes`, pasta())
+    const exported = await producer.get(`/api/recipes/${r.id}/export`)
+    expect(exported.status).toBe(200)
+    expect(exported.headers.get('content-type')).toContain('application/ld+json')
+    expect(exported.body['@type']).toBe('Recipe')
+    const again = await producer.call('POST', `/api/studios/${studioId}/recipes/import`, JSON.stringify(exported.body), { 'content-type': 'application/ld+json' })
+    const strip = (x: typeof r) => ({
+      ...x, id: 0, version: 0, updatedAt: 0,
+      ingredients: x.ingredients.map((i: Record<string, unknown>) => ({ ...i, id: 0, priceId: null })),
+      steps: x.steps.map((s: Record<string, unknown>) => ({ ...s, id: 0 })),
+    })
+    expect(strip(again.body.recipe)).toEqual(strip(r))
+  })
+
+  it('bad input is a 400 naming the field, and nothing saved is lost', async () => {
+    const { body: r } = await producer.post(`/api/studios/${studioId}/recipes`, pasta())
+    const cases: [unknown, string][] = [
+      [{ ...pasta(), servings: -1 }, 'servings'],
+      [{ ...pasta(), title: 'x'.repeat(5000) }, 'title'],
+      [{ ...pasta(), ingredients: [{ ...pasta().ingredients[0], unit: 'bucket' }] }, 'ingredients.0.unit'],
+      [{ ...pasta(), steps: [{ text: 'First', after: [2] }, { text: 'Second' }] }, 'steps.0.after'],
+      [{ ...pasta(), steps: [{ text: 'x', station: 'grill' }] }, 'steps.0.station'],
+      [{ ...pasta(), ingredients: [pasta().ingredients[0], pasta().ingredients[0]] }, 'ingredients.1.key'],
+    ]
+    for (const [body, field] of cases) {
+      const res = await producer.patch(`/api/recipes/${r.id}`, { ...(body as object), version: 1 })
+      expect(res.status, field).toBe(400)
+      expect(res.body.statusMessage, field).toMatch(new RegExp(`^${field.replace(/\./g, '\\.')}: `))
+    }
+    expect((await producer.get(`/api/recipes/${r.id}/scaled?servings=0`)).status).toBe(400)
+    expect((await producer.get(`/api/recipes/${r.id}/scaled?units=imperial`)).status).toBe(400)
+    expect((await producer.get(`/api/recipes/${r.id}`)).body).toMatchObject({ version: 1, title: 'Weeknight spaghetti' })
+  })
+
+  it('a price of another studio cannot be linked', async () => {
+    const other = new Client()
+    await other.post('/api/auth/signup', { name: 'Other', email: `other-${Date.now()}@example.test`, password: 'another studio here', studioName: 'Other Kitchen' })
+    const otherStudio = (await other.get('/api/me')).body.memberships[0].studioId
+    const foreign = (await other.post(`/api/studios/${otherStudio}/prices`, { item: 'Rice', packageSize: 1, packageUnit: 'kg', priceMinor: 200, currency: 'GBP' })).body.id
+    const res = await producer.post(`/api/studios/${studioId}/recipes`, { ...pasta(), ingredients: [{ ...pasta().ingredients[0], priceId: foreign }] })
+    expect(res.status).toBe(400)
+    expect(res.body.statusMessage).toMatch(/^ingredients\.priceId: /)
+    // And another studio's recipe is not found.
+    const { body: r } = await producer.post(`/api/studios/${studioId}/recipes`, pasta())
+    expect((await other.get(`/api/recipes/${r.id}`)).status).toBe(404)
+  })
+
+  it('camera and viewer read recipes but may not edit or delete; the host may', async () => {
+    const { body: r } = await producer.post(`/api/studios/${studioId}/recipes`, pasta())
+    for (const who of [demo.camera, demo.viewer]) {
+      const c = await signedIn(who)
+      expect((await c.get(`/api/recipes/${r.id}`)).status).toBe(200)
+      expect((await c.patch(`/api/recipes/${r.id}`, { ...pasta(), version: 1 })).status).toBe(403)
+      expect((await c.delete(`/api/recipes/${r.id}`)).status).toBe(403)
+    }
+    expect((await (await signedIn(demo.host)).delete(`/api/recipes/${r.id}`)).status).toBe(204)
+    expect((await producer.get(`/api/recipes/${r.id}`)).status).toBe(404)
+  })
+
+  it('a price list CSV adds the good rows and reports the bad ones by line', async () => {
+    const csv = 'item,package size,unit,price,currency,shop,date\nChickpeas,400,g,0.65,GBP,Corner Grocer,2026-11-02\nLemons,4,each,1.20,GBP,,\nMystery,,g,1.00,GBP,,\n'
+    const res = await producer.call('POST', `/api/studios/${studioId}/prices/import`, csv, { 'content-type': 'text/csv' })
+    expect(res.status).toBe(201)
+    expect(res.body.added.map((p: { item: string }) => p.item)).toEqual(['Chickpeas', 'Lemons'])
+    expect(res.body.added[0]).toMatchObject({ priceMinor: 65, packageSize: 400, packageUnit: 'g', boughtOn: '2026-11-02' })
+    expect(res.body.errors).toEqual([expect.objectContaining({ line: 4 })])
+  })
+})
