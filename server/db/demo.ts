@@ -7,6 +7,8 @@ export const demoStudio = {
   slug: 'brackenford',
   locale: 'en-GB',
   currency: 'GBP',
+  // £1.50 a serving: the budget a weeknight cooking channel might quote (invented).
+  budgetPerServingMinor: 150,
 }
 
 export const DEMO_PASSWORD = 'hob-demo-2026'

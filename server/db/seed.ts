@@ -1,8 +1,9 @@
-// Demo data: an invented studio and its crew, one account per role. Runs in one transaction and only
+// Demo data: an invented studio, its crew (one account per role), its dishes and shop prices. Runs in one transaction and only
 // on an empty database, so running it twice, or killing it half-way, never leaves half a studio.
 import type { Sequelize } from 'sequelize'
 import { DEMO_PASSWORD, demoCrew, demoStudio } from './demo'
 import { Membership, Studio, User } from './models'
+import { seedDemoRecipes } from './seed-recipes'
 
 export interface SeedResult {
   seeded: boolean
@@ -24,6 +25,7 @@ export async function seedDemo(sequelize: Sequelize, hashPassword: PasswordHashe
       const user = await User.create({ name: person.name, email: person.email, passwordHash })
       await Membership.create({ userId: user.id, studioId: studio.id, role: person.role })
     }
+    await seedDemoRecipes(studio.id, studio.currency)
     return { seeded: true, studio: demoStudio.name }
   })
 }

@@ -1,0 +1,117 @@
+// The demo studio's dishes and shop prices. Invented for Hobline: the recipes, the shop and every
+// price. Ingredient lines are written as a cook writes them and read with the app's own parser.
+import type { CautionId } from '../../shared/utils/cautions'
+import type { RecipeStation } from '../../shared/types/recipe'
+
+export interface DemoStep {
+  text: string
+  script?: string[]
+  handsOn: boolean
+  minutes?: [number, number]
+  station?: RecipeStation
+  after?: number[]
+  shot?: string
+  note?: string
+  cautions?: CautionId[]
+}
+
+export interface DemoRecipe {
+  title: string
+  summary: string
+  servings: number
+  tags: string[]
+  photo: string
+  /** Ingredient lines; "@price" names the demo price an ingredient is costed with. */
+  lines: [string, string | null][]
+  steps: DemoStep[]
+}
+
+// [item, package size, unit ('each' for pieces), price in pence, shop]
+export const demoPrices: [string, number, string, number, string][] = [
+  ['Olive oil', 500, 'ml', 450, 'Marrow Lane Grocer'],
+  ['Onions', 3, 'each', 60, 'Marrow Lane Grocer'],
+  ['Garlic', 12, 'clove', 45, 'Marrow Lane Grocer'],
+  ['Chopped tomatoes', 400, 'g', 55, 'Brackenford Co-op'],
+  ['Butter beans', 1, 'can', 70, 'Brackenford Co-op'],
+  ['Smoked paprika', 40, 'g', 125, 'Brackenford Co-op'],
+  ['Vegetable stock', 1, 'l', 110, 'Brackenford Co-op'],
+  ['Parsley', 1, 'bunch', 75, 'Marrow Lane Grocer'],
+  ['Self-raising flour', 1.5, 'kg', 110, 'Brackenford Co-op'],
+  ['Plain yoghurt', 500, 'g', 135, 'Brackenford Co-op'],
+  ['Mint', 1, 'bunch', 75, 'Marrow Lane Grocer'],
+  ['Butternut squash', 1, 'each', 120, 'Marrow Lane Grocer'],
+  ['Green lentils', 500, 'g', 160, 'Brackenford Co-op'],
+  ['Tahini', 300, 'g', 275, 'Brackenford Co-op'],
+  ['Lemons', 1, 'each', 30, 'Marrow Lane Grocer'],
+]
+
+export const demoRecipes: DemoRecipe[] = [
+  {
+    title: 'Smoky butter bean and tomato stew',
+    summary: 'A one-pot stew for a cold evening: soft onions, smoked paprika and creamy beans.',
+    servings: 4,
+    tags: ['one-pot', 'vegan', 'budget'],
+    photo: 'stew',
+    lines: [
+      ['2 tbsp olive oil', 'Olive oil'],
+      ['1 onion, finely chopped', 'Onions'],
+      ['3 cloves garlic, sliced', 'Garlic'],
+      ['1 tsp smoked paprika', 'Smoked paprika'],
+      ['800 g chopped tomatoes', 'Chopped tomatoes'],
+      ['2 cans butter beans, drained', 'Butter beans'],
+      ['500 ml vegetable stock', 'Vegetable stock'],
+      ['1 bunch parsley, chopped (optional)', 'Parsley'],
+      ['salt, to taste', null],
+    ],
+    steps: [
+      { text: 'Chop {{onion|item}} finely and slice the garlic.', script: ['Start with the onion: small and even, so it softens at the same rate.'], handsOn: true, minutes: [4, 5], station: 'counter', shot: 'Overhead on the board', cautions: ['knife'] },
+      { text: 'Warm {{olive-oil}} in a wide pan and soften the onion.', script: ['Low and slow here — we want it sweet, not brown.'], handsOn: true, minutes: [8, 10], station: 'burner', after: [1], shot: 'Side angle on the pan', cautions: ['hot-oil'] },
+      { text: 'Stir in the garlic and {{smoked-paprika}} for a minute.', handsOn: true, minutes: [1, 2], station: 'burner', after: [2], shot: 'Close on the pan', note: 'Catch the colour change' },
+      { text: 'Add the tomatoes, beans and {{vegetable-stock}}; bring to a simmer.', script: ['Everything else goes in now, and the pot does the work.'], handsOn: true, minutes: [3, 4], station: 'burner', after: [3], shot: 'Wide on the hob', cautions: ['boiling'] },
+      { text: 'Simmer, stirring now and then, until thick.', handsOn: false, minutes: [20, 25], station: 'burner', after: [4], shot: 'Locked-off on the pot' },
+      { text: 'Season with salt and scatter the parsley.', script: ['Taste first, then salt. Parsley if you have it — it costs a little extra.'], handsOn: true, minutes: [2, 2], after: [5], shot: 'Hero shot of the bowl' },
+    ],
+  },
+  {
+    title: 'Pan flatbreads with mint yoghurt',
+    summary: 'Two-ingredient dough rested while the yoghurt is mixed, cooked in a dry pan.',
+    servings: 4,
+    tags: ['bread', 'vegetarian', 'quick'],
+    photo: 'flatbread',
+    lines: [
+      ['250 g self-raising flour', 'Self-raising flour'],
+      ['350 g plain yoghurt', 'Plain yoghurt'],
+      ['1 bunch mint, leaves picked', 'Mint'],
+      ['1 pinch salt', null],
+    ],
+    steps: [
+      { text: 'Mix {{self-raising-flour}} with {{plain-yoghurt*5/7}} and the salt into a soft dough.', script: ['Just two things in the bowl: flour and yoghurt.'], handsOn: true, minutes: [4, 5], station: 'counter', shot: 'Overhead on the bowl' },
+      { text: 'Cover and rest the dough.', handsOn: false, minutes: [15, 20], after: [1], shot: 'Quick insert of the covered bowl' },
+      { text: 'Chop the mint and stir it into the rest of the yoghurt.', script: ['While the dough rests, the dip.'], handsOn: true, minutes: [3, 4], station: 'counter', shot: 'Close on the knife', cautions: ['knife', 'allergen'] },
+      { text: 'Divide and roll the dough into six rounds.', handsOn: true, minutes: [5, 6], station: 'counter', after: [2], shot: 'Hands on the board' },
+      { text: 'Cook each round in a hot dry pan until puffed and spotted.', script: ['Watch for the bubbles — that is when you flip.'], handsOn: true, minutes: [10, 12], station: 'burner', after: [4], shot: 'Side angle on the pan', cautions: ['hot-holding'] },
+    ],
+  },
+  {
+    title: 'Roast squash with lentils and tahini',
+    summary: 'Oven-roasted squash on lemony lentils with a loose tahini sauce.',
+    servings: 4,
+    tags: ['oven', 'vegan'],
+    photo: 'squash',
+    lines: [
+      ['1 butternut squash, peeled and cut into chunks', 'Butternut squash'],
+      ['3 tbsp olive oil', 'Olive oil'],
+      ['200 g green lentils, rinsed', 'Green lentils'],
+      ['3 tbsp tahini', 'Tahini'],
+      ['1 lemon, juiced', 'Lemons'],
+      ['salt, to taste', null],
+    ],
+    steps: [
+      { text: 'Heat the oven to 200 °C. Peel and cut the squash into chunks.', script: ['A heavy knife and a flat side down — squash likes to roll.'], handsOn: true, minutes: [8, 10], station: 'counter', shot: 'Overhead on the board', cautions: ['knife'] },
+      { text: 'Toss the squash with {{olive-oil*2/3}} and roast until soft and browned.', handsOn: false, minutes: [35, 40], station: 'oven', after: [1], shot: 'Tray into the oven', cautions: ['oven'] },
+      { text: 'Simmer {{green-lentils}} in plenty of water until just tender.', handsOn: false, minutes: [20, 25], station: 'burner', after: [1], shot: 'Locked-off on the pot', cautions: ['boiling'] },
+      { text: 'Whisk {{tahini}} with the lemon juice and cold water to a pourable sauce.', script: ['It seizes first, then loosens — keep whisking.'], handsOn: true, minutes: [3, 4], station: 'counter', shot: 'Close on the whisk', cautions: ['allergen'] },
+      { text: 'Drain the lentils, dress with the rest of the oil and salt, and top with squash and sauce.', script: ['Lentils down, squash on top, sauce over everything.'], handsOn: true, minutes: [3, 4], after: [2, 3, 4], shot: 'Hero shot of the plate', cautions: ['oven'] },
+    ],
+  },
+]

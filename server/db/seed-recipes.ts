@@ -1,0 +1,41 @@
+// Puts the demo dishes and prices into the demo studio, through the app's own parser and
+// allergen suggestions, so the seed shows what a cook would get by typing the same lines.
+import { parseQuantity } from '../../shared/utils/quantity'
+import { suggestAllergens } from '../../shared/utils/allergens'
+import { makeIngredientKey, stepTokenProblems } from '../../shared/utils/step-text'
+import { demoPrices, demoRecipes } from './demo-recipes'
+import { Price, Recipe, RecipeIngredient, RecipeStep } from './models'
+
+export async function seedDemoRecipes(studioId: number, currency: string) {
+  const priceIds = new Map<string, number>()
+  for (const [item, packageSize, packageUnit, priceMinor, shop] of demoPrices) {
+    const row = await Price.create({ studioId, item, packageSize, packageUnit, priceMinor, currency, shop, boughtOn: '2026-11-24' })
+    priceIds.set(item, row.id)
+  }
+  const recipes: Recipe[] = []
+  for (const demo of demoRecipes) {
+    const recipe = await Recipe.create({ studioId, title: demo.title, summary: demo.summary, servings: demo.servings, yieldText: null, tags: demo.tags, notes: null, times: { prep: null, cook: null, total: null } })
+    const keys: string[] = []
+    for (const [position, [line, price]] of demo.lines.entries()) {
+      const q = parseQuantity(line)
+      const key = makeIngredientKey(q.item, keys)
+      keys.push(key)
+      const { eu, us } = suggestAllergens(q.item)
+      await RecipeIngredient.create({
+        recipeId: recipe.id, position: position + 1, key, min: q.min, max: q.max, unit: q.unit, item: q.item, prep: q.prep,
+        optional: q.optional, toTaste: q.toTaste, group: null, allergens: { eu, us }, priceId: price ? priceIds.get(price)! : null,
+      })
+    }
+    for (const [position, step] of demo.steps.entries()) {
+      const problems = stepTokenProblems(step.text, keys)
+      if (problems.length) throw new Error(`Demo recipe "${demo.title}", step ${position + 1}: ${problems.map((p) => p.reason).join('; ')}`)
+      await RecipeStep.create({
+        recipeId: recipe.id, position: position + 1, text: step.text, script: step.script ?? [], handsOn: step.handsOn,
+        durationMin: step.minutes ? step.minutes[0] * 60 : null, durationMax: step.minutes ? step.minutes[1] * 60 : null,
+        station: step.station ?? null, after: step.after ?? [], cameraShot: step.shot ?? null, cameraNote: step.note ?? null, cautions: step.cautions ?? [], group: null,
+      })
+    }
+    recipes.push(recipe)
+  }
+  return recipes
+}
