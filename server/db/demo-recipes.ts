@@ -10,6 +10,7 @@ export interface DemoStep {
   minutes?: [number, number]
   station?: RecipeStation
   after?: number[]
+  links?: { step: number; kind: 'start-start' | 'finish-together'; lag: number }[]
   shot?: string
   note?: string
   cautions?: CautionId[]
@@ -110,8 +111,11 @@ export const demoRecipes: DemoRecipe[] = [
       { text: 'Heat the oven to 200 °C. Peel and cut the squash into chunks.', script: ['A heavy knife and a flat side down — squash likes to roll.'], handsOn: true, minutes: [8, 10], station: 'counter', shot: 'Overhead on the board', cautions: ['knife'] },
       { text: 'Toss the squash with {{olive-oil*2/3}} and roast until soft and browned.', handsOn: false, minutes: [35, 40], station: 'oven', after: [1], shot: 'Tray into the oven', cautions: ['oven'] },
       { text: 'Simmer {{green-lentils}} in plenty of water until just tender.', handsOn: false, minutes: [20, 25], station: 'burner', after: [1], shot: 'Locked-off on the pot', cautions: ['boiling'] },
-      { text: 'Whisk {{tahini}} with the lemon juice and cold water to a pourable sauce.', script: ['It seizes first, then loosens — keep whisking.'], handsOn: true, minutes: [3, 4], station: 'counter', shot: 'Close on the whisk', cautions: ['allergen'] },
+      // Whisked in the last five minutes of the roast, so sauce and squash are ready together.
+      { text: 'Whisk {{tahini}} with the lemon juice and cold water to a pourable sauce.', script: ['It seizes first, then loosens — keep whisking.'], handsOn: true, minutes: [3, 4], station: 'counter', links: [{ step: 2, kind: 'finish-together', lag: 300 }], shot: 'Close on the whisk', cautions: ['allergen'] },
       { text: 'Drain the lentils, dress with the rest of the oil and salt, and top with squash and sauce.', script: ['Lentils down, squash on top, sauce over everything.'], handsOn: true, minutes: [3, 4], after: [2, 3, 4], shot: 'Hero shot of the plate', cautions: ['oven'] },
     ],
   },
 ]
+
+export const demoEpisode = { title: 'Thursday supper special' }

@@ -3,8 +3,8 @@
 import { parseQuantity } from '../../shared/utils/quantity'
 import { suggestAllergens } from '../../shared/utils/allergens'
 import { makeIngredientKey, stepTokenProblems } from '../../shared/utils/step-text'
-import { demoPrices, demoRecipes } from './demo-recipes'
-import { Price, Recipe, RecipeIngredient, RecipeStep } from './models'
+import { demoEpisode, demoPrices, demoRecipes } from './demo-recipes'
+import { Episode, EpisodeSegment, Price, Recipe, RecipeIngredient, RecipeStep } from './models'
 
 export async function seedDemoRecipes(studioId: number, currency: string) {
   const priceIds = new Map<string, number>()
@@ -32,10 +32,12 @@ export async function seedDemoRecipes(studioId: number, currency: string) {
       await RecipeStep.create({
         recipeId: recipe.id, position: position + 1, text: step.text, script: step.script ?? [], handsOn: step.handsOn,
         durationMin: step.minutes ? step.minutes[0] * 60 : null, durationMax: step.minutes ? step.minutes[1] * 60 : null,
-        station: step.station ?? null, after: step.after ?? [], cameraShot: step.shot ?? null, cameraNote: step.note ?? null, cautions: step.cautions ?? [], group: null,
+        station: step.station ?? null, after: step.after ?? [], links: step.links ?? [], cameraShot: step.shot ?? null, cameraNote: step.note ?? null, cautions: step.cautions ?? [], group: null,
       })
     }
     recipes.push(recipe)
   }
+  const episode = await Episode.create({ studioId, title: demoEpisode.title })
+  for (const [i, recipe] of recipes.entries()) await EpisodeSegment.create({ episodeId: episode.id, position: i + 1, kind: 'recipe', recipeId: recipe.id, title: null })
   return recipes
 }

@@ -19,7 +19,7 @@ export function recipeView(r: Loaded) {
   }))
   const steps = [...r.steps].sort((a, b) => a.position - b.position).map((s) => ({
     id: s.id, position: s.position, text: s.text, script: s.script, handsOn: s.handsOn, durationMin: s.durationMin, durationMax: s.durationMax,
-    station: s.station, after: s.after, cameraShot: s.cameraShot, cameraNote: s.cameraNote, cautions: s.cautions, group: s.group, photo: photoUrl(s.photo),
+    station: s.station, after: s.after, links: s.links, cameraShot: s.cameraShot, cameraNote: s.cameraNote, cautions: s.cautions, group: s.group, photo: photoUrl(s.photo),
   }))
   return {
     id: r.id, studioId: r.studioId, version: r.version, title: r.title, summary: r.summary, servings: r.servings, yieldText: r.yieldText,
@@ -35,7 +35,7 @@ export function recipeDraft(view: RecipeView): RecipeDraft {
   return {
     title: view.title, summary: view.summary, servings: view.servings, yieldText: view.yieldText, tags: view.tags, notes: view.notes, times: view.times,
     ingredients: view.ingredients.map(({ id: _id, priceId, ...i }) => ({ ...i, priceId: priceId === null ? null : String(priceId) })) as RecipeDraft['ingredients'],
-    steps: view.steps.map(({ id: _id, photo: _photo, ...s }) => s) as RecipeDraft['steps'],
+    steps: view.steps.map(({ id: _id, photo: _photo, links: _links, ...s }) => s) as RecipeDraft['steps'],
   }
 }
 
@@ -129,7 +129,7 @@ export async function studioSettings(studioId: number) {
   await useDb()
   const s = await Studio.findByPk(studioId)
   if (!s) throw createError({ statusCode: 404, statusMessage: 'There is no such studio.' })
-  return { id: s.id, name: s.name, locale: s.locale, currency: s.currency, budgetPerServingMinor: s.budgetPerServingMinor ?? null, cupUnit: s.cupUnit, unitSystem: s.unitSystem }
+  return { id: s.id, name: s.name, locale: s.locale, currency: s.currency, budgetPerServingMinor: s.budgetPerServingMinor ?? null, cupUnit: s.cupUnit, unitSystem: s.unitSystem, kitchen: s.kitchen }
 }
 
 /** Reads an import into a body ready to save, with what could not be understood. */

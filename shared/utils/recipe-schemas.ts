@@ -38,6 +38,12 @@ export const recipeStepSchema = z.object({
   durationMax: seconds('durationMax').default(null),
   station: z.enum(['burner', 'oven', 'counter'], { error: 'station must be burner, oven, counter or null.' }).nullable().default(null),
   after: z.array(z.number().int().positive()).max(50).default([]),
+  /** Links to an earlier step beyond "after": start with it (after a lag), or finish together with it (going in a lead before it ends). */
+  links: z.array(z.object({
+    step: z.number({ error: 'links.step must be the position of an earlier step.' }).int().positive(),
+    kind: z.enum(['start-start', 'finish-together'], { error: 'links.kind must be start-start or finish-together.' }),
+    lag: z.number({ error: 'links.lag must be seconds.' }).int().min(0).max(24 * 3600),
+  })).max(10).default([]),
   cameraShot: optionalText('cameraShot', 200),
   cameraNote: optionalText('cameraNote', 500),
   cautions: z.array(z.enum(CAUTION_IDS, { error: `caution must be one of: ${CAUTION_IDS.join(', ')}.` })).max(CAUTION_IDS.length).default([]),
@@ -61,7 +67,7 @@ export const recipeCreateSchema = z.object(recipeFields).superRefine(checkRefere
 /** A save names the version it started from, so a newer save by someone else is never overwritten. */
 export const recipeUpdateSchema = z.object({ version: z.number({ error: 'version must be the number the recipe had when you opened it.' }).int().positive(), ...recipeFields }).superRefine(checkReferences)
 
-function checkReferences(r: { ingredients: { key: string }[]; steps: { after: number[] }[] }, ctx: z.RefinementCtx) {
+function checkReferences(r: { ingredients: { key: string }[]; steps: { after: number[]; links: { step: number }[] }[] }, ctx: z.RefinementCtx) {
   const seen = new Set<string>()
   r.ingredients.forEach((ing, i) => {
     if (seen.has(ing.key)) ctx.addIssue({ code: 'custom', path: ['ingredients', i, 'key'], message: `Two ingredients use the key "${ing.key}"; each needs its own.` })
@@ -70,6 +76,9 @@ function checkReferences(r: { ingredients: { key: string }[]; steps: { after: nu
   r.steps.forEach((step, i) => {
     for (const p of step.after) {
       if (p >= i + 1) ctx.addIssue({ code: 'custom', path: ['steps', i, 'after'], message: `Step ${i + 1} can only wait for earlier steps, not step ${p}.` })
+    }
+    for (const link of step.links) {
+      if (link.step >= i + 1) ctx.addIssue({ code: 'custom', path: ['steps', i, 'links'], message: `Step ${i + 1} can only be linked to an earlier step, not step ${link.step}.` })
     }
   })
 }
@@ -91,6 +100,24 @@ export const studioSettingsSchema = z.object({
   budgetPerServingMinor: z.number().int('budgetPerServingMinor must be whole minor units.').min(0).max(1e8).nullable().optional(),
   cupUnit: z.enum(['cup', 'metric-cup'], { error: 'cupUnit must be cup (US, 236.6 mL) or metric-cup (250 mL).' }).optional(),
   unitSystem: z.enum(['metric', 'us'], { error: 'unitSystem must be metric or us.' }).optional(),
+  kitchen: z.object({
+    hands: z.number({ error: 'kitchen.hands must be a number.' }).int().min(1, 'A kitchen needs at least one cook (kitchen.hands).').max(12),
+    burners: z.number({ error: 'kitchen.burners must be a number.' }).int().min(0).max(16),
+    ovens: z.number({ error: 'kitchen.ovens must be a number.' }).int().min(0).max(6),
+    racksPerOven: z.number({ error: 'kitchen.racksPerOven must be a number.' }).int().min(1).max(6),
+    parallelRecipes: z.boolean({ error: 'kitchen.parallelRecipes must be true or false.' }),
+  }).optional(),
+})
+
+export const episodeCreateSchema = z.object({
+  title: text('title', 160).min(1, 'Give the episode a title.'),
+  recipeIds: z.array(z.number({ error: 'recipeIds must be recipe ids.' }).int().positive()).max(30, 'At most 30 recipes in an episode.').default([]),
+})
+
+export const episodeUpdateSchema = z.object({
+  version: z.number({ error: 'version must be the number the episode had when you opened it.' }).int().positive(),
+  title: text('title', 160).min(1, 'Give the episode a title.').optional(),
+  recipeIds: z.array(z.number({ error: 'recipeIds must be recipe ids.' }).int().positive()).max(30, 'At most 30 recipes in an episode.').optional(),
 })
 
 export type RecipeCreateBody = z.output<typeof recipeCreateSchema>

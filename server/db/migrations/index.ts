@@ -6,6 +6,7 @@ import m0002 from './0002-accounts'
 import m0003 from './0003-mail'
 import m0004 from './0004-join-codes'
 import m0005 from './0005-recipes'
+import m0006 from './0006-episodes'
 
 export interface MigrationContext {
   queryInterface: QueryInterface
@@ -20,4 +21,4 @@ export interface Migration {
   down: (ctx: MigrationContext) => Promise<void>
 }
 
-export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005]
+export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005, m0006]

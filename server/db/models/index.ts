@@ -1,12 +1,13 @@
 // Every model, initialised once on the process's Sequelize instance, with their associations.
 import type { Sequelize } from 'sequelize'
+import { Episode, EpisodeSegment, initEpisodeModels } from './episode'
 import { Invite, Membership, PasswordReset, User, initAccountModels } from './account'
 import { Mail, initMailModel } from './mail'
 import { Price, Recipe, RecipeIngredient, RecipeStep, initRecipeModels } from './recipe'
 import { JoinCode, Shoot, initShootModels } from './shoot'
 import { Studio, initStudio } from './studio'
 
-export { Invite, JoinCode, Mail, Membership, PasswordReset, Price, Recipe, RecipeIngredient, RecipeStep, Shoot, Studio, User }
+export { Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, Recipe, RecipeIngredient, RecipeStep, Shoot, Studio, User }
 
 export function initModels(sequelize: Sequelize) {
   initStudio(sequelize)
@@ -14,6 +15,7 @@ export function initModels(sequelize: Sequelize) {
   initShootModels(sequelize)
   initMailModel(sequelize)
   initRecipeModels(sequelize)
+  initEpisodeModels(sequelize)
 
   User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' })
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' })

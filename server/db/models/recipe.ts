@@ -72,6 +72,8 @@ export class RecipeStep extends Model<InferAttributes<RecipeStep>, InferCreation
   declare durationMax: number | null
   declare station: string | null
   declare after: number[]
+  /** Links richer than "after": [{ step: position, kind: 'start-start' | 'finish-together', lag: seconds }]. */
+  declare links: { step: number; kind: 'start-start' | 'finish-together'; lag: number }[]
   declare cameraShot: string | null
   declare cameraNote: string | null
   declare cautions: string[]
@@ -108,7 +110,7 @@ export function initRecipeModels(sequelize: Sequelize) {
   RecipeStep.init(
     {
       id, recipeId: DataTypes.INTEGER, position: DataTypes.INTEGER, text: DataTypes.TEXT, script: json('script', []), handsOn: DataTypes.BOOLEAN,
-      durationMin: DataTypes.INTEGER, durationMax: DataTypes.INTEGER, station: DataTypes.STRING(12), after: json('after', []),
+      durationMin: DataTypes.INTEGER, durationMax: DataTypes.INTEGER, station: DataTypes.STRING(12), after: json('after', []), links: json('links', []),
       cameraShot: DataTypes.STRING(200), cameraNote: DataTypes.STRING(500), cautions: json('cautions', []), group: DataTypes.STRING(120), photo: DataTypes.STRING(200), ...stamps,
     },
     { sequelize, tableName: 'recipe_steps', underscored: true },

@@ -12,6 +12,8 @@ export class Studio extends Model<InferAttributes<Studio>, InferCreationAttribut
   declare cupUnit: CreationOptional<string>
   /** The unit system shoots and views default to: 'metric' or 'us'. */
   declare unitSystem: CreationOptional<string>
+  /** The kitchen the cook plan runs against. */
+  declare kitchen: CreationOptional<{ hands: number; burners: number; ovens: number; racksPerOven: number; parallelRecipes: boolean }>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 }
@@ -27,6 +29,16 @@ export function initStudio(sequelize: Sequelize) {
       budgetPerServingMinor: DataTypes.INTEGER,
       cupUnit: { type: DataTypes.STRING(12), defaultValue: 'cup' },
       unitSystem: { type: DataTypes.STRING(8), defaultValue: 'metric' },
+      kitchen: {
+        type: DataTypes.TEXT,
+        get(this: Studio) {
+          const raw = this.getDataValue('kitchen') as unknown as string | null
+          return raw ? JSON.parse(raw) : { hands: 1, burners: 4, ovens: 1, racksPerOven: 1, parallelRecipes: true }
+        },
+        set(this: Studio, value: unknown) {
+          this.setDataValue('kitchen', JSON.stringify(value) as never)
+        },
+      },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

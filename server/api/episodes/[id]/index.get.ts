@@ -1,0 +1,4 @@
+export default defineEventHandler(async (event) => {
+  const { episodeId } = await requireEpisode(event, 'episode.read')
+  return (await loadEpisode(episodeId))!
+})

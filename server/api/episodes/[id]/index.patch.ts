@@ -1,0 +1,5 @@
+export default defineEventHandler(async (event) => {
+  const { episodeId, studioId } = await requireEpisode(event, 'episode.edit')
+  const body = await validateBody(event, episodeUpdateSchema)
+  return saveEpisode(episodeId, studioId, body)
+})

@@ -1,0 +1,82 @@
+// The cook plan of an episode: its recipes' steps handed to the shared scheduler (planCook).
+import { Recipe, RecipeStep } from '../db/models'
+import { PlanError, type PlanKitchen, type PlanStep } from '../../shared/utils/plan-types'
+
+export type Kitchen = Required<Pick<PlanKitchen, 'hands' | 'burners' | 'ovens' | 'racksPerOven' | 'parallelRecipes'>>
+
+/** A step with no duration still takes the cook a moment: planned as one minute (common practice). */
+export const STEP_WITHOUT_DURATION_S = 60
+
+/**
+ * A step's planned duration is the long end of its range: an unattended wait is never planned
+ * shorter than the recipe allows, so the food is done when the plan says so.
+ */
+export function plannedDuration(step: { durationMin: number | null; durationMax: number | null }) {
+  return step.durationMax ?? step.durationMin ?? STEP_WITHOUT_DURATION_S
+}
+
+const stepKey = (id: number) => String(id)
+
+export async function planEpisode(episodeId: number, kitchen: Kitchen) {
+  const episode = (await loadEpisode(episodeId))!
+  const recipeIds = episode.segments.map((s) => s.recipeId).filter((x): x is number => !!x)
+  const recipes = new Map((await Recipe.findAll({ where: { id: recipeIds }, attributes: ['id', 'title'] })).map((r) => [r.id, r.title]))
+  const steps = await RecipeStep.findAll({ where: { recipeId: recipeIds }, order: [['recipeId', 'ASC'], ['position', 'ASC']] })
+  const byRecipe = new Map<number, RecipeStep[]>()
+  for (const s of steps) byRecipe.set(s.recipeId, [...(byRecipe.get(s.recipeId) ?? []), s])
+
+  const input: PlanStep[] = []
+  const info = new Map<string, { recipeId: number; recipeTitle: string; label: string; step: RecipeStep }>()
+  for (const recipeId of recipeIds) {
+    const list = byRecipe.get(recipeId) ?? []
+    const atPosition = new Map(list.map((s) => [s.position, s]))
+    for (const s of list) {
+      const label = s.text.replace(/\{\{\s*([^}|*]+?)\s*(?:\*[^}|]*)?(?:\|[^}]*)?\}\}/g, (_m, key: string) => key.replace(/-/g, ' '))
+      // "Waits for" names earlier steps; a step that names none follows the one before it.
+      const after = s.after.length ? s.after : s.position > 1 && !s.links.length ? [s.position - 1] : []
+      input.push({
+        id: stepKey(s.id),
+        duration: plannedDuration(s),
+        handsOn: s.handsOn,
+        station: (s.station as PlanStep['station']) ?? null,
+        links: [
+          ...after.map((p) => atPosition.get(p)).filter((x): x is RecipeStep => !!x).map((from) => ({ from: stepKey(from.id), kind: 'finish-start' as const })),
+          ...s.links.map((l) => ({ from: stepKey(atPosition.get(l.step)?.id ?? 0), kind: l.kind, lag: l.lag })),
+        ],
+        recipe: String(recipeId),
+        label,
+      })
+      info.set(stepKey(s.id), { recipeId, recipeTitle: recipes.get(recipeId) ?? '', label, step: s })
+    }
+  }
+
+  try {
+    const plan = planCook({ steps: input, kitchen })
+    return {
+      makespan: plan.makespan,
+      steps: plan.steps.map((p) => {
+        const i = info.get(p.id)!
+        return {
+          stepId: Number(p.id), start: p.start, end: p.end, lane: p.lane, handsLane: p.handsLane, rack: p.rack, slack: p.slack, critical: p.critical,
+          earliestStart: p.earliestStart, latestStart: p.latestStart,
+          recipeId: i.recipeId, recipeTitle: i.recipeTitle, label: i.label, handsOn: i.step.handsOn, station: i.step.station,
+          durationMin: i.step.durationMin, durationMax: i.step.durationMax,
+        }
+      }),
+      lanes: plan.lanes,
+      bounds: plan.bounds,
+      criticalPath: plan.criticalPath.map(Number),
+      cues: plan.cues.map((c) => ({ ...c, stepId: Number(c.stepId), during: c.during === null ? null : Number(c.during) })),
+      rule: plan.rule,
+      kitchen,
+    }
+  } catch (error) {
+    if (!(error instanceof PlanError)) throw error
+    const named = error.stepIds.map((id) => ({ stepId: Number(id), label: info.get(id)?.label ?? id, recipeTitle: info.get(id)?.recipeTitle ?? '' }))
+    throw createError({
+      statusCode: 422,
+      statusMessage: `${error.message}${named.length ? ` (steps: ${named.map((n) => `"${n.label}" in ${n.recipeTitle}`).join('; ')})` : ''}`,
+      data: { code: error.code, stepIds: named.map((n) => n.stepId), steps: named },
+    })
+  }
+}

@@ -1,0 +1,85 @@
+// Episodes: a title and a run order of segments (one recipe segment per recipe, in order, for now).
+import type { H3Event } from 'h3'
+import { Episode, EpisodeSegment, Recipe } from '../db/models'
+import type { StudioAction } from '../../shared/utils/roles'
+
+type Loaded = Episode & { segments: EpisodeSegment[] }
+
+async function recipeTitles(ids: number[]) {
+  const rows = ids.length ? await Recipe.findAll({ where: { id: ids }, attributes: ['id', 'title'] }) : []
+  return new Map(rows.map((r) => [r.id, r.title]))
+}
+
+export async function episodeView(e: Loaded) {
+  const segments = [...e.segments].sort((a, b) => a.position - b.position)
+  const titles = await recipeTitles(segments.map((s) => s.recipeId).filter((x): x is number => !!x))
+  return {
+    id: e.id, studioId: e.studioId, title: e.title, version: e.version, updatedAt: e.updatedAt,
+    segments: segments.map((s) => ({ id: s.id, position: s.position, kind: s.kind, recipeId: s.recipeId, title: s.title ?? (s.recipeId ? titles.get(s.recipeId) ?? null : null) })),
+  }
+}
+
+export async function loadEpisode(id: number) {
+  await useDb()
+  const e = (await Episode.findByPk(id, { include: [{ model: EpisodeSegment, as: 'segments' }] })) as Loaded | null
+  return e ? episodeView(e) : null
+}
+
+export async function listEpisodes(studioId: number) {
+  await useDb()
+  const rows = (await Episode.findAll({ where: { studioId }, include: [{ model: EpisodeSegment, as: 'segments' }], order: [['id', 'DESC']] })) as Loaded[]
+  const views = await Promise.all(rows.map(episodeView))
+  return views.map((v) => ({ id: v.id, title: v.title, updatedAt: v.updatedAt, recipes: v.segments.filter((s) => s.recipeId).map((s) => ({ id: s.recipeId!, title: s.title })) }))
+}
+
+/** The guard for /api/episodes/:id/…: the caller may do `action` in the episode's studio. */
+export async function requireEpisode(event: H3Event, action: StudioAction, param = 'id') {
+  const episodeId = routeId(event, param)
+  await useDb()
+  const row = await Episode.findByPk(episodeId, { attributes: ['id', 'studioId'] })
+  if (!row) {
+    await requireMember(event)
+    throw createError({ statusCode: 404, statusMessage: 'There is no such episode.' })
+  }
+  const caller = await authorize(event, { studioId: row.studioId }, action)
+  if (caller.kind !== 'member') throw createError({ statusCode: 403, statusMessage: 'This device joined one shoot only and may open nothing else.' })
+  return { caller, episodeId, studioId: row.studioId }
+}
+
+async function assertRecipesInStudio(studioId: number, recipeIds: number[]) {
+  const unique = [...new Set(recipeIds)]
+  if (unique.length !== recipeIds.length) throw createError({ statusCode: 400, statusMessage: 'recipeIds: a recipe appears twice; put each recipe in the episode once.', data: { field: 'recipeIds' } })
+  if (unique.length && (await Recipe.count({ where: { id: unique, studioId } })) !== unique.length) {
+    throw createError({ statusCode: 400, statusMessage: 'recipeIds: one of the recipes is not in this studio.', data: { field: 'recipeIds' } })
+  }
+}
+
+async function writeRecipeSegments(episodeId: number, recipeIds: number[]) {
+  await EpisodeSegment.destroy({ where: { episodeId } })
+  for (const [i, recipeId] of recipeIds.entries()) await EpisodeSegment.create({ episodeId, position: i + 1, kind: 'recipe', recipeId, title: null })
+}
+
+export async function createEpisode(studioId: number, body: { title: string; recipeIds: number[] }) {
+  const sequelize = await useDb()
+  await assertRecipesInStudio(studioId, body.recipeIds)
+  const id = await sequelize.transaction(async () => {
+    const episode = await Episode.create({ studioId, title: body.title })
+    await writeRecipeSegments(episode.id, body.recipeIds)
+    return episode.id
+  })
+  return (await loadEpisode(id))!
+}
+
+export async function saveEpisode(episodeId: number, studioId: number, body: { version: number; title?: string; recipeIds?: number[] }) {
+  const sequelize = await useDb()
+  if (body.recipeIds) await assertRecipesInStudio(studioId, body.recipeIds)
+  await sequelize.transaction(async () => {
+    const [changed] = await Episode.update({ ...(body.title ? { title: body.title } : {}), version: body.version + 1 }, { where: { id: episodeId, version: body.version } })
+    if (!changed) {
+      const current = await loadEpisode(episodeId)
+      throw createError({ statusCode: 409, statusMessage: `Someone else saved this episode while you were editing (now version ${current?.version}). Your changes are still on the page: compare, then save again.`, data: { current } })
+    }
+    if (body.recipeIds) await writeRecipeSegments(episodeId, body.recipeIds)
+  })
+  return (await loadEpisode(episodeId))!
+}

@@ -1,0 +1,103 @@
+// The cook plan route for the demo episode, kitchen what-ifs, the studio's kitchen profile, and the
+// refusals (422 naming the steps).
+import { beforeAll, describe, expect, it } from 'vitest'
+import { useBuiltApp } from '../support/app'
+import { Client, demo, signedIn } from '../support/client'
+
+describe('cook plan', async () => {
+  await useBuiltApp()
+  let producer: Client
+  let episodeId: number
+
+  beforeAll(async () => {
+    producer = await signedIn(demo.producer)
+    const list = await producer.get('/api/studios/1/episodes')
+    episodeId = list.body.episodes.find((e: { title: string }) => e.title === 'Thursday supper special').id
+  })
+
+  it('plans the demo episode: every step once, on a lane, within the links, at or above the lower bounds', async () => {
+    const plan = await producer.get(`/api/episodes/${episodeId}/plan`)
+    expect(plan.status).toBe(200)
+    const { body } = plan
+    const episode = (await producer.get(`/api/episodes/${episodeId}`)).body
+    expect(episode.segments.map((s: { title: string }) => s.title)).toEqual(['Smoky butter bean and tomato stew', 'Pan flatbreads with mint yoghurt', 'Roast squash with lentils and tahini'])
+    expect(body.steps).toHaveLength(16)
+    expect(body.kitchen).toEqual({ hands: 1, burners: 4, ovens: 1, racksPerOven: 1, parallelRecipes: true })
+    for (const s of body.steps) {
+      expect(body.lanes).toContain(s.lane)
+      expect(s.end).toBeGreaterThan(s.start)
+      // Planned at the long end of the step's range.
+      expect(s.end - s.start).toBe(s.durationMax ?? 60)
+    }
+    expect(body.makespan).toBe(Math.max(...body.steps.map((s: { end: number }) => s.end)))
+    expect(body.makespan).toBeGreaterThanOrEqual(body.bounds.criticalPath)
+    expect(body.makespan).toBeGreaterThanOrEqual(body.bounds.handsOn)
+    // One cook: hands-on steps never overlap.
+    const handsOn = body.steps.filter((s: { handsOn: boolean }) => s.handsOn).sort((a: { start: number }, b: { start: number }) => a.start - b.start)
+    for (let i = 1; i < handsOn.length; i++) expect(handsOn[i].start).toBeGreaterThanOrEqual(handsOn[i - 1].end)
+    // The roast and the lentils wait at the same time (the point of the plan).
+    const roast = body.steps.find((s: { label: string }) => s.label.startsWith('Toss the squash'))
+    const lentils = body.steps.find((s: { label: string }) => s.label.startsWith('Simmer green lentils'))
+    expect(lentils.start).toBeLessThan(roast.end)
+    expect(roast.start).toBeLessThan(lentils.end)
+    // The tahini sauce finishes its lead before the roast ends (finish-together, 5 min lead).
+    const tahini = body.steps.find((s: { label: string }) => s.label.startsWith('Whisk tahini'))
+    expect(tahini.start).toBe(roast.end - 300)
+    expect(body.cues.length).toBeGreaterThan(0)
+    expect(body.cues[0].text).toMatch(/^While “.+”: start “.+”\.$/)
+  })
+
+  it('one burner instead of four makes the cook longer; the studio profile is the default', async () => {
+    const four = (await producer.get(`/api/episodes/${episodeId}/plan`)).body.makespan
+    const one = (await producer.get(`/api/episodes/${episodeId}/plan?burners=1`)).body
+    expect(one.makespan).toBeGreaterThan(four)
+    expect(one.lanes.filter((l: string) => l.startsWith('burner'))).toEqual(['burner-1'])
+    const saved = await producer.patch('/api/studios/1', { kitchen: { hands: 1, burners: 1, ovens: 1, racksPerOven: 1, parallelRecipes: true } })
+    expect(saved.status).toBe(200)
+    expect((await producer.get(`/api/episodes/${episodeId}/plan`)).body.makespan).toBe(one.makespan)
+    await producer.patch('/api/studios/1', { kitchen: { hands: 1, burners: 4, ovens: 1, racksPerOven: 1, parallelRecipes: true } })
+    // A second cook can only help.
+    expect((await producer.get(`/api/episodes/${episodeId}/plan?hands=2`)).body.makespan).toBeLessThanOrEqual(four)
+  })
+
+  it('refuses a kitchen without the oven a step needs: 422 naming the step', async () => {
+    const res = await producer.get(`/api/episodes/${episodeId}/plan?ovens=0`)
+    expect(res.status).toBe(422)
+    expect(res.body.statusMessage).toMatch(/needs an oven/)
+    expect(res.body.data).toMatchObject({ code: 'missing-station', steps: [expect.objectContaining({ label: expect.stringMatching(/^Toss the squash/), recipeTitle: 'Roast squash with lentils and tahini' })] })
+  })
+
+  it('refuses a lead that cannot be met: 422 naming both steps', async () => {
+    const recipe = await producer.post('/api/studios/1/recipes', {
+      title: 'Eggs in sauce', servings: 2,
+      steps: [
+        { text: 'Simmer the sauce', handsOn: false, durationMin: 600, durationMax: 600, station: 'burner' },
+        // A 10-minute step cannot go in 6 minutes before the end of the sauce and finish with it.
+        { text: 'Poach the eggs in the sauce', handsOn: true, durationMin: 600, durationMax: 600, links: [{ step: 1, kind: 'finish-together', lag: 360 }] },
+      ],
+    })
+    expect(recipe.status).toBe(201)
+    const episode = await producer.post('/api/studios/1/episodes', { title: 'Impossible brunch', recipeIds: [recipe.body.id] })
+    expect(episode.status).toBe(201)
+    const res = await producer.get(`/api/episodes/${episode.body.id}/plan`)
+    expect(res.status).toBe(422)
+    expect(res.body.data.code).toBe('impossible-lag')
+    expect(res.body.data.steps.map((s: { label: string }) => s.label).sort()).toEqual(['Poach the eggs in the sauce', 'Simmer the sauce'])
+  })
+
+  it('episodes: a stale save is a 409; bad input a 400 naming the field; a camera may read the plan but not edit', async () => {
+    const e = (await producer.post('/api/studios/1/episodes', { title: 'Saturday brunch' })).body
+    expect((await producer.patch(`/api/episodes/${e.id}`, { version: 1, title: 'Saturday brunch, long' })).status).toBe(200)
+    const stale = await producer.patch(`/api/episodes/${e.id}`, { version: 1, title: 'Lost edit' })
+    expect(stale.status).toBe(409)
+    expect(stale.body.data.current.title).toBe('Saturday brunch, long')
+    expect((await producer.post('/api/studios/1/episodes', { title: '' })).body.statusMessage).toMatch(/^title: /)
+    expect((await producer.post('/api/studios/1/episodes', { title: 'Twice', recipeIds: [1, 1] })).body.statusMessage).toMatch(/^recipeIds: /)
+    expect((await producer.get(`/api/episodes/${episodeId}/plan?burners=lots`)).body.statusMessage).toMatch(/^burners: /)
+    const camera = await signedIn(demo.camera)
+    expect((await camera.get(`/api/episodes/${episodeId}/plan`)).status).toBe(200)
+    expect((await camera.patch(`/api/episodes/${e.id}`, { version: 2, title: 'No' })).status).toBe(403)
+    expect((await camera.patch('/api/studios/1', { kitchen: { hands: 2, burners: 4, ovens: 1, racksPerOven: 1, parallelRecipes: true } })).status).toBe(403)
+    expect((await new Client().get(`/api/episodes/${episodeId}/plan`)).status).toBe(401)
+  })
+})
