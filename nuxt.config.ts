@@ -43,6 +43,13 @@ export default defineNuxtConfig({
       loginPerAddress: 30,
       joinPerAddress: 10,
     },
+    photos: {
+      // NUXT_PHOTOS_DIR: folder of the photo store when no S3 bucket is configured.
+      dir: '.data/photos',
+      // NUXT_PHOTOS_S3_ENDPOINT, _BUCKET, _REGION (default us-east-1), _ACCESS_KEY_ID, _SECRET_ACCESS_KEY:
+      // an S3-compatible bucket instead of the folder. Empty: the folder.
+      s3: { endpoint: '', bucket: '', region: '', accessKeyId: '', secretAccessKey: '' },
+    },
     public: {
       appName: 'Hobline',
       // NUXT_PUBLIC_SITE_URL: absolute base for links in e-mails; empty means the request's own origin.
