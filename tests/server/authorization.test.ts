@@ -71,6 +71,13 @@ const rows: Row[] = [
   { file: 'recipes/[id]/scaled.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/scaled?servings=3`, expect: studio(200, 200, 200, 200) },
   { file: 'recipes/[id]/cost.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/cost`, expect: studio(200, 200, 200, 200) },
   { file: 'recipes/[id]/export.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/export`, expect: studio(200, 200, 200, 200) },
+  // Photo uploads: a JSON body passes the guard and is then refused as no form upload (400).
+  { file: 'recipes/[id]/photo.post.ts', method: 'POST', path: (i) => `/api/recipes/${i.recipe}/photo`, expect: studio(400, 400, 403, 403) },
+  { file: 'recipes/[id]/photo.delete.ts', method: 'DELETE', path: (i) => `/api/recipes/${i.recipe}/photo`, expect: studio(204, 204, 403, 403) },
+  { file: 'recipes/[id]/steps/[stepId]/photo.post.ts', method: 'POST', path: (i) => `/api/recipes/${i.recipe}/steps/999999/photo`, expect: studio(404, 404, 403, 403) },
+  { file: 'recipes/[id]/steps/[stepId]/photo.delete.ts', method: 'DELETE', path: (i) => `/api/recipes/${i.recipe}/steps/999999/photo`, expect: studio(404, 404, 403, 403) },
+  // An unknown photo of the studio: members pass the guard and find nothing (photos.test.ts reads real ones).
+  { file: 'photos/[...key].get.ts', method: 'GET', path: (i) => `/api/photos/studio-${i.studio}/recipe-${i.recipe}/abcdefghijkl.jpg`, expect: studio(404, 404, 404, 404) },
 ]
 
 // Routes added by nuxt-auth-utils itself: reading and clearing one's own session.
