@@ -186,6 +186,23 @@ describe('photos in the photo folder', async () => {
     const json = await producer.post(`/api/recipes/${recipe.id}/photo`, { photo: 'dish.jpg' })
     expect(json.status).toBe(400)
     expect(json.body.statusMessage).toMatch(/multipart\/form-data/)
+
+    // An upload that does not say how big it is (chunked) is not read at all.
+    const chunked = await new Promise<{ status: number; body: string }>((done, fail) => {
+      const base = new URL(url('/'))
+      const req = httpRequest({
+        host: base.hostname, port: base.port, method: 'POST', path: `/api/recipes/${recipe.id}/photo`,
+        headers: { cookie: producer.cookie, accept: 'application/json', 'content-type': 'multipart/form-data; boundary=x', 'transfer-encoding': 'chunked' },
+      }, (res) => {
+        let body = ''
+        res.on('data', (c) => (body += c))
+        res.on('end', () => done({ status: res.statusCode!, body }))
+      })
+      req.on('error', fail)
+      req.end('--x\r\nContent-Disposition: form-data; name="photo"; filename="a.jpg"\r\n\r\n\xff\xd8\xff\r\n--x--\r\n')
+    })
+    expect(chunked.status).toBe(411)
+    expect(JSON.parse(chunked.body).statusMessage).toMatch(/Content-Length/)
   })
 
   it('a new photo replaces the old one, and deleting it leaves nothing behind', async () => {
