@@ -18,7 +18,7 @@ interface Row {
   body?: (ids: Ids) => unknown
   expect: Record<CallerName, number>
 }
-interface Ids { studio: number; shoot: number; recipe: number }
+interface Ids { studio: number; shoot: number; recipe: number; episode: number }
 
 const all = (status: number) => Object.fromEntries(CALLERS.map((c) => [c, status])) as Record<CallerName, number>
 /** Studio routes: signed out 401, another studio's member 404, a device 403; members as given. */
@@ -52,6 +52,9 @@ const rows: Row[] = [
   { file: 'shoots/[id]/join-codes/index.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}/join-codes`, expect: shoot(200, 403, 403, 403, 403, 403) },
   { file: 'shoots/[id]/join-codes/index.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/join-codes`, body: () => ({ role: 'camera' }), expect: shoot(201, 403, 403, 403, 403, 403) },
   { file: 'shoots/[id]/join-codes/[codeId].delete.ts', method: 'DELETE', path: (i) => `/api/shoots/${i.shoot}/join-codes/999999`, expect: shoot(404, 403, 403, 403, 403, 403) },
+  { file: 'episodes/[id]/shoots.post.ts', method: 'POST', path: (i) => `/api/episodes/${i.episode}/shoots`, body: () => ({ mode: 'rehearsal' }), expect: studio(201, 403, 403, 403) },
+  // A host or camera command on a shoot made without a run order: the guard passes, the shoot refuses (409).
+  { file: 'shoots/[id]/commands.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/commands`, body: () => ({ type: 'rolling.set', rolling: true }), expect: shoot(409, 403, 409, 403, 403, 409) },
   { file: 'join.post.ts', method: 'POST', path: () => '/api/join', body: () => ({ code: 'QQQ-QQQ' }), expect: all(404) },
   { file: 'studios/[studioId]/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}`, expect: studio(200, 200, 200, 200) },
   { file: 'studios/[studioId]/index.patch.ts', method: 'PATCH', path: (i) => `/api/studios/${i.studio}`, body: () => ({ unitSystem: 'metric' }), expect: studio(200, 403, 403, 403) },
@@ -70,6 +73,11 @@ const rows: Row[] = [
   { file: 'recipes/[id]/index.delete.ts', method: 'DELETE', path: () => '/api/recipes/999999', expect: { anon: 401, producer: 404, host: 404, camera: 404, viewer: 404, outsider: 404, hostDevice: 401, cameraDevice: 401 } },
   { file: 'recipes/[id]/scaled.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/scaled?servings=3`, expect: studio(200, 200, 200, 200) },
   { file: 'recipes/[id]/cost.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/cost`, expect: studio(200, 200, 200, 200) },
+  { file: 'studios/[studioId]/episodes/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}/episodes`, expect: studio(200, 200, 200, 200) },
+  { file: 'studios/[studioId]/episodes/index.post.ts', method: 'POST', path: (i) => `/api/studios/${i.studio}/episodes`, body: () => ({ title: 'Matrix episode' }), expect: studio(201, 403, 403, 403) },
+  { file: 'episodes/[id]/index.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}`, expect: studio(200, 200, 200, 200) },
+  { file: 'episodes/[id]/index.patch.ts', method: 'PATCH', path: (i) => `/api/episodes/${i.episode}`, body: () => ({ version: 999999 }), expect: studio(409, 403, 403, 403) },
+  { file: 'episodes/[id]/plan.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/plan`, expect: studio(200, 200, 200, 200) },
   { file: 'recipes/[id]/export.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/export`, expect: studio(200, 200, 200, 200) },
   // Photo uploads: a JSON body passes the guard and is then refused as no form upload (400).
   { file: 'recipes/[id]/photo.post.ts', method: 'POST', path: (i) => `/api/recipes/${i.recipe}/photo`, expect: studio(400, 400, 403, 403) },
@@ -95,7 +103,7 @@ function routeFiles(dir: string): string[] {
 
 describe('authorisation matrix', async () => {
   const { databasePath } = await useBuiltApp()
-  const ids: Ids = { studio: 0, shoot: 0, recipe: 0 }
+  const ids: Ids = { studio: 0, shoot: 0, recipe: 0, episode: 0 }
   const callers = {} as Record<CallerName, () => Promise<Client>>
 
   beforeAll(async () => {
@@ -103,6 +111,7 @@ describe('authorisation matrix', async () => {
     ids.studio = (await producer.get('/api/me')).body.memberships[0].studioId
     ids.shoot = await insertShoot(databasePath, ids.studio, 'Matrix shoot')
     ids.recipe = (await producer.post(`/api/studios/${ids.studio}/recipes`, { title: 'Matrix stew', servings: 4 })).body.id
+    ids.episode = (await producer.post(`/api/studios/${ids.studio}/episodes`, { title: 'Matrix episode', recipeIds: [ids.recipe] })).body.id
     const outsiderEmail = uniqueEmail('outsider')
     await new Client().post('/api/auth/signup', { name: 'Outsider', email: outsiderEmail, password: 'some other studio', studioName: 'Elsewhere Kitchen' })
     const device = async (role: 'host' | 'camera') => {

@@ -4,15 +4,16 @@ import { Episode, EpisodeSegment, initEpisodeModels } from './episode'
 import { Invite, Membership, PasswordReset, User, initAccountModels } from './account'
 import { Mail, initMailModel } from './mail'
 import { Price, Recipe, RecipeIngredient, RecipeStep, initRecipeModels } from './recipe'
-import { JoinCode, Shoot, initShootModels } from './shoot'
+import { JoinCode, Shoot, ShootEvent, initShootEventModel, initShootModels } from './shoot'
 import { Studio, initStudio } from './studio'
 
-export { Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, Recipe, RecipeIngredient, RecipeStep, Shoot, Studio, User }
+export { Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, ShootEvent, Recipe, RecipeIngredient, RecipeStep, Shoot, Studio, User }
 
 export function initModels(sequelize: Sequelize) {
   initStudio(sequelize)
   initAccountModels(sequelize)
   initShootModels(sequelize)
+  initShootEventModel(sequelize)
   initMailModel(sequelize)
   initRecipeModels(sequelize)
   initEpisodeModels(sequelize)

@@ -1,8 +1,11 @@
-// The shoot as far as it exists yet; the live shoot engine extends this to the full snapshot.
+// The shoot's snapshot: the same object `shoot:join` acknowledges with.
 import { Shoot } from '../../../db/models'
 
 export default defineEventHandler(async (event) => {
-  const { shootId, role, kind } = await requireShoot(event, 'shoot.read')
-  const shoot = await Shoot.findByPk(shootId)
-  return { id: shoot!.id, studioId: shoot!.studioId, title: shoot!.title, mode: shoot!.mode, status: shoot!.status, you: { kind, role } }
+  const caller = await requireShoot(event, 'shoot.read')
+  const row = await Shoot.findByPk(caller.shootId, { attributes: ['id', 'state', 'title', 'mode', 'status', 'studioId'] })
+  // A shoot row without a run order (made before the engine) is described without state.
+  if (!row!.state) return { id: row!.id, studioId: row!.studioId, title: row!.title, mode: row!.mode, status: row!.status, you: { kind: caller.kind, role: caller.role } }
+  const snapshot = await shootSnapshot(caller.shootId, caller)
+  return { ...snapshot, id: row!.id, title: row!.title, mode: row!.mode, status: snapshot.state.status, you: { ...snapshot.you, kind: caller.kind, role: caller.role } }
 })
