@@ -21,7 +21,7 @@ export interface DemoRecipe {
   summary: string
   servings: number
   tags: string[]
-  photo: string
+  photo: 'plate' | 'pan' | 'loaf'
   /** Ingredient lines; "@price" names the demo price an ingredient is costed with. */
   lines: [string, string | null][]
   steps: DemoStep[]
@@ -52,7 +52,7 @@ export const demoRecipes: DemoRecipe[] = [
     summary: 'A one-pot stew for a cold evening: soft onions, smoked paprika and creamy beans.',
     servings: 4,
     tags: ['one-pot', 'vegan', 'budget'],
-    photo: 'stew',
+    photo: 'pan',
     lines: [
       ['2 tbsp olive oil', 'Olive oil'],
       ['1 onion, finely chopped', 'Onions'],
@@ -78,7 +78,7 @@ export const demoRecipes: DemoRecipe[] = [
     summary: 'Two-ingredient dough rested while the yoghurt is mixed, cooked in a dry pan.',
     servings: 4,
     tags: ['bread', 'vegetarian', 'quick'],
-    photo: 'flatbread',
+    photo: 'loaf',
     lines: [
       ['250 g self-raising flour', 'Self-raising flour'],
       ['350 g plain yoghurt', 'Plain yoghurt'],
@@ -98,7 +98,7 @@ export const demoRecipes: DemoRecipe[] = [
     summary: 'Oven-roasted squash on lemony lentils with a loose tahini sauce.',
     servings: 4,
     tags: ['oven', 'vegan'],
-    photo: 'squash',
+    photo: 'plate',
     lines: [
       ['1 butternut squash, peeled and cut into chunks', 'Butternut squash'],
       ['3 tbsp olive oil', 'Olive oil'],

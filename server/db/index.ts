@@ -3,7 +3,7 @@ import type { Sequelize } from 'sequelize'
 import { openDatabase } from './connection'
 import { migrate, type MigrationState } from './migrator'
 import { initModels } from './models'
-import { isEmpty, seedDemo, type PasswordHasher } from './seed'
+import { isEmpty, seedDemo, type DemoPhotoStore, type PasswordHasher } from './seed'
 import { hashPasswordOutsideNitro } from './password'
 
 export type SeedPolicy = 'auto' | 'always' | 'never'
@@ -20,11 +20,11 @@ export function shouldSeed(policy: string, dev: boolean): boolean {
   return dev
 }
 
-export async function startDatabase(path: string, seed: boolean, hashPassword: PasswordHasher = hashPasswordOutsideNitro): Promise<StartedDatabase> {
+export async function startDatabase(path: string, seed: boolean, hashPassword: PasswordHasher = hashPasswordOutsideNitro, storePhoto?: DemoPhotoStore): Promise<StartedDatabase> {
   const sequelize = await openDatabase(path)
   initModels(sequelize)
   const migrations = await migrate(sequelize)
   let seeded = false
-  if (seed && (await isEmpty())) seeded = (await seedDemo(sequelize, hashPassword)).seeded
+  if (seed && (await isEmpty())) seeded = (await seedDemo(sequelize, hashPassword, storePhoto)).seeded
   return { sequelize, migrations, seeded }
 }

@@ -3,7 +3,7 @@
 import { parseQuantity } from '../../shared/utils/quantity'
 import { suggestAllergens } from '../../shared/utils/allergens'
 import { makeIngredientKey, stepTokenProblems } from '../../shared/utils/step-text'
-import { demoEpisode, demoPrices, demoRecipes } from './demo-recipes'
+import { demoEpisode, demoPrices, demoRecipes, type DemoRecipe } from './demo-recipes'
 import { Episode, EpisodeSegment, Price, Recipe, RecipeIngredient, RecipeStep } from './models'
 
 export async function seedDemoRecipes(studioId: number, currency: string) {
@@ -12,7 +12,7 @@ export async function seedDemoRecipes(studioId: number, currency: string) {
     const row = await Price.create({ studioId, item, packageSize, packageUnit, priceMinor, currency, shop, boughtOn: '2026-11-24' })
     priceIds.set(item, row.id)
   }
-  const recipes: Recipe[] = []
+  const recipes: { recipe: Recipe; photo: DemoRecipe['photo'] }[] = []
   for (const demo of demoRecipes) {
     const recipe = await Recipe.create({ studioId, title: demo.title, summary: demo.summary, servings: demo.servings, yieldText: null, tags: demo.tags, notes: null, times: { prep: null, cook: null, total: null } })
     const keys: string[] = []
@@ -35,9 +35,9 @@ export async function seedDemoRecipes(studioId: number, currency: string) {
         station: step.station ?? null, after: step.after ?? [], links: step.links ?? [], cameraShot: step.shot ?? null, cameraNote: step.note ?? null, cautions: step.cautions ?? [], group: null,
       })
     }
-    recipes.push(recipe)
+    recipes.push({ recipe, photo: demo.photo })
   }
   const episode = await Episode.create({ studioId, title: demoEpisode.title })
-  for (const [i, recipe] of recipes.entries()) await EpisodeSegment.create({ episodeId: episode.id, position: i + 1, kind: 'recipe', recipeId: recipe.id, title: null })
+  for (const [i, { recipe }] of recipes.entries()) await EpisodeSegment.create({ episodeId: episode.id, position: i + 1, kind: 'recipe', recipeId: recipe.id, title: null })
   return recipes
 }

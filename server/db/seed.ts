@@ -11,12 +11,14 @@ export interface SeedResult {
 }
 
 export type PasswordHasher = (password: string) => Promise<string>
+/** Stores a demo photo for a recipe and returns its storage key (server/utils/photos.ts). */
+export type DemoPhotoStore = (name: 'plate' | 'pan' | 'loaf', studioId: number, recipeId: number) => Promise<string>
 
 export async function isEmpty(): Promise<boolean> {
   return (await Studio.count()) === 0
 }
 
-export async function seedDemo(sequelize: Sequelize, hashPassword: PasswordHasher): Promise<SeedResult> {
+export async function seedDemo(sequelize: Sequelize, hashPassword: PasswordHasher, storePhoto?: DemoPhotoStore): Promise<SeedResult> {
   const passwordHash = await hashPassword(DEMO_PASSWORD)
   return sequelize.transaction(async () => {
     if ((await Studio.count()) > 0) return { seeded: false, studio: demoStudio.name }
@@ -25,7 +27,10 @@ export async function seedDemo(sequelize: Sequelize, hashPassword: PasswordHashe
       const user = await User.create({ name: person.name, email: person.email, passwordHash })
       await Membership.create({ userId: user.id, studioId: studio.id, role: person.role })
     }
-    await seedDemoRecipes(studio.id, studio.currency)
+    const recipes = await seedDemoRecipes(studio.id, studio.currency)
+    if (storePhoto) {
+      for (const { recipe, photo } of recipes) await recipe.update({ photo: await storePhoto(photo, studio.id, recipe.id) })
+    }
     return { seeded: true, studio: demoStudio.name }
   })
 }

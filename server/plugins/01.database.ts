@@ -7,7 +7,7 @@ export default defineNitroPlugin((nitroApp) => {
   const config = useRuntimeConfig()
   const path = resolveDatabasePath(config.databasePath)
   const handle = { status: 'migrating', path } as DatabaseHandle
-  handle.ready = startDatabase(path, shouldSeed(config.databaseSeed, import.meta.dev), hashPassword)
+  handle.ready = startDatabase(path, shouldSeed(config.databaseSeed, import.meta.dev), hashPassword, storeDemoPhoto)
     .then(({ sequelize, migrations, seeded }) => {
       Object.assign(handle, { status: 'ready', sequelize, migrations })
       console.info(`[hobline] database ${basename(path)} ready: ${migrations.applied.length} migrations applied${seeded ? ', demo studio seeded' : ''}`)

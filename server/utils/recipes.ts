@@ -122,7 +122,10 @@ export async function saveRecipe(recipeId: number, body: RecipeUpdateBody): Prom
 
 export async function deleteRecipe(recipeId: number) {
   await useDb()
+  // Read the photo keys before the rows go; the files go only once the rows are gone.
+  const photos = await recipePhotoKeys(recipeId)
   await Recipe.destroy({ where: { id: recipeId } })
+  await deletePhotos(photos)
 }
 
 export async function studioSettings(studioId: number) {
