@@ -1,0 +1,45 @@
+// A timer's countdown on screen, drawn from its deadline and the server clock each frame
+// (timerRemainingMs in shared/utils/shoot-timers.ts): nothing here ticks, so every screen shows
+// the same time and a screen that slept, reloaded or lost the network shows the right one.
+import type { ShootTimer } from '~~/shared/types/shoot'
+import { timerRemainingMs } from '~~/shared/utils/shoot-timers'
+
+/** The last minute of kitchen time, when a countdown turns urgent. */
+export const COUNTDOWN_URGENT_MS = 60_000
+
+/** m:ss, or h:mm:ss from an hour, rounded up so 0:00 shows only when the time is up. */
+export function countdownText(ms: number): string {
+  const total = Math.ceil(Math.max(0, ms) / 1000)
+  const h = Math.floor(total / 3600)
+  const m = Math.floor((total % 3600) / 60)
+  const s = String(total % 60).padStart(2, '0')
+  return h > 0 ? `${h}:${String(m).padStart(2, '0')}:${s}` : `${m}:${s}`
+}
+
+/**
+ * Remaining kitchen time of a timer, its label, whether it is in its last minute and whether it is
+ * due. A running timer whose deadline has passed counts as due at once, before the server's word
+ * arrives (or while this screen is offline); a due timer stays due until someone acknowledges it.
+ */
+export function useTimerCountdown(timer: MaybeRefOrGetter<ShootTimer | null | undefined>, now: Readonly<Ref<number>> = useServerNow()) {
+  const remainingMs = computed(() => {
+    const t = toValue(timer)
+    return t ? timerRemainingMs(t, now.value) : 0
+  })
+  const due = computed(() => {
+    const t = toValue(timer)
+    return !!t && (t.state === 'due' || (t.state === 'running' && remainingMs.value <= 0))
+  })
+  const urgent = computed(() => {
+    const t = toValue(timer)
+    return !!t && !due.value && (t.state === 'running' || t.state === 'paused') && remainingMs.value <= COUNTDOWN_URGENT_MS
+  })
+  /** How long it has been due, in server ms (0 when it is not). */
+  const overdueMs = computed(() => {
+    const t = toValue(timer)
+    const since = t?.dueAtServerMs ?? t?.deadlineServerMs
+    return due.value && since != null ? Math.max(0, now.value - since) : 0
+  })
+  const label = computed(() => countdownText(remainingMs.value))
+  return { remainingMs, label, urgent, due, overdueMs }
+}
