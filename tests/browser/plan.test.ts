@@ -199,4 +199,36 @@ describe.skipIf(!chromiumAvailable())('cook plan timeline in the browser', async
     expect(consoleErrors).toEqual([])
     await page.close()
   })
+
+  it('a host tries another kitchen on the page only; the studio keeps its own', async () => {
+    const page = await createPage(undefined, { viewport: { width: 1280, height: 900 } })
+    const consoleErrors: string[] = []
+    page.on('console', (m) => m.type() === 'error' && consoleErrors.push(m.text()))
+    await page.goto(url('/signin'), { waitUntil: 'networkidle' })
+    await page.getByLabel('E-mail').fill('host@brackenford.test')
+    await page.getByLabel('Password').fill('hob-demo-2026')
+    await page.getByRole('button', { name: 'Sign in' }).click()
+    await page.waitForURL(/\/studios\/\d+$/)
+    const { episodes } = await page.evaluate(() => fetch('/api/studios/1/episodes').then((r) => r.json())) as { episodes: { id: number; title: string }[] }
+    const demo = episodes.find((e) => e.title === 'Thursday supper special')!
+    // A host reads the run order but does not change it.
+    await page.goto(url(`/episodes/${demo.id}`), { waitUntil: 'networkidle' })
+    expect(await page.getByRole('button', { name: 'Save the episode' }).count()).toBe(0)
+    await page.getByRole('heading', { name: 'Recipes in run order' }).waitFor()
+    expect(await axeViolations(page)).toEqual([])
+
+    await page.goto(url(`/episodes/${demo.id}/plan`), { waitUntil: 'networkidle' })
+    const studioBefore = await page.evaluate(() => fetch('/api/studios/1').then((r) => r.json())) as { kitchen: { burners: number } }
+    const before = await makespan(page)
+    await page.getByText('the plan changes on this page only').waitFor()
+    await page.getByLabel('Burners', { exact: true }).fill('1')
+    await page.getByRole('status').filter({ hasText: /^Re-planned: total cook time/ }).waitFor()
+    await page.waitForFunction((b) => Number(document.querySelector('[data-testid="makespan"]')?.getAttribute('data-seconds')) !== b, before)
+    expect(await makespan(page)).toBeGreaterThan(before)
+    const studioAfter = await page.evaluate(() => fetch('/api/studios/1').then((r) => r.json())) as { kitchen: { burners: number } }
+    expect(studioAfter.kitchen.burners).toBe(studioBefore.kitchen.burners)
+    expect(await axeViolations(page)).toEqual([])
+    expect(consoleErrors).toEqual([])
+    await page.close()
+  })
 })
