@@ -1,0 +1,258 @@
+// The recipe editor's form: what the inputs hold (text, so nothing typed is lost or reformatted
+// while editing), and the conversions between it, a loaded recipe and the request body.
+import type { CautionId } from '~~/shared/utils/cautions'
+import type { EuAllergenId, UsAllergenId } from '~~/shared/utils/allergens'
+import type { RecipeStation } from '~~/shared/types/recipe'
+import type { UnitId } from '~~/shared/utils/units'
+
+/** A recipe as GET /api/recipes/:id returns it (the parts the editor uses). */
+export interface LoadedRecipe {
+  id: number
+  studioId: number
+  version: number
+  title: string
+  summary: string | null
+  servings: number
+  yieldText: string | null
+  tags: string[]
+  notes: string | null
+  times: { prep: number | null; cook: number | null; total: number | null }
+  updatedAt?: string | Date
+  ingredients: Array<{
+    id: number; key: string; min: number | null; max: number | null; unit: string | null; item: string; prep: string | null
+    optional: boolean; toTaste: boolean; group: string | null; allergens: { eu: string[]; us: string[] }; priceId: number | null
+  }>
+  steps: Array<{
+    id: number; text: string; script: string[]; handsOn: boolean; durationMin: number | null; durationMax: number | null
+    station: string | null; after: number[]; links?: StepLink[]; cameraShot: string | null; cameraNote: string | null; cautions: string[]; group: string | null
+  }>
+}
+
+/** A link to an earlier step beyond "waits for" (start with it, or finish together), by position. */
+export interface StepLink { step: number; kind: 'start-start' | 'finish-together'; lag: number }
+
+export interface IngredientRow {
+  uid: string
+  id?: number
+  key: string
+  /** The key follows the item until the row is saved or a step names it. */
+  keyAuto: boolean
+  min: string
+  max: string
+  unit: UnitId | ''
+  item: string
+  prep: string
+  optional: boolean
+  toTaste: boolean
+  group: string
+  allergens: { eu: EuAllergenId[]; us: UsAllergenId[] }
+  /** "suggested": filled from the item's name and not yet confirmed by the user. */
+  allergenState: 'suggested' | 'confirmed'
+  priceId: number | null
+}
+
+export interface StepRow {
+  uid: string
+  id?: number
+  text: string
+  /** One script line per line of text. */
+  script: string
+  handsOn: boolean
+  /** Minutes, as typed. */
+  durationMin: string
+  durationMax: string
+  station: RecipeStation | ''
+  /** The steps this one waits for, by uid, so a reorder keeps the links. */
+  after: string[]
+  /** Other links to earlier steps, kept through edits and reorders (by uid). */
+  links: Array<{ stepUid: string; kind: StepLink['kind']; lag: number }>
+  cameraShot: string
+  cameraNote: string
+  cautions: CautionId[]
+  group: string
+}
+
+export interface RecipeForm {
+  title: string
+  summary: string
+  servings: string
+  yieldText: string
+  tags: string
+  notes: string
+  prepMinutes: string
+  cookMinutes: string
+  totalMinutes: string
+  ingredients: IngredientRow[]
+  steps: StepRow[]
+}
+
+let counter = 0
+/** A row id for Vue's keys and for links between steps; never sent to the server. */
+export const rowUid = (prefix: string) => `${prefix}-${Date.now().toString(36)}-${(counter++).toString(36)}`
+
+const minutesText = (seconds: number | null) => (seconds === null ? '' : String(Number((seconds / 60).toFixed(2))))
+const amountText = (v: number | null) => (v === null ? '' : formatAmountExact(v))
+
+export function emptyRecipeForm(): RecipeForm {
+  return { title: '', summary: '', servings: '4', yieldText: '', tags: '', notes: '', prepMinutes: '', cookMinutes: '', totalMinutes: '', ingredients: [], steps: [] }
+}
+
+export function formFromRecipe(r: LoadedRecipe): RecipeForm {
+  // Loaded rows take their uid from their id, so the server's render and the browser's agree.
+  const stepUids = r.steps.map((s) => `step-${s.id}`)
+  return {
+    title: r.title,
+    summary: r.summary ?? '',
+    servings: String(r.servings),
+    yieldText: r.yieldText ?? '',
+    tags: r.tags.join(', '),
+    notes: r.notes ?? '',
+    prepMinutes: minutesText(r.times.prep),
+    cookMinutes: minutesText(r.times.cook),
+    totalMinutes: minutesText(r.times.total),
+    ingredients: r.ingredients.map((i) => ({
+      uid: `ing-${i.id}`, id: i.id, key: i.key, keyAuto: false, min: amountText(i.min), max: i.max === i.min ? '' : amountText(i.max),
+      unit: (i.unit ?? '') as UnitId | '', item: i.item, prep: i.prep ?? '', optional: i.optional, toTaste: i.toTaste, group: i.group ?? '',
+      allergens: { eu: [...i.allergens.eu] as EuAllergenId[], us: [...i.allergens.us] as UsAllergenId[] }, allergenState: 'confirmed', priceId: i.priceId,
+    })),
+    steps: r.steps.map((s, index) => ({
+      uid: stepUids[index]!, id: s.id, text: s.text, script: s.script.join('\n'), handsOn: s.handsOn,
+      durationMin: minutesText(s.durationMin), durationMax: s.durationMax === s.durationMin ? '' : minutesText(s.durationMax),
+      station: (s.station ?? '') as StepRow['station'], after: s.after.map((p) => stepUids[p - 1]).filter((u): u is string => !!u),
+      links: (s.links ?? []).map((l) => ({ stepUid: stepUids[l.step - 1]!, kind: l.kind, lag: l.lag })).filter((l) => !!l.stepUid),
+      cameraShot: s.cameraShot ?? '', cameraNote: s.cameraNote ?? '', cautions: [...s.cautions] as CautionId[], group: s.group ?? '',
+    })),
+  }
+}
+
+/** A new ingredient row, its allergens suggested from the item's name. */
+export function ingredientRow(parts: Partial<Pick<IngredientRow, 'min' | 'max' | 'unit' | 'item' | 'prep' | 'optional' | 'toTaste'>>, takenKeys: string[]): IngredientRow {
+  const item = parts.item ?? ''
+  const s = suggestAllergens(item)
+  return {
+    uid: rowUid('ing'), key: item ? makeIngredientKey(item, takenKeys) : '', keyAuto: true, min: parts.min ?? '', max: parts.max ?? '', unit: parts.unit ?? '',
+    item, prep: parts.prep ?? '', optional: parts.optional ?? false, toTaste: parts.toTaste ?? false, group: '',
+    allergens: { eu: s.eu, us: s.us }, allergenState: 'suggested', priceId: null,
+  }
+}
+
+/** "2 1/2 cups plain flour, sifted" as a row, and what the reader was unsure of. */
+export function ingredientFromLine(line: string, takenKeys: string[], cups: 'us' | 'metric' = 'us'): { row: IngredientRow; warnings: string[] } {
+  const q = parseQuantity(line, { cups })
+  const row = ingredientRow({
+    min: amountText(q.min), max: q.max === q.min ? '' : amountText(q.max), unit: q.unit ?? '', item: q.item, prep: q.prep ?? '', optional: q.optional, toTaste: q.toTaste,
+  }, takenKeys)
+  return { row, warnings: q.warnings }
+}
+
+export function blankStep(): StepRow {
+  return { uid: rowUid('step'), text: '', script: '', handsOn: true, durationMin: '', durationMax: '', station: '', after: [], links: [], cameraShot: '', cameraNote: '', cautions: [], group: '' }
+}
+
+/** An amount as typed ("2", "1.5", "1/2", "1 1/2", "1½"): the number, null for blank, NaN when unreadable. */
+export function readAmountInput(text: string): number | null {
+  const s = normaliseAmountText(text)
+  if (!s) return null
+  const r = readAmountAt(s, 0)
+  return r && r.end === s.length ? r.value : Number.NaN
+}
+
+/** Minutes as typed, in whole seconds: null for blank, NaN when unreadable. */
+export function readMinutesInput(text: string): number | null {
+  const s = text.trim().replace(',', '.')
+  if (!s) return null
+  const n = Number(s)
+  return Number.isFinite(n) && n >= 0 ? Math.round(n * 60) : Number.NaN
+}
+
+/** Move one entry of a list by `by` places; returns the new index, or null when it cannot move. */
+export function moveInList<T>(list: T[], index: number, by: -1 | 1): number | null {
+  const to = index + by
+  if (to < 0 || to >= list.length) return null
+  const [row] = list.splice(index, 1)
+  list.splice(to, 0, row!)
+  return to
+}
+
+/** After a reorder a step may only wait for steps above it: drop the others and say which. */
+export function pruneStepLinks(steps: StepRow[]): string[] {
+  const notes: string[] = []
+  steps.forEach((step, i) => {
+    const earlier = new Set(steps.slice(0, i).map((s) => s.uid))
+    const dropped = [...new Set([...step.after, ...step.links.map((l) => l.stepUid)].filter((u) => !earlier.has(u)))]
+    if (dropped.length) {
+      step.after = step.after.filter((u) => earlier.has(u))
+      step.links = step.links.filter((l) => earlier.has(l.stepUid))
+      notes.push(`Step ${i + 1} no longer waits for ${dropped.map((u) => `step ${steps.findIndex((s) => s.uid === u) + 1}`).join(', ')}, which now comes after it.`)
+    }
+  })
+  return notes
+}
+
+export interface FormProblem {
+  /** The request path it concerns, as the server names fields: "ingredients.2.min". */
+  field: string
+  message: string
+}
+
+const isBlankIngredient = (r: IngredientRow) => !r.item.trim() && !r.min.trim() && !r.max.trim() && !r.prep.trim()
+const isBlankStep = (s: StepRow) => !s.text.trim() && !s.script.trim() && !s.cameraShot.trim() && !s.cameraNote.trim()
+
+/** Rows with nothing typed in them are left out of a save (and then out of the form). */
+export function dropBlankRows(form: RecipeForm): void {
+  form.ingredients = form.ingredients.filter((r) => !isBlankIngredient(r))
+  const kept = form.steps.filter((s) => !isBlankStep(s))
+  const keptUids = new Set(kept.map((s) => s.uid))
+  for (const s of kept) {
+    s.after = s.after.filter((u) => keptUids.has(u))
+    s.links = s.links.filter((l) => keptUids.has(l.stepUid))
+  }
+  form.steps = kept
+}
+
+/** The request body for POST or PATCH, or the first things to fix before sending it. */
+export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>; problems: FormProblem[] } {
+  const problems: FormProblem[] = []
+  const num = (field: string, value: number | null, what: string) => {
+    if (Number.isNaN(value)) problems.push({ field, message: `${field}: ${what}` })
+    return Number.isNaN(value) ? null : value
+  }
+  const servings = Number(form.servings.trim().replace(',', '.'))
+  if (!form.servings.trim() || !Number.isFinite(servings)) problems.push({ field: 'servings', message: 'servings: write the number of servings, such as 4.' })
+  const minutes = (field: string, text: string) => num(field, readMinutesInput(text), 'write minutes as a number, such as 15 or 2.5.')
+  const ingredients = form.ingredients.map((r, i) => {
+    const amountWhat = 'write the amount as 2, 1.5, 1/2 or 1½ (or leave it empty).'
+    const min = num(`ingredients.${i}.min`, readAmountInput(r.min), amountWhat)
+    const max = num(`ingredients.${i}.max`, readAmountInput(r.max), amountWhat)
+    return {
+      ...(r.id ? { id: r.id } : {}), key: r.key || makeIngredientKey(r.item || 'ingredient', form.ingredients.map((x) => x.key)),
+      min: min ?? max, max: max ?? min, unit: r.unit || null, item: r.item.trim(), prep: r.prep.trim() || null, optional: r.optional, toTaste: r.toTaste,
+      group: r.group.trim() || null, allergens: { eu: r.allergens.eu, us: r.allergens.us }, priceId: r.priceId,
+    }
+  })
+  const steps = form.steps.map((s, i) => {
+    const dMin = minutes(`steps.${i}.durationMin`, s.durationMin)
+    const dMax = minutes(`steps.${i}.durationMax`, s.durationMax)
+    return {
+      ...(s.id ? { id: s.id } : {}), text: s.text.trim(), script: s.script.split('\n').map((l) => l.trim()).filter(Boolean), handsOn: s.handsOn,
+      durationMin: dMin ?? dMax, durationMax: dMax ?? dMin, station: s.station || null,
+      after: s.after.map((u) => form.steps.findIndex((x) => x.uid === u) + 1).filter((p) => p > 0 && p < i + 1).sort((a, b) => a - b),
+      links: s.links.map((l) => ({ step: form.steps.findIndex((x) => x.uid === l.stepUid) + 1, kind: l.kind, lag: l.lag })).filter((l) => l.step > 0 && l.step < i + 1),
+      cameraShot: s.cameraShot.trim() || null, cameraNote: s.cameraNote.trim() || null, cautions: s.cautions, group: s.group.trim() || null,
+    }
+  })
+  const body = {
+    title: form.title.trim(), summary: form.summary.trim() || null, servings, yieldText: form.yieldText.trim() || null,
+    tags: [...new Set(form.tags.split(',').map((t) => t.trim()).filter(Boolean))], notes: form.notes.trim() || null,
+    times: { prep: minutes('times.prep', form.prepMinutes), cook: minutes('times.cook', form.cookMinutes), total: minutes('times.total', form.totalMinutes) },
+    ingredients, steps,
+  }
+  return { body, problems }
+}
+
+/** "steps.2.text" → "Step 3, text" for a person; other fields as they are. */
+export function fieldLabel(field: string): string {
+  const m = /^(ingredients|steps)\.(\d+)\.?(.*)$/.exec(field)
+  if (!m) return field
+  return `${m[1] === 'steps' ? 'Step' : 'Ingredient'} ${Number(m[2]) + 1}${m[3] ? `, ${m[3]}` : ''}`
+}

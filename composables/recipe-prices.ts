@@ -1,0 +1,43 @@
+// The price list's form: what its inputs hold, and the request body made from them. The price is
+// typed as a decimal in the currency ("2.49") and sent in exact minor units (249).
+import type { UnitId } from '~~/shared/utils/units'
+
+export interface PriceRow { id: number; item: string; packageSize: number; packageUnit: string; priceMinor: number; currency: string; shop: string | null; boughtOn: string | null }
+
+export interface PriceFormDraft { item: string; packageSize: string; packageUnit: string; price: string; currency: string; shop: string; boughtOn: string }
+
+export function emptyPriceDraft(currency: string): PriceFormDraft {
+  return { item: '', packageSize: '', packageUnit: 'g', price: '', currency, shop: '', boughtOn: '' }
+}
+
+export function priceDraftFrom(p: PriceRow): PriceFormDraft {
+  return {
+    item: p.item, packageSize: String(p.packageSize), packageUnit: p.packageUnit, price: String(minorToDecimal(p.priceMinor, p.currency).toFixed(currencyMinorDigits(p.currency))),
+    currency: p.currency, shop: p.shop ?? '', boughtOn: p.boughtOn ?? '',
+  }
+}
+
+/** The body for POST or PATCH, or the field to fix and what to write there. */
+export function priceBodyFrom(d: PriceFormDraft): { body?: Record<string, unknown>; field?: string; message?: string } {
+  const currency = d.currency.trim().toUpperCase()
+  if (!isCurrencyCode(currency)) return { field: 'currency', message: 'currency: write a three-letter ISO 4217 code such as GBP, EUR or USD.' }
+  const size = Number(d.packageSize.trim().replace(',', '.'))
+  if (!d.packageSize.trim() || !Number.isFinite(size) || size <= 0) return { field: 'packageSize', message: 'packageSize: write the package size as a number above zero, such as 500.' }
+  let priceMinor: number
+  try {
+    priceMinor = parseMoneyToMinor(d.price, currency)
+  } catch (e) {
+    return { field: 'priceMinor', message: `price: ${(e as Error).message}.` }
+  }
+  return {
+    body: { item: d.item.trim(), packageSize: size, packageUnit: d.packageUnit, priceMinor, currency, shop: d.shop.trim() || null, boughtOn: d.boughtOn || null },
+  }
+}
+
+/** "500 g", "6 each", "1 L". */
+export function packageText(size: number, unit: string): string {
+  return unit === 'each' ? `${size} each` : `${size} ${unitLabel(unit as UnitId, size)}`
+}
+
+/** The units a package can be sold in: each, then every unit id with its label. */
+export const PACKAGE_UNITS: Array<{ id: string; label: string }> = [{ id: 'each', label: 'each' }, ...UNIT_IDS.map((u) => ({ id: u as string, label: u === 'cup' ? 'cup (US)' : unitLabel(u) }))]
