@@ -43,3 +43,8 @@ export function useTimerCountdown(timer: MaybeRefOrGetter<ShootTimer | null | un
   const label = computed(() => countdownText(remainingMs.value))
   return { remainingMs, label, urgent, due, overdueMs }
 }
+
+/** Time gone by (the shoot clock, a marker's stamp): m:ss or h:mm:ss, rounded down. */
+export function elapsedText(ms: number): string {
+  return countdownText(Math.floor(Math.max(0, ms) / 1000) * 1000)
+}

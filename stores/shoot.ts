@@ -267,28 +267,29 @@ export const useShootStore = defineStore('shoot', () => {
   /** Registers every socket and page listener, once for the life of the app. */
   function bind() {
     if (bound.value || !import.meta.client) return
-    socket = useNuxtApp().$socket
+    const s: ShootSocket = useNuxtApp().$socket
+    socket = s
     bound.value = true
     browserOnline.value = navigator.onLine
-    socket.on('connect', onConnect)
-    socket.on('disconnect', (reason) => {
+    s.on('connect', onConnect)
+    s.on('disconnect', (reason) => {
       connection.value = 'offline'
       // The server closed this socket on purpose; socket.io does not retry that by itself.
-      if (reason === 'io server disconnect' && shootId.value !== null) socket?.connect()
+      if (reason === 'io server disconnect' && shootId.value !== null) s.connect()
     })
-    socket.on('connect_error', () => {
+    s.on('connect_error', () => {
       connection.value = 'offline'
     })
-    socket.on('shoot:event', onEvent)
+    s.on('shoot:event', onEvent)
     window.addEventListener('offline', () => {
       browserOnline.value = false
       // The network is gone: drop the transport now rather than after the heartbeat times out, so
       // the screen says so at once; socket.io then retries until the network is back.
-      if (socket?.connected) socket.io.engine?.close()
+      if (s.connected) s.io.engine?.close()
     })
     window.addEventListener('online', () => {
       browserOnline.value = true
-      if (shootId.value !== null && !socket?.connected) socket?.connect()
+      if (shootId.value !== null && !s.connected) s.connect()
     })
     document.addEventListener('visibilitychange', () => {
       if (document.visibilityState !== 'visible' || shootId.value === null) return
