@@ -1,6 +1,7 @@
 // Every benchmark `npm run bench` runs, in order. Add new ones here.
 import { databaseCommit } from './database.bench'
 import { planBenchmarks } from './plan.bench'
+import { shootBenchmarks } from './shoot.bench'
 import type { Benchmark } from './types'
 
-export const benchmarks: Benchmark[] = [databaseCommit, ...planBenchmarks]
+export const benchmarks: Benchmark[] = [databaseCommit, ...planBenchmarks, ...shootBenchmarks]

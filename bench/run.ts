@@ -11,7 +11,7 @@ for (const bench of selected) {
   try {
     const result = await bench.run()
     const ratio = result.baseline ? result.figure / result.baseline : undefined
-    const pass = (result.bound === undefined || result.figure <= result.bound) && (result.ratioBound === undefined || ratio === undefined || ratio <= result.ratioBound)
+    const pass = (result.bound === undefined || result.figure <= result.bound) && (result.minimum === undefined || result.figure >= result.minimum) && (result.ratioBound === undefined || ratio === undefined || ratio <= result.ratioBound)
     rows.push({ name: bench.name, result, pass })
   } catch (error) {
     rows.push({ name: bench.name, error: (error as Error).message, pass: false })
@@ -24,7 +24,7 @@ const table = rows.map(({ name, result, error, pass }) => ({
   figure: result ? fmt(result.figure, result.unit) : `error: ${error}`,
   baseline: result ? fmt(result.baseline, result.unit) : '—',
   ratio: result?.baseline ? `${(result.figure / result.baseline).toFixed(2)}×` : '—',
-  bound: result ? [result.bound !== undefined ? `≤ ${result.bound} ${result.unit}` : '', result.ratioBound !== undefined ? `≤ ${result.ratioBound}×` : ''].filter(Boolean).join(', ') || '—' : '—',
+  bound: result ? [result.bound !== undefined ? `≤ ${result.bound} ${result.unit}` : '', result.minimum !== undefined ? `≥ ${result.minimum} ${result.unit}` : '', result.ratioBound !== undefined ? `≤ ${result.ratioBound}×` : ''].filter(Boolean).join(', ') || '—' : '—',
   result: pass ? 'pass' : 'FAIL',
   note: result?.note ?? '',
 }))

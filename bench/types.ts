@@ -6,6 +6,8 @@ export interface BenchResult {
   baseline?: number
   /** Largest acceptable figure (same unit). */
   bound?: number
+  /** Smallest acceptable figure, for figures where more is better (throughput). */
+  minimum?: number
   /** Largest acceptable figure ÷ baseline. */
   ratioBound?: number
   note?: string

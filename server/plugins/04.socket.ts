@@ -14,7 +14,8 @@ export default defineNitroPlugin((nitroApp) => {
   const io = new Server<ClientToServerEvents, ServerToClientEvents>({ serveClient: false })
   io.bind(engine)
   const room = (shootId: number) => `shoot:${shootId}`
-  setShootBroadcast((shootId, message) => io.to(room(shootId)).emit('shoot:event', message))
+  // `sentAt` (wall clock, sub-millisecond) lets a screen and the benchmark see how long delivery took.
+  setShootBroadcast((shootId, message) => io.to(room(shootId)).emit('shoot:event', { ...message, sentAt: performance.timeOrigin + performance.now() }))
 
   // The handshake: read the session once; every event re-checks it through the guard.
   io.use(async (socket, next) => {

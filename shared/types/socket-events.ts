@@ -31,6 +31,8 @@ export interface ShootEventMessage {
   events: ShootEvent[]
   state: ShootState
   serverNow: number
+  /** Wall-clock ms (sub-millisecond) when the server handed the message to socket.io. */
+  sentAt?: number
 }
 
 export type SocketAck<T> = ({ ok: true } & T) | { ok: false; error: ShootCommandError | { code: string; message: string } }

@@ -22,6 +22,16 @@ describe('built app', async () => {
     expect(html).toMatch(/<html\s+lang="en"/)
   })
 
+  it('serves the static files the page names: its CSS, its scripts and the icon', async () => {
+    const html = await (await fetch('/')).text()
+    const assets = [...html.matchAll(/(?:href|src)="(\/_nuxt\/[^"]+)"/g)].map((m) => m[1]!)
+    expect(assets.length).toBeGreaterThan(1)
+    for (const path of [...new Set(assets), '/favicon.svg']) {
+      const res = await fetch(path)
+      expect(res.status, path).toBe(200)
+    }
+  })
+
   it('answers an unknown page with a 404 in Hobline\'s own look', async () => {
     const res = await fetch('/no-such-page', { headers: { accept: 'text/html' } })
     expect(res.status).toBe(404)

@@ -1,0 +1,166 @@
+// Live shoot fan-out: 50 socket.io clients over 10 shoots on the built app, beside a bare
+// socket.io broadcast server measured in the same run with the same clients and payload size.
+// Latency is wall clock (performance.timeOrigin + now) from the server handing a message to
+// socket.io to its arrival at a client, and from a command's emit to its arrival at all clients.
+import { createServer } from 'node:http'
+import { Server } from 'socket.io'
+import { io as connect, type Socket } from 'socket.io-client'
+import { getRandomPort } from 'get-port-please'
+import sqlite3 from 'sqlite3'
+import { DEMO_PASSWORD } from '../server/db/demo'
+import { signIn, startBuiltApp } from './server'
+import { percentile, type Benchmark, type BenchResult } from './types'
+
+const SHOOTS = 10
+const PER_SHOOT = 5
+const ROUNDS = 60
+const wall = () => performance.timeOrigin + performance.now()
+
+function open(url: string, cookie?: string): Promise<Socket> {
+  const socket = connect(url, { transports: ['websocket'], extraHeaders: cookie ? { cookie } : {}, forceNew: true, reconnection: false })
+  return new Promise((resolve, reject) => {
+    socket.once('connect', () => resolve(socket))
+    socket.once('connect_error', reject)
+  })
+}
+const ack = <T>(s: Socket, event: string, payload: unknown) => new Promise<T>((r) => s.emit(event, payload, r))
+
+interface Setup { url: string; cookie: string; shootIds: number[]; clients: Socket[][]; stop: () => Promise<void>; databasePath: string }
+let shared: Promise<Setup> | undefined
+
+async function setup(): Promise<Setup> {
+  const app = await startBuiltApp()
+  const cookie = await signIn(app.url, 'producer@brackenford.test', DEMO_PASSWORD)
+  const shootIds: number[] = []
+  for (let i = 0; i < SHOOTS; i++) {
+    const res = await fetch(`${app.url}/api/episodes/1/shoots`, { method: 'POST', headers: { cookie, 'content-type': 'application/json' }, body: JSON.stringify({ mode: 'rehearsal' }) })
+    shootIds.push(((await res.json()) as { shoot: { id: number } }).shoot.id)
+  }
+  const clients: Socket[][] = []
+  for (const shootId of shootIds) {
+    const group = await Promise.all(Array.from({ length: PER_SHOOT }, () => open(app.url, cookie)))
+    for (const s of group) await ack(s, 'shoot:join', { shootId })
+    clients.push(group)
+  }
+  await Promise.all(shootIds.map((shootId, i) => ack(clients[i]![0]!, 'shoot:command', { shootId, type: 'shoot.start' })))
+  return { ...app, cookie, shootIds, clients }
+}
+
+/** One round: every shoot gets one command at once; resolves with per-client delivery and round-trip times. */
+async function round(s: Setup, n: number) {
+  const delivery: number[] = []
+  const roundTrip: number[] = []
+  let size = 0
+  await Promise.all(s.shootIds.map((shootId, i) => new Promise<void>((done) => {
+    const group = s.clients[i]!
+    let left = group.length
+    const sent = wall()
+    for (const c of group) {
+      c.once('shoot:event', (m: { sentAt: number }) => {
+        const now = wall()
+        delivery.push(now - m.sentAt)
+        roundTrip.push(now - sent)
+        size = JSON.stringify(m).length
+        if (--left === 0) done()
+      })
+    }
+    group[0]!.emit('shoot:command', { shootId, type: 'marker.add', kind: 'note', text: `round ${n}` }, () => {})
+  })))
+  return { delivery, roundTrip, size }
+}
+
+async function bareBroadcast(payloadSize: number): Promise<number[]> {
+  const port = await getRandomPort('127.0.0.1')
+  const http = createServer()
+  const io = new Server(http)
+  io.on('connection', (socket) => {
+    socket.on('join', (room: string, cb: () => void) => socket.join(room) && cb())
+    socket.on('cast', ({ room, payload }: { room: string; payload: string }) => io.to(room).emit('cast', { payload, sentAt: wall() }))
+  })
+  await new Promise<void>((r) => http.listen(port, '127.0.0.1', r))
+  const url = `http://127.0.0.1:${port}`
+  const groups: Socket[][] = []
+  for (let g = 0; g < SHOOTS; g++) {
+    const group = await Promise.all(Array.from({ length: PER_SHOOT }, () => open(url)))
+    for (const c of group) await new Promise<void>((r) => c.emit('join', `room-${g}`, r))
+    groups.push(group)
+  }
+  const payload = 'x'.repeat(payloadSize)
+  const delivery: number[] = []
+  for (let n = 0; n < ROUNDS; n++) {
+    await Promise.all(groups.map((group, g) => new Promise<void>((done) => {
+      let left = group.length
+      for (const c of group) c.once('cast', (m: { sentAt: number }) => { delivery.push(wall() - m.sentAt); if (--left === 0) done() })
+      group[0]!.emit('cast', { room: `room-${g}`, payload })
+    })))
+  }
+  groups.flat().forEach((c) => c.disconnect())
+  io.close()
+  return delivery
+}
+
+let measured: Promise<{ delivery: number[]; roundTrip: number[]; bare: number[] }> | undefined
+function measure() {
+  measured ??= (async () => {
+    const s = await (shared ??= setup())
+    for (let n = 0; n < 5; n++) await round(s, -n) // warm-up
+    const delivery: number[] = []
+    const roundTrip: number[] = []
+    let size = 0
+    for (let n = 0; n < ROUNDS; n++) {
+      const r = await round(s, n)
+      delivery.push(...r.delivery)
+      roundTrip.push(...r.roundTrip)
+      size = r.size
+    }
+    const bare = await bareBroadcast(size)
+    return { delivery, roundTrip, bare }
+  })()
+  return measured
+}
+
+const fanOut: Benchmark = {
+  name: 'shoot: fan-out to 50 clients over 10 shoots, p99',
+  async run(): Promise<BenchResult> {
+    const { delivery, bare } = await measure()
+    return { figure: percentile(delivery, 99), baseline: percentile(bare, 99), unit: 'ms', bound: 15, ratioBound: 1.3, note: `p50 ${percentile(delivery, 50).toFixed(2)} ms (bare ${percentile(bare, 50).toFixed(2)} ms); server hand-off → client` }
+  },
+}
+
+const commandToAll: Benchmark = {
+  name: 'shoot: command → every screen of its shoot, p99',
+  async run(): Promise<BenchResult> {
+    const { roundTrip } = await measure()
+    return { figure: percentile(roundTrip, 99), unit: 'ms', bound: 15, note: `p50 ${percentile(roundTrip, 50).toFixed(2)} ms; checked, applied in a SQLite transaction, logged, broadcast` }
+  },
+}
+
+const throughput: Benchmark = {
+  name: 'shoot: commands per second, every one persisted',
+  async run(): Promise<BenchResult> {
+    const s = await (shared ??= setup())
+    await measure()
+    const seconds = 3
+    const end = Date.now() + seconds * 1000
+    let accepted = 0
+    await Promise.all(s.shootIds.map(async (shootId, i) => {
+      const sender = s.clients[i]![1]!
+      while (Date.now() < end) {
+        const r = await ack<{ ok: boolean }>(sender, 'shoot:command', { shootId, type: 'marker.add', kind: 'good' })
+        if (r.ok) accepted++
+      }
+    }))
+    // Every accepted command is a row in the event log.
+    const db = new sqlite3.Database(s.databasePath)
+    const logged = await new Promise<number>((r) => db.get('SELECT COUNT(*) AS n FROM shoot_events WHERE type = ?', ['marker.add'], (_e, row: { n: number }) => r(row.n)))
+    db.close()
+    s.clients.flat().forEach((c) => c.disconnect())
+    await s.stop()
+    const rate = accepted / seconds
+    const expectedMarkers = accepted + (ROUNDS + 5) * SHOOTS
+    if (logged !== expectedMarkers) throw new Error(`${logged} marker commands logged, ${expectedMarkers} accepted`)
+    return { figure: rate, unit: 'cmd/s', minimum: 200, note: `${accepted} accepted over ${SHOOTS} shoots in ${seconds} s, ${logged} marker commands in the event log` }
+  },
+}
+
+export const shootBenchmarks: Benchmark[] = [fanOut, commandToAll, throughput]
