@@ -60,6 +60,7 @@ export async function openDatabase(path: string): Promise<Sequelize> {
     }
     return connection
   }
+  serialiseTransactions(sequelize)
   if (storage !== ':memory:') await sequelize.query('PRAGMA journal_mode = WAL')
   await sequelize.query('PRAGMA synchronous = NORMAL')
   return sequelize
@@ -80,5 +81,24 @@ export async function readPragmas(sequelize: Sequelize): Promise<DatabasePragmas
     journalMode: String(await one('journal_mode')),
     foreignKeys: Number(await one('foreign_keys')) === 1,
     busyTimeoutMs: Number(await one('busy_timeout')),
+  }
+}
+
+/**
+ * One write transaction at a time in this process. SQLite has one writer anyway, and sqlite3 waits
+ * for a lock inside Node's small thread pool: with more IMMEDIATE transactions waiting than the pool
+ * has threads, the one holding the lock gets no thread to commit on, and every one of them stalls.
+ * Queueing them here keeps the waiting in JavaScript. Do not start a transaction inside another.
+ */
+function serialiseTransactions(sequelize: Sequelize) {
+  const begin = sequelize.transaction.bind(sequelize) as (...args: unknown[]) => Promise<unknown>
+  let queue: Promise<unknown> = Promise.resolve()
+  ;(sequelize as unknown as { transaction: (...args: unknown[]) => Promise<unknown> }).transaction = (...args: unknown[]) => {
+    // Only the managed form (with a callback) is queued; an unmanaged one is the caller's to end.
+    if (typeof args[args.length - 1] !== 'function') return begin(...args)
+    const run = () => begin(...args)
+    const next = queue.then(run, run)
+    queue = next.catch(() => {})
+    return next
   }
 }

@@ -49,6 +49,22 @@ describe('transactions', () => {
   })
 })
 
+describe('many transactions at once', () => {
+  it('all commit, more of them than Node has threads to wait on locks with', async () => {
+    const sequelize = await openDatabase(tempDatabasePath('many'))
+    open.push(sequelize)
+    await migrate(sequelize)
+    const insert = (i: number) => sequelize.transaction(async () => {
+      await sequelize.query("INSERT INTO studios (name, slug, locale, currency, created_at, updated_at) VALUES ('K', ?, 'en-GB', 'GBP', datetime('now'), datetime('now'))", { replacements: [`busy-${i}`] })
+      await new Promise((r) => setTimeout(r, 5))
+      await sequelize.query('SELECT COUNT(*) FROM studios')
+    })
+    await Promise.all(Array.from({ length: 24 }, (_, i) => insert(i)))
+    const rows = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM studios WHERE slug LIKE 'busy-%'", { type: QueryTypes.SELECT })
+    expect(rows[0]!.n).toBe(24)
+  }, 30_000)
+})
+
 describe('migrations', () => {
   it('apply every migration once, and a second run applies nothing', async () => {
     const sequelize = await openDatabase(tempDatabasePath('migrate'))
