@@ -112,5 +112,6 @@ export default defineNitroPlugin((nitroApp) => {
     clearInterval(timer)
     io.close()
     engine.close()
+    await closeShootDb()
   })
 })

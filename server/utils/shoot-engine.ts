@@ -1,8 +1,10 @@
-// The live shoot, server side: the shared reducer applied inside a SQLite transaction, one command
-// at a time per shoot, every accepted command logged and broadcast with its sequence number.
+// The live shoot, server side: the shared reducer applied inside a SQLite transaction (on the
+// engine's own connection, shoot-store.ts), one command at a time, every accepted command logged
+// and broadcast with its sequence number.
 // The latest state of each live shoot is kept in memory for the due-timer tick; the database is
 // what counts (a restart reloads it, and timers that fell due while the server was down fire).
-import { Episode, EpisodeSegment, Recipe, RecipeStep, Shoot, ShootEvent } from '../db/models'
+import type { Database as Sqlite3Database } from 'sqlite3'
+import { Episode, EpisodeSegment, Recipe, RecipeStep, Shoot } from '../db/models'
 import type { ShootActor, ShootState } from '../../shared/types/shoot'
 import type { ShootEventMessage, ShootSnapshot } from '../../shared/types/socket-events'
 import type { StudioAction } from '../../shared/utils/roles'
@@ -16,16 +18,15 @@ export function setShootBroadcast(fn: Broadcast) {
 }
 
 const live = new Map<number, ShootState>()
-const queues = new Map<number, Promise<unknown>>()
+let queue: Promise<unknown> = Promise.resolve()
 
-/** Runs `fn` after every earlier job for the same shoot: commands to one shoot never interleave. */
-function serialised<T>(shootId: number, fn: () => Promise<T>): Promise<T> {
-  const previous = queues.get(shootId) ?? Promise.resolve()
-  const next = previous.catch(() => {}).then(fn)
-  queues.set(shootId, next)
-  void next.finally(() => {
-    if (queues.get(shootId) === next) queues.delete(shootId)
-  })
+/**
+ * Runs `fn` after every earlier engine job: commands never interleave, on one shoot or across
+ * shoots, since they share the engine's one connection.
+ */
+function serialised<T>(fn: () => Promise<T>): Promise<T> {
+  const next = queue.then(fn, fn)
+  queue = next.catch(() => {})
   return next
 }
 
@@ -98,25 +99,32 @@ export async function shootSnapshot(shootId: number, caller: Caller): Promise<Sh
   }
 }
 
-async function persist(row: Shoot, next: ShootState, type: string, command: unknown, actor: ShootActor | null, now: number) {
-  await row.update({ state: JSON.stringify(next), seq: next.seq, status: next.status, mode: next.mode })
-  await ShootEvent.create({ shootId: row.id, seq: next.seq, type, command: JSON.stringify(command), actor: JSON.stringify(actor), serverMs: now })
+async function loadStateOn(conn: Sqlite3Database, shootId: number): Promise<ShootState> {
+  const row = await shootGet<{ state: string | null }>(conn, 'SELECT state FROM shoots WHERE id = ?', [shootId])
+  if (!row) throw createError({ statusCode: 404, statusMessage: 'There is no such shoot.' })
+  if (!row.state) throw createError({ statusCode: 409, statusMessage: 'This shoot was made without a run order; start a new shoot from its episode.' })
+  return JSON.parse(row.state) as ShootState
+}
+
+async function persist(conn: Sqlite3Database, shootId: number, next: ShootState, type: string, command: unknown, actor: ShootActor | null, now: number) {
+  const stamp = new Date(now).toISOString().replace('T', ' ').replace('Z', ' +00:00')
+  await shootRun(conn, 'UPDATE shoots SET state = ?, seq = ?, status = ?, mode = ?, updated_at = ? WHERE id = ?', [JSON.stringify(next), next.seq, next.status, next.mode, stamp, shootId])
+  await shootRun(conn, 'INSERT INTO shoot_events (shoot_id, seq, type, command, actor, server_ms, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)', [shootId, next.seq, type, JSON.stringify(command), JSON.stringify(actor), now, stamp])
 }
 
 export type CommandOutcome = { ok: true; seq: number } | { ok: false; error: { code: string; message: string; field?: string } }
 
 /** Applies one command from `caller` (already authorised for the shoot) and broadcasts it. */
 export function runShootCommand(shootId: number, command: { type: string; [k: string]: unknown }, caller: Caller): Promise<CommandOutcome> {
-  return serialised(shootId, async () => {
-    const sequelize = await useDb()
+  return serialised(async () => {
     const actor = actorFor(caller)
     let message: ShootEventMessage | null = null
-    const outcome = await sequelize.transaction(async (): Promise<CommandOutcome> => {
-      const { row, state } = await loadState(shootId)
+    const outcome = await shootTransaction(async (conn): Promise<CommandOutcome> => {
+      const state = await loadStateOn(conn, shootId)
       const now = Date.now()
       const result = applyShootCommand(state, command, { nowServerMs: now, actor, newId: () => crypto.randomUUID().slice(0, 12) })
       if (!result.ok) return { ok: false, error: result.error }
-      await persist(row, result.state, command.type, command, actor, now)
+      await persist(conn, shootId, result.state, command.type, command, actor, now)
       message = { shootId, seq: result.state.seq, type: command.type, by: actor, events: result.events, state: result.state, serverNow: now }
       return { ok: true, seq: result.state.seq }
     })
@@ -146,15 +154,14 @@ export async function loadLiveShoots() {
 export async function tickDueTimers(now = Date.now()) {
   const candidates = [...live.entries()].filter(([, s]) => s.timers.some((t) => t.state === 'running' && t.deadlineServerMs !== null && t.deadlineServerMs <= now))
   for (const [shootId] of candidates) {
-    await serialised(shootId, async () => {
-      const sequelize = await useDb()
+    await serialised(async () => {
       let message: ShootEventMessage | null = null
-      await sequelize.transaction(async () => {
-        const { row, state } = await loadState(shootId)
+      await shootTransaction(async (conn) => {
+        const state = await loadStateOn(conn, shootId)
         const at = Date.now()
         const { state: next, due } = markDueTimers(state, at)
         if (!due.length) return
-        await persist(row, next, 'timer.due', { type: 'timer.due', timerIds: due.map((t) => t.id) }, null, at)
+        await persist(conn, shootId, next, 'timer.due', { type: 'timer.due', timerIds: due.map((t) => t.id) }, null, at)
         message = {
           shootId, seq: next.seq, type: 'timer.due', by: null, serverNow: at, state: next,
           events: due.map((t) => ({ type: 'timer.due' as const, timerId: t.id, label: t.label, slot: t.slot, sound: t.sound, dueAtServerMs: t.dueAtServerMs ?? at })),
