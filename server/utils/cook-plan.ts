@@ -31,7 +31,8 @@ export async function planEpisode(episodeId: number, kitchen: Kitchen) {
     const list = byRecipe.get(recipeId) ?? []
     const atPosition = new Map(list.map((s) => [s.position, s]))
     for (const s of list) {
-      const label = s.text.replace(/\{\{\s*([^}|*]+?)\s*(?:\*[^}|]*)?(?:\|[^}]*)?\}\}/g, (_m, key: string) => key.replace(/-/g, ' '))
+      // Tokens read as the ingredient's name; no closing full stop, since cues quote the label in a sentence.
+      const label = s.text.replace(/\{\{\s*([^}|*]+?)\s*(?:\*[^}|]*)?(?:\|[^}]*)?\}\}/g, (_m, key: string) => key.replace(/-/g, ' ')).replace(/[.。]+\s*$/, '')
       // "Waits for" names earlier steps; a step that names none follows the one before it.
       const after = s.after.length ? s.after : s.position > 1 && !s.links.length ? [s.position - 1] : []
       input.push({

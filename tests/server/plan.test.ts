@@ -45,6 +45,8 @@ describe('cook plan', async () => {
     expect(tahini.start).toBe(roast.end - 300)
     expect(body.cues.length).toBeGreaterThan(0)
     expect(body.cues[0].text).toMatch(/^While “.+”: start “.+”\.$/)
+    // Labels are quoted inside a sentence: no full stop of their own.
+    expect(body.cues.map((c: { text: string }) => c.text).join(" ")).not.toMatch(/\.”/)
   })
 
   it('one burner instead of four makes the cook longer; the studio profile is the default', async () => {
