@@ -66,9 +66,9 @@ export const demoRecipes: DemoRecipe[] = [
     ],
     steps: [
       { text: 'Chop {{onion|item}} finely and slice the garlic.', script: ['Start with the onion: small and even, so it softens at the same rate.'], handsOn: true, minutes: [4, 5], station: 'counter', shot: 'Overhead on the board', cautions: ['knife'] },
-      { text: 'Warm {{olive-oil}} in a wide pan and soften the onion.', script: ['Low and slow here — we want it sweet, not brown.'], handsOn: true, minutes: [8, 10], station: 'burner', after: [1], shot: 'Side angle on the pan', cautions: ['hot-oil'] },
-      { text: 'Stir in the garlic and {{smoked-paprika}} for a minute.', handsOn: true, minutes: [1, 2], station: 'burner', after: [2], shot: 'Close on the pan', note: 'Catch the colour change' },
-      { text: 'Add the tomatoes, beans and {{vegetable-stock}}; bring to a simmer.', script: ['Everything else goes in now, and the pot does the work.'], handsOn: true, minutes: [3, 4], station: 'burner', after: [3], shot: 'Wide on the hob', cautions: ['boiling'] },
+      { text: 'Warm {{olive-oil|item}} in a wide pan and soften the onion.', script: ['Low and slow here — we want it sweet, not brown.'], handsOn: true, minutes: [8, 10], station: 'burner', after: [1], shot: 'Side angle on the pan', cautions: ['hot-oil'] },
+      { text: 'Stir in the garlic and {{smoked-paprika|item}} for a minute.', handsOn: true, minutes: [1, 2], station: 'burner', after: [2], shot: 'Close on the pan', note: 'Catch the colour change' },
+      { text: 'Add the tomatoes, beans and {{vegetable-stock|item}}; bring to a simmer.', script: ['Everything else goes in now, and the pot does the work.'], handsOn: true, minutes: [3, 4], station: 'burner', after: [3], shot: 'Wide on the hob', cautions: ['boiling'] },
       { text: 'Simmer, stirring now and then, until thick.', handsOn: false, minutes: [20, 25], station: 'burner', after: [4], shot: 'Locked-off on the pot' },
       { text: 'Season with salt and scatter the parsley.', script: ['Taste first, then salt. Parsley if you have it — it costs a little extra.'], handsOn: true, minutes: [2, 2], after: [5], shot: 'Hero shot of the bowl' },
     ],
@@ -86,7 +86,7 @@ export const demoRecipes: DemoRecipe[] = [
       ['1 pinch salt', null],
     ],
     steps: [
-      { text: 'Mix {{self-raising-flour}} with {{plain-yoghurt*5/7}} and the salt into a soft dough.', script: ['Just two things in the bowl: flour and yoghurt.'], handsOn: true, minutes: [4, 5], station: 'counter', shot: 'Overhead on the bowl' },
+      { text: 'Mix {{self-raising-flour|item}} with {{plain-yoghurt*5/7|item}} and the salt into a soft dough.', script: ['Just two things in the bowl: flour and yoghurt.'], handsOn: true, minutes: [4, 5], station: 'counter', shot: 'Overhead on the bowl' },
       { text: 'Cover and rest the dough.', handsOn: false, minutes: [15, 20], after: [1], shot: 'Quick insert of the covered bowl' },
       { text: 'Chop the mint and stir it into the rest of the yoghurt.', script: ['While the dough rests, the dip.'], handsOn: true, minutes: [3, 4], station: 'counter', shot: 'Close on the knife', cautions: ['knife', 'allergen'] },
       { text: 'Divide and roll the dough into six rounds.', handsOn: true, minutes: [5, 6], station: 'counter', after: [2], shot: 'Hands on the board' },
@@ -109,10 +109,10 @@ export const demoRecipes: DemoRecipe[] = [
     ],
     steps: [
       { text: 'Heat the oven to 200 °C. Peel and cut the squash into chunks.', script: ['A heavy knife and a flat side down — squash likes to roll.'], handsOn: true, minutes: [8, 10], station: 'counter', shot: 'Overhead on the board', cautions: ['knife'] },
-      { text: 'Toss the squash with {{olive-oil*2/3}} and roast until soft and browned.', handsOn: false, minutes: [35, 40], station: 'oven', after: [1], shot: 'Tray into the oven', cautions: ['oven'] },
-      { text: 'Simmer {{green-lentils}} in plenty of water until just tender.', handsOn: false, minutes: [20, 25], station: 'burner', after: [1], shot: 'Locked-off on the pot', cautions: ['boiling'] },
+      { text: 'Toss the squash with {{olive-oil*2/3|item}} and roast until soft and browned.', handsOn: false, minutes: [35, 40], station: 'oven', after: [1], shot: 'Tray into the oven', cautions: ['oven'] },
+      { text: 'Simmer {{green-lentils|item}} in plenty of water until just tender.', handsOn: false, minutes: [20, 25], station: 'burner', after: [1], shot: 'Locked-off on the pot', cautions: ['boiling'] },
       // Whisked in the last five minutes of the roast, so sauce and squash are ready together.
-      { text: 'Whisk {{tahini}} with the lemon juice and cold water to a pourable sauce.', script: ['It seizes first, then loosens — keep whisking.'], handsOn: true, minutes: [3, 4], station: 'counter', links: [{ step: 2, kind: 'finish-together', lag: 300 }], shot: 'Close on the whisk', cautions: ['allergen'] },
+      { text: 'Whisk {{tahini|item}} with the lemon juice and cold water to a pourable sauce.', script: ['It seizes first, then loosens — keep whisking.'], handsOn: true, minutes: [3, 4], station: 'counter', links: [{ step: 2, kind: 'finish-together', lag: 300 }], shot: 'Close on the whisk', cautions: ['allergen'] },
       { text: 'Drain the lentils, dress with the rest of the oil and salt, and top with squash and sauce.', script: ['Lentils down, squash on top, sauce over everything.'], handsOn: true, minutes: [3, 4], after: [2, 3, 4], shot: 'Hero shot of the plate', cautions: ['oven'] },
     ],
   },
