@@ -13,7 +13,7 @@ import { percentile, type Benchmark, type BenchResult } from './types'
 
 const SHOOTS = 10
 const PER_SHOOT = 5
-const ROUNDS = 60
+const ROUNDS = 100
 const wall = () => performance.timeOrigin + performance.now()
 
 function open(url: string, cookie?: string): Promise<Socket> {
@@ -76,7 +76,8 @@ async function round(s: Setup, n: number) {
   return { delivery, roundTrip, size }
 }
 
-async function bareBroadcast(payloadSize: number): Promise<number[]> {
+/** A bare socket.io server with the same rooms and clients; `cast` broadcasts one payload to a room. */
+async function bareServer() {
   const port = await getRandomPort('127.0.0.1')
   const http = createServer()
   const io = new Server(http)
@@ -95,36 +96,44 @@ async function bareBroadcast(payloadSize: number): Promise<number[]> {
     for (const c of group) await new Promise<void>((r) => c.emit('join', `room-${g}`, r))
     groups.push(group)
   }
-  const payload = 'x'.repeat(payloadSize)
-  const delivery: number[] = []
-  for (let n = 0; n < ROUNDS; n++) {
-    await Promise.all(groups.map((group, g) => new Promise<void>((done) => {
+  const round = (payload: string) => {
+    const delivery: number[] = []
+    return Promise.all(groups.map((group, g) => new Promise<void>((done) => {
       let left = group.length
       for (const c of group) c.once('cast', (m: { sentAt: number }) => { delivery.push(wall() - m.sentAt); if (--left === 0) done() })
       group[0]!.emit('cast', { room: `room-${g}`, payload })
-    })))
+    }))).then(() => delivery)
   }
-  groups.flat().forEach((c) => c.disconnect())
-  io.close()
-  return delivery
+  const close = () => {
+    groups.flat().forEach((c) => c.disconnect())
+    io.close()
+  }
+  return { round, close }
 }
 
 let measured: Promise<{ delivery: number[]; roundTrip: number[]; bare: number[] }> | undefined
+// The app's rounds and the bare server's rounds alternate, so load on the machine falls on both alike.
 function measure() {
   measured ??= (async () => {
     const s = await (shared ??= setup())
-    for (let n = 0; n < 5; n++) await round(s, -n) // warm-up
+    const bare = await bareServer()
+    let payload = ''
+    for (let n = 0; n < 5; n++) {
+      const r = await round(s, -n) // warm-up, and the size of a real message
+      payload = 'x'.repeat(r.size)
+      await bare.round(payload)
+    }
     const delivery: number[] = []
     const roundTrip: number[] = []
-    let size = 0
+    const bareDelivery: number[] = []
     for (let n = 0; n < ROUNDS; n++) {
       const r = await round(s, n)
       delivery.push(...r.delivery)
       roundTrip.push(...r.roundTrip)
-      size = r.size
+      bareDelivery.push(...(await bare.round(payload)))
     }
-    const bare = await bareBroadcast(size)
-    return { delivery, roundTrip, bare }
+    bare.close()
+    return { delivery, roundTrip, bare: bareDelivery }
   })()
   return measured
 }
