@@ -6,24 +6,14 @@ import { planCriticalPath, planCook } from '../shared/utils/plan'
 import { planCriticalTimes } from '../shared/utils/plan-cpm'
 import { planCookExhaustive } from '../shared/utils/plan-exact'
 import { planBuildNetwork } from '../shared/utils/plan-network'
+import { planSeededRandom } from '../shared/utils/plan-rules'
 import { planSerialSchedule } from '../shared/utils/plan-sgs'
 import type { PlanInput, PlanKitchen, PlanStation, PlanStep } from '../shared/utils/plan-types'
 import { percentile, type Benchmark } from './types'
 
-function seeded(seed: number) {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
-
 /** An episode of `count` steps in recipes of 6–14 steps: prep, pans, ovens, rests, a few ties. */
 export function planBenchEpisode(count: number, seed: number, kitchen: PlanKitchen): PlanInput {
-  const random = seeded(seed)
+  const random = planSeededRandom(seed)
   const pick = <T>(xs: T[]) => xs[Math.floor(random() * xs.length)]!
   const steps: PlanStep[] = []
   for (let r = 0; steps.length < count; r++) {
@@ -50,7 +40,7 @@ export function planBenchEpisode(count: number, seed: number, kitchen: PlanKitch
 
 /** A small random plan, 6–8 steps, in a tight kitchen so that capacity matters. */
 export function planBenchSmall(seed: number): PlanInput {
-  const random = seeded(seed)
+  const random = planSeededRandom(seed)
   const n = 6 + Math.floor(random() * 3)
   const steps: PlanStep[] = []
   for (let j = 0; j < n; j++) {

@@ -34,16 +34,9 @@ export async function listEpisodes(studioId: number) {
 
 /** The guard for /api/episodes/:id/…: the caller may do `action` in the episode's studio. */
 export async function requireEpisode(event: H3Event, action: StudioAction, param = 'id') {
-  const episodeId = routeId(event, param)
-  await useDb()
-  const row = await Episode.findByPk(episodeId, { attributes: ['id', 'studioId'] })
-  if (!row) {
-    await requireMember(event)
-    throw createError({ statusCode: 404, statusMessage: 'There is no such episode.' })
-  }
-  const caller = await authorize(event, { studioId: row.studioId }, action)
-  if (caller.kind !== 'member') throw createError({ statusCode: 403, statusMessage: 'This device joined one shoot only and may open nothing else.' })
-  return { caller, episodeId, studioId: row.studioId }
+  const studioOf = async (id: number) => (await Episode.findByPk(id, { attributes: ['studioId'] }))?.studioId ?? null
+  const { caller, id, studioId } = await requireStudioThing(event, action, studioOf, 'episode', param)
+  return { caller, episodeId: id, studioId }
 }
 
 async function assertRecipesInStudio(studioId: number, recipeIds: number[]) {

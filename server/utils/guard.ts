@@ -109,3 +109,23 @@ export async function requireShoot(event: H3Event, action: StudioAction, param =
   const caller = await authorize(event, { shootId }, action)
   return { ...caller, shootId }
 }
+
+/**
+ * For routes under /api/<things>/:id/… where the thing belongs to a studio (a recipe, an episode):
+ * a member of that studio whose role allows `action`. An unknown id and another studio's thing look
+ * the same (404), once the caller is known to be signed in.
+ */
+export async function requireStudioThing(
+  event: H3Event, action: StudioAction, findStudioId: (id: number) => Promise<number | null>, noun: string, param = 'id',
+): Promise<{ caller: Extract<Caller, { kind: 'member' }>; id: number; studioId: number }> {
+  const id = routeId(event, param)
+  await useDb()
+  const studioId = await findStudioId(id)
+  if (studioId === null) {
+    await requireMember(event)
+    throw createError({ statusCode: 404, statusMessage: `There is no such ${noun}.` })
+  }
+  const caller = await authorize(event, { studioId }, action)
+  if (caller.kind !== 'member') throw createError({ statusCode: 403, statusMessage: 'This device joined one shoot only and may open nothing else.' })
+  return { caller, id, studioId }
+}

@@ -1,6 +1,6 @@
 // Scaling, costing and the recipe list: the shared domain core applied to stored recipes.
 import { Op } from 'sequelize'
-import { Price, Recipe, RecipeIngredient, Studio } from '../db/models'
+import { Recipe, RecipeIngredient, Studio } from '../db/models'
 import type { z } from 'zod'
 import type { studioSettingsSchema } from '../../shared/utils/recipe-schemas'
 import type { UnitId } from '../../shared/utils/units'
@@ -100,4 +100,3 @@ export async function updateStudioSettings(studioId: number, body: z.output<type
   return studioSettings(studioId)
 }
 
-export { Price }

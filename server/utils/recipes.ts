@@ -49,17 +49,9 @@ export async function loadRecipe(id: number): Promise<RecipeView | null> {
 
 /** The guard for /api/recipes/:id/…: the caller may do `action` in the recipe's studio. */
 export async function requireRecipe(event: H3Event, action: StudioAction, param = 'id') {
-  const recipeId = routeId(event, param)
-  await useDb()
-  const row = await Recipe.findByPk(recipeId, { attributes: ['id', 'studioId'] })
-  if (!row) {
-    // Unknown id and another studio's recipe look the same, once the caller is known to be signed in.
-    await requireMember(event)
-    throw createError({ statusCode: 404, statusMessage: 'There is no such recipe.' })
-  }
-  const caller = await authorize(event, { studioId: row.studioId }, action)
-  if (caller.kind !== 'member') throw createError({ statusCode: 403, statusMessage: 'This device joined one shoot only and may open nothing else.' })
-  return { caller, recipeId, studioId: row.studioId }
+  const studioOf = async (id: number) => (await Recipe.findByPk(id, { attributes: ['studioId'] }))?.studioId ?? null
+  const { caller, id, studioId } = await requireStudioThing(event, action, studioOf, 'recipe', param)
+  return { caller, recipeId: id, studioId }
 }
 
 async function writeParts(recipeId: number, body: RecipeCreateBody) {

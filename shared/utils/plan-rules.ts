@@ -44,7 +44,7 @@ function successorCounts(net: PlanNet): Float64Array | null {
 }
 
 /** A small seeded generator (mulberry32), so sampled priorities are the same on every run. */
-function seeded(seed: number) {
+export function planSeededRandom(seed: number) {
   let a = seed >>> 0
   return () => {
     a = (a + 0x6d2b79f5) >>> 0
@@ -85,7 +85,7 @@ export function planPriorityRules(net: PlanNet, times: PlanTimes): PlanRule[] {
  */
 export function planSampledRules(net: PlanNet, times: PlanTimes, best: () => Float64Array): PlanRule[] {
   const { n } = net
-  const random = seeded(0x5eed)
+  const random = planSeededRandom(0x5eed)
   const spread = Math.max(times.length, 1)
   return Array.from({ length: sampleCount(n) }, (_, s): PlanRule => {
     const fromBest = s % 2 === 1
