@@ -7,7 +7,7 @@
 import { defineStore } from 'pinia'
 import type { ShootSocket } from '~/plugins/socket.client'
 import type { ShootCommand, ShootCommandType, ShootRole, ShootState } from '~~/shared/types/shoot'
-import type { ShootEventMessage, ShootSnapshot } from '~~/shared/types/socket-events'
+import type { ShootEventMessage, ShootPresence, ShootSnapshot } from '~~/shared/types/socket-events'
 import { clockFilterAdd, clockFilterBest, ntpSample, serverNow, type ClockSample } from '~~/shared/utils/clock'
 import { shootCommandAllowed } from '~~/shared/utils/shoot-commands'
 import { shootCursorMoved, shootCursorRef, shootStepRefAt } from '~~/shared/utils/shoot'
@@ -81,6 +81,10 @@ export const useShootStore = defineStore('shoot', () => {
   const pending = shallowRef<ShootPendingCommand[]>([])
   const log = shallowRef<ShootLogEntry[]>([])
   const bound = ref(false)
+  /** The screens on this shoot and which ring aloud while the camera rolls (quiet on set). */
+  const presence = shallowRef<ShootPresence>({ screens: [] })
+  /** This screen's own alarm setting, told to the server on every join. */
+  const audibleWhileRolling = ref(false)
 
   let socket: ShootSocket | null = null
   let nextKey = 1
@@ -149,6 +153,7 @@ export const useShootStore = defineStore('shoot', () => {
     if (next.shoot.id !== shootId.value) return
     if (snapshot.value && next.state.seq < seq.value) return
     snapshot.value = next
+    if (next.presence) presence.value = next.presence
     seq.value = next.state.seq
     highestSeen = Math.max(highestSeen, next.state.seq)
     settlePending()
@@ -204,6 +209,7 @@ export const useShootStore = defineStore('shoot', () => {
       if (reply.ok) {
         const { ok: _ok, ...snap } = reply
         adopt(snap, true)
+        socket.emit('screen:alarm', { shootId: id, audibleWhileRolling: audibleWhileRolling.value })
         if (errorCode.value === 'join') setError(null)
       } else setError(reply.error)
     } catch {
@@ -281,6 +287,9 @@ export const useShootStore = defineStore('shoot', () => {
       connection.value = 'offline'
     })
     s.on('shoot:event', onEvent)
+    s.on('shoot:presence', (message) => {
+      if (message.shootId === shootId.value) presence.value = { screens: message.screens }
+    })
     window.addEventListener('offline', () => {
       browserOnline.value = false
       // The network is gone: drop the transport now rather than after the heartbeat times out, so
@@ -300,6 +309,24 @@ export const useShootStore = defineStore('shoot', () => {
   }
 
   // ---- actions for screens ---------------------------------------------------------------------
+
+  /** Says whether this screen rings aloud while the camera rolls. */
+  function setAudibleWhileRolling(audible: boolean) {
+    audibleWhileRolling.value = audible
+    if (socket?.connected && shootId.value !== null) socket.emit('screen:alarm', { shootId: shootId.value, audibleWhileRolling: audible })
+  }
+
+  /** Holds a snapshot fetched with the page, so the screen draws on the server and on its first
+   * frame before the socket is up; open() then joins the shoot live. */
+  function prime(id: number, initial: ShootSnapshot) {
+    if (shootId.value !== null && shootId.value !== id) return
+    shootId.value = id
+    if (!snapshot.value || initial.state.seq >= seq.value) {
+      snapshot.value = initial
+      seq.value = initial.state.seq
+      if (initial.presence) presence.value = initial.presence
+    }
+  }
 
   /** Opens a shoot on this screen: joins its room and loads its snapshot (a snapshot fetched over
    * HTTP can be passed to draw at once). */
@@ -329,6 +356,7 @@ export const useShootStore = defineStore('shoot', () => {
     highestSeen = 0
     pending.value = []
     log.value = []
+    presence.value = { screens: [] }
     setError(null)
     socket?.disconnect()
     connection.value = 'connecting'
@@ -377,7 +405,7 @@ export const useShootStore = defineStore('shoot', () => {
 
   return {
     shootId, snapshot, seq, connection, browserOnline, offset, clockDelay, clockSampledAt, error, errorCode, pending, log, bound,
-    online, you, role, steps, serverState, state, cursorRef, currentSegment, currentStep, nextRef, nextStep,
-    can, serverNowMs, clearError, bind, open, leave, command, resync, sampleClock,
+    presence, audibleWhileRolling, setAudibleWhileRolling, online, you, role, steps, serverState, state, cursorRef, currentSegment, currentStep, nextRef, nextStep,
+    can, serverNowMs, clearError, bind, prime, open, leave, command, resync, sampleClock,
   }
 })

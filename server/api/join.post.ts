@@ -9,5 +9,5 @@ export default defineEventHandler(async (event) => {
     countAttempt(key)
     throw createError({ statusCode: 404, statusMessage: 'That join code is not valid or has expired. Check it on the control desk, or ask for a new one.' })
   }
-  return { shootId: device.shootId, role: device.role, until: device.until, next: `/shoots/${device.shootId}` }
+  return { shootId: device.shootId, role: device.role, until: device.until, next: shootScreenPath(device.shootId, device.role) }
 })

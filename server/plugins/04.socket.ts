@@ -15,7 +15,16 @@ export default defineNitroPlugin((nitroApp) => {
   io.bind(engine)
   const room = (shootId: number) => `shoot:${shootId}`
   // `sentAt` (wall clock, sub-millisecond) lets a screen and the benchmark see how long delivery took.
-  setShootBroadcast((shootId, message) => io.to(room(shootId)).emit('shoot:event', { ...message, sentAt: performance.timeOrigin + performance.now() }))
+  // Who is on each shoot: every screen in a room says its role and whether it rings aloud while the
+  // camera rolls (quiet on set), so no due timer is left silent on every device.
+  type Screen = { role: string; audibleWhileRolling: boolean }
+  const screenOf = (socketId: string, shootId: number): Screen | undefined =>
+    (io.sockets.sockets.get(socketId)?.data.screens as Map<number, Screen> | undefined)?.get(shootId)
+  const presence = (shootId: number) => ({
+    screens: [...(io.sockets.adapter.rooms.get(room(shootId)) ?? [])].map((id) => screenOf(id, shootId)).filter((x): x is Screen => !!x),
+  })
+  const announce = (shootId: number) => io.to(room(shootId)).emit('shoot:presence', { shootId, ...presence(shootId) })
+  setShootBroadcast((shootId, message) => io.to(room(shootId)).emit('shoot:event', { ...message, sentAt: performance.timeOrigin + performance.now() }), presence)
 
   // The handshake: read the session once; every event re-checks it through the guard.
   io.use(async (socket, next) => {
@@ -37,6 +46,8 @@ export default defineNitroPlugin((nitroApp) => {
   const badShoot = { ok: false as const, error: { code: 'invalid', message: 'shootId: send the number of the shoot.', field: 'shootId' } }
 
   io.on('connection', (socket) => {
+    const screens = new Map<number, Screen>()
+    socket.data.screens = screens
     socket.on('clock:ping', (payload, ack) => {
       const t2 = Date.now()
       if (typeof ack !== 'function') return
@@ -49,8 +60,12 @@ export default defineNitroPlugin((nitroApp) => {
       if (!shootId) return ack(badShoot)
       try {
         const caller = await authorizeSession(socket.data.session, { shootId }, 'shoot.read')
-        if (join) await socket.join(room(shootId))
+        if (join) {
+          await socket.join(room(shootId))
+          screens.set(shootId, { role: caller.role, audibleWhileRolling: screens.get(shootId)?.audibleWhileRolling ?? false })
+        }
         ack({ ok: true, ...(await shootSnapshot(shootId, caller)) })
+        if (join) announce(shootId)
       } catch (error) {
         ack(refuse(error))
       }
@@ -59,7 +74,25 @@ export default defineNitroPlugin((nitroApp) => {
     socket.on('shoot:snapshot', (payload, ack) => snapshot(payload, ack, false))
     socket.on('shoot:leave', (payload) => {
       const shootId = shootIdOf(payload)
-      if (shootId) void socket.leave(room(shootId))
+      if (!shootId) return
+      screens.delete(shootId)
+      void Promise.resolve(socket.leave(room(shootId))).then(() => announce(shootId))
+    })
+    socket.on('screen:alarm', async (payload) => {
+      const shootId = shootIdOf(payload)
+      const screen = shootId ? screens.get(shootId) : undefined
+      if (!shootId || !screen || typeof payload?.audibleWhileRolling !== 'boolean') return
+      try {
+        await authorizeSession(socket.data.session, { shootId }, 'shoot.read')
+      } catch {
+        return
+      }
+      screen.audibleWhileRolling = payload.audibleWhileRolling
+      announce(shootId)
+    })
+    socket.on('disconnect', () => {
+      for (const shootId of screens.keys()) announce(shootId)
+      screens.clear()
     })
 
     socket.on('shoot:command', async (payload, ack) => {

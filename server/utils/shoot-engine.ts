@@ -5,16 +5,19 @@
 // what counts (a restart reloads it, and timers that fell due while the server was down fire).
 import type { Database as Sqlite3Database } from 'sqlite3'
 import { Episode, EpisodeSegment, Recipe, RecipeStep, Shoot } from '../db/models'
+import { shootScript } from './shoot-script'
 import type { ShootActor, ShootState } from '../../shared/types/shoot'
-import type { ShootEventMessage, ShootSnapshot } from '../../shared/types/socket-events'
+import type { ShootEventMessage, ShootPresence, ShootSnapshot } from '../../shared/types/socket-events'
 import type { StudioAction } from '../../shared/utils/roles'
 import type { Caller } from './guard'
 
 type Broadcast = (shootId: number, message: ShootEventMessage) => void
 let broadcast: Broadcast = () => {}
-/** The socket plugin registers how to reach a shoot's room. */
-export function setShootBroadcast(fn: Broadcast) {
+let shootPresence: (shootId: number) => ShootPresence = () => ({ screens: [] })
+/** The socket plugin registers how to reach a shoot's room and who is in it. */
+export function setShootBroadcast(fn: Broadcast, presence?: (shootId: number) => ShootPresence) {
   broadcast = fn
+  if (presence) shootPresence = presence
 }
 
 const live = new Map<number, ShootState>()
@@ -75,17 +78,6 @@ async function loadState(shootId: number): Promise<{ row: Shoot; state: ShootSta
   return { row, state: JSON.parse(row.state) as ShootState }
 }
 
-async function stepDetails(state: ShootState): Promise<ShootSnapshot['steps']> {
-  const ids = state.runOrder.flatMap((s) => s.stepIds).map(Number)
-  if (!ids.length) return {}
-  const steps = await RecipeStep.findAll({ where: { id: ids } })
-  const recipes = new Map((await Recipe.findAll({ where: { id: [...new Set(steps.map((s) => s.recipeId))] }, attributes: ['id', 'title'] })).map((r) => [r.id, r.title]))
-  return Object.fromEntries(steps.map((s) => [String(s.id), {
-    recipeId: s.recipeId, recipeTitle: recipes.get(s.recipeId) ?? '', position: s.position, text: s.text, handsOn: s.handsOn,
-    durationMin: s.durationMin, durationMax: s.durationMax, cameraShot: s.cameraShot, cameraNote: s.cameraNote, cautions: s.cautions, script: s.script,
-  }]))
-}
-
 export async function shootSnapshot(shootId: number, caller: Caller): Promise<ShootSnapshot> {
   await useDb()
   const { row, state } = await loadState(shootId)
@@ -95,7 +87,8 @@ export async function shootSnapshot(shootId: number, caller: Caller): Promise<Sh
     state,
     serverNow: Date.now(),
     you: { kind: caller.kind, role: caller.role, actorId: actor.id },
-    steps: await stepDetails(state),
+    ...(await shootScript(state, { studioId: row.studioId, episodeId: row.episodeId ?? null })),
+    presence: shootPresence(shootId),
   }
 }
 

@@ -1,5 +1,6 @@
 // The socket.io event map, shared by the server plugin and the client store.
 import type { ShootCommandError, ShootEvent, ShootState } from './shoot'
+import type { StepTextSegment } from '../utils/step-text'
 
 export interface ShootInfo {
   id: number
@@ -18,7 +19,41 @@ export interface ShootSnapshot {
   /** Who is asking, in the role the shoot knows them by. */
   you: { kind: 'member' | 'device'; role: string; actorId: string }
   /** Step texts and cues for the run order, by step id. */
-  steps: Record<string, { recipeId: number; recipeTitle: string; position: number; text: string; handsOn: boolean; durationMin: number | null; durationMax: number | null; cameraShot: string | null; cameraNote: string | null; cautions: string[]; script: string[] }>
+  steps: Record<string, ShootStepDetails>
+  /** The unit system amounts are shown in (the studio's). */
+  units: 'metric' | 'us'
+  /** The cook plan's length in ms, or null when the episode cannot be planned. */
+  makespanMs: number | null
+  /** Screens on the shoot now, for quiet on set: how many ring aloud while the camera rolls. */
+  presence: ShootPresence
+}
+
+export interface ShootStepDetails {
+  recipeId: number
+  recipeTitle: string
+  position: number
+  /** As written, with raw {{key}} tokens. */
+  text: string
+  /** The text with amounts scaled in the shoot's units; an amount's segment names its ingredient. */
+  segments: StepTextSegment[]
+  /** The ingredients the step's text uses, with their scaled amounts. */
+  ingredients: Array<{ key: string; item: string; amount: string }>
+  /** EU allergen groups (Regulation (EU) No 1169/2011 Annex II) of those ingredients. */
+  allergens: string[]
+  handsOn: boolean
+  durationMin: number | null
+  durationMax: number | null
+  cameraShot: string | null
+  cameraNote: string | null
+  cautions: string[]
+  script: string[]
+  /** Where the cook plan puts the step, in ms on the shoot clock; null when unplanned. */
+  plannedStartMs: number | null
+  plannedEndMs: number | null
+}
+
+export interface ShootPresence {
+  screens: Array<{ role: string; audibleWhileRolling: boolean }>
 }
 
 /** Broadcast to a shoot's room for every accepted command and every timer that falls due. */
@@ -43,8 +78,11 @@ export interface ClientToServerEvents {
   'shoot:snapshot': (payload: { shootId: number }, ack: (reply: SocketAck<ShootSnapshot>) => void) => void
   'shoot:command': (payload: { shootId: number; type: string; [field: string]: unknown }, ack: (reply: SocketAck<{ seq: number }>) => void) => void
   'clock:ping': (payload: { t1: number }, ack: (reply: { t1: number; t2: number; t3: number }) => void) => void
+  /** This screen's alarm setting, so the others know whether anyone rings while rolling. */
+  'screen:alarm': (payload: { shootId: number; audibleWhileRolling: boolean }) => void
 }
 
 export interface ServerToClientEvents {
   'shoot:event': (message: ShootEventMessage) => void
+  'shoot:presence': (message: { shootId: number } & ShootPresence) => void
 }

@@ -29,7 +29,7 @@ describe('join codes', async () => {
     // Typed in lower case with a space: still the same code.
     const joined = await tablet.post('/api/join', { code: made.body.code.toLowerCase().replace('-', ' ') })
     expect(joined.status).toBe(200)
-    expect(joined.body).toMatchObject({ shootId, role: 'camera', next: `/shoots/${shootId}` })
+    expect(joined.body).toMatchObject({ shootId, role: 'camera', next: `/shoots/${shootId}/cue` })
     const shoot = await tablet.get(`/api/shoots/${shootId}`)
     expect(shoot.status).toBe(200)
     expect(shoot.body.you).toEqual({ kind: 'device', role: 'camera' })

@@ -1,6 +1,6 @@
 // Contrast of Hobline's colours, by the definitions of WCAG 2.2 (shared/utils/contrast.ts).
 import { describe, expect, it } from 'vitest'
-import { palette } from '../../tailwind.config'
+import { palette, setThemes } from '../../tailwind.config'
 import { contrastLevel, contrastRatio as contrast, relativeLuminance } from '../../shared/utils/contrast'
 
 describe('contrast formula', () => {
@@ -33,6 +33,27 @@ describe('set theme (shoot screens) reaches AAA, 7:1, on both backgrounds', () =
         expect(contrast(palette.set[fg], palette.set[bg])).toBeGreaterThanOrEqual(7)
       })
     }
+  }
+})
+
+describe('every contrast theme of the shoot screens reaches AAA, 7:1 (WCAG 2.2 SC 1.4.6)', () => {
+  const texts = ['bone', 'haze', 'saffron', 'ember', 'mint', 'sky'] as const
+  for (const [name, theme] of Object.entries(setThemes)) {
+    for (const bg of ['night', 'panel'] as const) {
+      for (const fg of texts) {
+        it(`${name}: ${fg} on ${bg}`, () => {
+          expect(contrast(theme[fg], theme[bg])).toBeGreaterThanOrEqual(7)
+        })
+      }
+    }
+    for (const accent of ['saffron', 'ember', 'mint', 'sky'] as const) {
+      it(`${name}: night text on a ${accent} button`, () => {
+        expect(contrast(theme.night, theme[accent])).toBeGreaterThanOrEqual(7)
+      })
+    }
+    it(`${name}: names the same colours as the night palette`, () => {
+      expect(Object.keys(theme).sort()).toEqual(Object.keys(palette.set).sort())
+    })
   }
 })
 
