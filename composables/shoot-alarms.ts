@@ -61,8 +61,8 @@ export function useShootAlarms(options: ShootAlarmsOptions = {}) {
 
   const ringing = computed<ShootTimer[]>(() => dueTimersAt(shoot.state?.timers ?? [], now.value))
   const selfAudible = computed(() => device.audibleWhileRolling(shoot.role))
-  // The store lists the screens on the shoot once the server says who is there.
-  const presence = computed(() => (shoot as unknown as { presence?: AlarmPresence }).presence ?? null)
+  // The screens on the shoot as the server lists them; none listed yet means not known.
+  const presence = computed<AlarmPresence | null>(() => (shoot.presence.screens.length ? shoot.presence : null))
   const elsewhere = computed(() => {
     if (options.audibleElsewhere !== undefined) return toValue(options.audibleElsewhere)
     return presence.value ? audibleElsewhere(presence.value, { role: shoot.role, audibleWhileRolling: selfAudible.value }) : false
@@ -72,7 +72,7 @@ export function useShootAlarms(options: ShootAlarmsOptions = {}) {
     rolling: !!shoot.state?.rolling,
     audibleWhileRolling: selfAudible.value,
     audibleElsewhere: elsewhere.value,
-    hostOnSet: presence.value?.screens.length ? presence.value.screens.some((s) => s.role === 'host') : true,
+    hostOnSet: presence.value ? presence.value.screens.some((s) => s.role === 'host') : true,
   }))
   const sounding = computed(() => ringing.value.length > 0 && output.value.sound)
   const flashing = computed(() => ringing.value.length > 0 && output.value.flash)
