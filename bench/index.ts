@@ -2,6 +2,7 @@
 import { databaseCommit } from './database.bench'
 import { planBenchmarks } from './plan.bench'
 import { shootBenchmarks } from './shoot.bench'
+import { screenBenchmarks } from './screens.bench'
 import type { Benchmark } from './types'
 
-export const benchmarks: Benchmark[] = [databaseCommit, ...planBenchmarks, ...shootBenchmarks]
+export const benchmarks: Benchmark[] = [databaseCommit, ...planBenchmarks, ...shootBenchmarks, ...screenBenchmarks]

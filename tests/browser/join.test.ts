@@ -33,7 +33,7 @@ describe.skipIf(!chromiumAvailable())('joining a shoot on a tablet', async () =>
     await tablet.goto(url('/join'), { waitUntil: 'networkidle' })
     await tablet.getByLabel('Join code').fill(code.toLowerCase())
     await tablet.getByRole('button', { name: 'Join the shoot' }).click()
-    await tablet.waitForURL(new RegExp(`/shoots/${shootId}$`))
+    await tablet.waitForURL(new RegExp(`/shoots/${shootId}/cue$`))
     await expect(tablet.getByTestId('shoot-role').textContent()).resolves.toMatch(/This device is on this shoot as\s+Camera/)
     expect(await axeViolations(tablet)).toEqual([])
     await screenshot(tablet, 'joined-tablet')

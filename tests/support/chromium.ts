@@ -13,6 +13,8 @@ export const CHROMIUM_ARGS = [
   '--disable-background-networking',
   '--disable-component-update',
   '--disable-sync',
+  // Alarms must sound without a tap first, as they do once a crew member has touched the screen.
+  '--autoplay-policy=no-user-gesture-required',
 ]
 
 export function chromiumLaunchOptions() {

@@ -1,0 +1,142 @@
+// The prompter in real Chromium on loopback: what the route ships (JS + CSS, gzipped), how soon its
+// text is painted with the CPU slowed 4× (Largest Contentful Paint), and how long a key press takes
+// to show the next step. Each figure has a baseline from the same run:
+// - size and LCP: the join page, the smallest page a tablet opens;
+// - key to paint: a bare page on the same server origin that changes one attribute on keydown.
+// Gzip at zlib's default level 6 (what most servers send); LCP from the browser's own
+// largest-contentful-paint entries (W3C Largest Contentful Paint); CPU slowed through the Chrome
+// DevTools Protocol (Emulation.setCPUThrottlingRate, rate 4).
+import { gzipSync } from 'node:zlib'
+import { chromium, type Browser, type Page } from 'playwright-core'
+import { DEMO_PASSWORD } from '../server/db/demo'
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../tests/support/chromium'
+import { signIn, startBuiltApp } from './server'
+import { percentile, type Benchmark } from './types'
+
+interface Setup { url: string; cookie: string; shootId: number; browser: Browser; stop: () => Promise<void> }
+let shared: Promise<Setup> | undefined
+
+async function setup(): Promise<Setup> {
+  const app = await startBuiltApp()
+  const cookie = await signIn(app.url, 'host@brackenford.test', DEMO_PASSWORD)
+  const producer = await signIn(app.url, 'producer@brackenford.test', DEMO_PASSWORD)
+  const res = await fetch(`${app.url}/api/episodes/1/shoots`, { method: 'POST', headers: { cookie: producer, 'content-type': 'application/json' }, body: JSON.stringify({ mode: 'rehearsal' }) })
+  const shootId = ((await res.json()) as { shoot: { id: number } }).shoot.id
+  await fetch(`${app.url}/api/shoots/${shootId}/commands`, { method: 'POST', headers: { cookie: producer, 'content-type': 'application/json' }, body: JSON.stringify({ type: 'shoot.start' }) })
+  const browser = await chromium.launch({ executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS })
+  return { ...app, cookie, shootId, browser, stop: async () => { await browser.close(); await app.stop() } }
+}
+const ready = () => (shared ??= setup())
+
+async function pageWithSession(s: Setup): Promise<Page> {
+  const context = await s.browser.newContext({ viewport: { width: 1024, height: 768 } })
+  const [name, value] = s.cookie.split('=') as [string, string]
+  await context.addCookies([{ name, value, url: s.url }])
+  return context.newPage()
+}
+
+/** JS and CSS bytes a page loads (its lazy chunks too, once the page is idle), gzipped one by one. */
+async function shippedBytes(s: Setup, path: string): Promise<number> {
+  const page = await pageWithSession(s)
+  const bodies: Promise<number>[] = []
+  page.on('response', (r) => {
+    const type = r.request().resourceType()
+    if (type === 'script' || type === 'stylesheet') bodies.push(r.body().then((b) => gzipSync(b).length).catch(() => 0))
+  })
+  await page.goto(`${s.url}${path}`, { waitUntil: 'networkidle' })
+  await page.waitForTimeout(500)
+  const total = (await Promise.all(bodies)).reduce((a, b) => a + b, 0)
+  await page.context().close()
+  return total / 1024
+}
+
+async function lcpMs(s: Setup, path: string): Promise<number> {
+  const page = await pageWithSession(s)
+  const cdp = await page.context().newCDPSession(page)
+  await cdp.send('Emulation.setCPUThrottlingRate', { rate: 4 })
+  await page.goto(`${s.url}${path}`, { waitUntil: 'load' })
+  const lcp = await page.evaluate(() => new Promise<number>((resolve) => {
+    let last = 0
+    new PerformanceObserver((list) => {
+      for (const e of list.getEntries()) last = e.startTime
+    }).observe({ type: 'largest-contentful-paint', buffered: true })
+    setTimeout(() => resolve(last), 1500)
+  }))
+  await page.context().close()
+  return lcp
+}
+
+/** ms from a keydown to the frame that shows what it changed: the change is seen by a
+ * MutationObserver, and the paint is the first task after the next animation frame. */
+const MEASURE = `
+  window.__keyPaint = (target, attr) => new Promise((resolve) => {
+    let t0 = 0
+    addEventListener('keydown', (e) => { t0 = e.timeStamp }, { capture: true, once: true })
+    const obs = new MutationObserver(() => {
+      obs.disconnect()
+      requestAnimationFrame(() => setTimeout(() => resolve(performance.now() - t0), 0))
+    })
+    obs.observe(document.querySelector(target), { attributes: true, attributeFilter: [attr], subtree: true })
+  })
+`
+
+async function keyToPaint(page: Page, target: string, attr: string, rounds: number, key: string): Promise<number[]> {
+  await page.addScriptTag({ content: MEASURE })
+  const out: number[] = []
+  for (let i = 0; i < rounds; i++) {
+    const measured = page.evaluate(([t, a]) => (window as unknown as { __keyPaint: (t: string, a: string) => Promise<number> }).__keyPaint(t!, a!), [target, attr])
+    await page.waitForTimeout(30)
+    await page.keyboard.press(key)
+    out.push(await measured)
+    await page.waitForTimeout(150)
+  }
+  return out
+}
+
+const ROUNDS = 10
+
+export const screenBenchmarks: Benchmark[] = [
+  {
+    name: 'prompter route JS+CSS (gzip)',
+    async run() {
+      const s = await ready()
+      const prompter = await shippedBytes(s, `/shoots/${s.shootId}/prompter`)
+      const join = await shippedBytes(s, '/join')
+      return { figure: prompter, unit: 'KB', baseline: join, bound: 150, note: 'baseline: the join page' }
+    },
+  },
+  {
+    name: 'prompter LCP, CPU 4× slower',
+    async run() {
+      const s = await ready()
+      const runs = [] as number[]
+      const base = [] as number[]
+      for (let i = 0; i < 3; i++) {
+        runs.push(await lcpMs(s, `/shoots/${s.shootId}/prompter`))
+        base.push(await lcpMs(s, '/join'))
+      }
+      return { figure: percentile(runs, 50) / 1000, unit: 's', baseline: percentile(base, 50) / 1000, bound: 1.0, note: 'median of 3; baseline: the join page' }
+    },
+  },
+  {
+    name: 'prompter key press to paint (p95)',
+    async run() {
+      const s = await ready()
+      const page = await pageWithSession(s)
+      await page.goto(`${s.url}/shoots/${s.shootId}/prompter`, { waitUntil: 'networkidle' })
+      await page.locator('[data-testid="connection"][data-online="true"]').waitFor()
+      // Alternate forward and back so the shoot stays on its first two steps.
+      const forward = await keyToPaint(page, '[data-testid="prompter"]', 'data-step', ROUNDS / 2, 'PageDown')
+      const back = await keyToPaint(page, '[data-testid="prompter"]', 'data-step', ROUNDS / 2, 'PageUp')
+      const bare = await s.browser.newPage()
+      await bare.goto(`${s.url}/robots.txt`)
+      await bare.setContent('<p id="x" data-step="0">step</p><script>addEventListener("keydown", () => { const x = document.getElementById("x"); x.dataset.step = String(Number(x.dataset.step) + 1) })</script>')
+      const baseline = await keyToPaint(bare, '#x', 'data-step', ROUNDS, 'PageDown')
+      await bare.close()
+      await page.context().close()
+      await s.stop()
+      shared = undefined
+      return { figure: percentile([...forward, ...back], 95), unit: 'ms', baseline: percentile(baseline, 95), bound: 50, note: `${ROUNDS} presses; baseline: a bare page changing one attribute` }
+    },
+  },
+]
