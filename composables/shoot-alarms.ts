@@ -26,7 +26,8 @@ let bank: Promise<AlarmBank> | null = null
 function loadBank(): Promise<AlarmBank> {
   // The server build drops this branch, so howler is in no server chunk.
   if (!import.meta.client) return Promise.reject(new Error('alarm sounds play in the browser only'))
-  bank ??= import('howler').then((mod) => {
+  // howler's core build: the spatial audio plugin of the full build is not used.
+  bank ??= import('howler/dist/howler.core.min.js').then((mod) => {
     const { Howl, Howler } = 'Howl' in mod ? mod : (mod as { default: typeof mod }).default
     // An alarm has to start at once: keep the audio context awake instead of suspending it after
     // 30 idle seconds, as howler does by default.

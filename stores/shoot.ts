@@ -11,7 +11,7 @@ import type { ShootEventMessage, ShootPresence, ShootSnapshot } from '~~/shared/
 import { clockFilterAdd, clockFilterBest, ntpSample, serverNow, type ClockSample } from '~~/shared/utils/clock'
 import { shootCommandAllowed } from '~~/shared/utils/shoot-commands'
 import { shootCursorMoved, shootCursorRef, shootStepRefAt } from '~~/shared/utils/shoot'
-import { applyShootCommand } from '~~/shared/utils/shoot-reducer'
+import { applyKnownShootCommand } from '~~/shared/utils/shoot-apply'
 
 export type ShootConnection = 'connecting' | 'online' | 'offline'
 
@@ -108,7 +108,7 @@ export const useShootStore = defineStore('shoot', () => {
     if (!pending.value.length) return base
     const actor = { role: (you.value?.role ?? 'viewer') as ShootRole, id: you.value?.actorId ?? 'me' }
     return pending.value.reduce<ShootState>((s, p) => {
-      const r = applyShootCommand(s, p.command, { nowServerMs: p.atServerMs, actor })
+      const r = applyKnownShootCommand(s, p.command, { nowServerMs: p.atServerMs, actor })
       return r.ok ? { ...r.state, seq: s.seq } : s
     }, base)
   })

@@ -6,6 +6,7 @@ import type { ShootState } from '../../shared/types/shoot'
 import type { ShootSnapshot } from '../../shared/types/socket-events'
 import { euAllergenLabel, type EuAllergenId } from '../../shared/utils/allergens'
 import { findStepTokens } from '../../shared/utils/step-text'
+import { CAUTIONS, isCautionId } from '../../shared/utils/cautions'
 
 type StepDetails = ShootSnapshot['steps']
 
@@ -43,10 +44,12 @@ export async function shootScript(state: ShootState, shoot: { studioId: number; 
       const used = keys.map((k) => ({ scaled: scaledByKey.get(k), view: viewByKey.get(k) })).filter((u) => u.scaled && u.view)
       const allergens = [...new Set(used.flatMap((u) => (u.view!.allergens?.eu ?? []) as EuAllergenId[]))].map(euAllergenLabel)
       const plan = times.get(String(s.id))
+      const cautions = allergens.length && !s.cautions.includes('allergen') ? [...s.cautions, 'allergen'] : s.cautions
       steps[String(s.id)] = {
         recipeId, recipeTitle: view.title, position: s.position, text: s.text, handsOn: s.handsOn,
         durationMin: s.durationMin, durationMax: s.durationMax, cameraShot: s.cameraShot, cameraNote: s.cameraNote,
-        cautions: allergens.length && !s.cautions.includes('allergen') ? [...s.cautions, 'allergen'] : s.cautions,
+        cautions,
+        cautionNotes: cautions.map((c) => (isCautionId(c) ? { id: c, label: CAUTIONS[c].label, text: CAUTIONS[c].text } : { id: c, label: c, text: c })),
         script: s.script,
         segments: rendered.get(s.id)?.segments ?? [{ text: s.text }],
         ingredients: used.map((u) => ({ key: u.scaled!.key, item: u.scaled!.item, amount: u.scaled!.text })),

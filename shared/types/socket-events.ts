@@ -46,6 +46,8 @@ export interface ShootStepDetails {
   cameraShot: string | null
   cameraNote: string | null
   cautions: string[]
+  /** The cautions' texts (shared/utils/cautions.ts), so a screen shows them without that table. */
+  cautionNotes: Array<{ id: string; label: string; text: string }>
   script: string[]
   /** Where the cook plan puts the step, in ms on the shoot clock; null when unplanned. */
   plannedStartMs: number | null

@@ -1,9 +1,6 @@
-// Who may send which shoot command, and reading a command from the wire. The server enforces
+// Who may send which shoot command (reading one from the wire is shoot-schema.ts). The server enforces
 // both; the screens use the same table to show only the controls a role may use.
-import {
-  SHOOT_COMMAND_TYPES, shootCommandSchema,
-  type ShootCommand, type ShootCommandError, type ShootCommandType, type ShootRole,
-} from '../types/shoot'
+import { SHOOT_COMMAND_TYPES, type ShootCommandType, type ShootRole } from '../types/shoot'
 
 const DRIVE: ShootRole[] = ['producer', 'host']
 const ON_SET: ShootRole[] = ['producer', 'host', 'camera']
@@ -73,21 +70,4 @@ export function shootCommandForbiddenMessage(role: ShootRole | string, commandTy
   const list = allowed.length > 1 ? `${allowed.slice(0, -1).join(', ')} or ${allowed.at(-1)}` : allowed[0]
   const text = `${who} may not ${SHOOT_COMMAND_PHRASES[commandType]}; ${list} may`
   return text.charAt(0).toUpperCase() + text.slice(1) + '.'
-}
-
-export type ShootCommandParse = { ok: true; command: ShootCommand } | { ok: false; error: ShootCommandError }
-
-/** Reads a command from untrusted input; the error names the field at fault and what to send. */
-export function parseShootCommand(input: unknown): ShootCommandParse {
-  const parsed = shootCommandSchema.safeParse(input)
-  if (parsed.success) return { ok: true, command: parsed.data }
-  const issue = parsed.error.issues[0]!
-  const field = issue.path.map(String).join('.') || 'command'
-  if (issue.code === 'invalid_union' && field === 'type') {
-    const type = (input as { type?: unknown } | null)?.type
-    const said = type === undefined ? 'a command needs a type' : `"${String(type)}" is not a shoot command`
-    return { ok: false, error: { code: 'invalid', field, message: `type: ${said}; use one of ${SHOOT_COMMAND_TYPES.join(', ')}` } }
-  }
-  const message = issue.message.startsWith(field) ? issue.message : `${field}: ${issue.message}`
-  return { ok: false, error: { code: 'invalid', field, message } }
 }

@@ -2,8 +2,9 @@
 // the server validates them with (shared/types/shoot.ts, shared/utils/shoot-commands.ts). The
 // limits are Hobline's own choices, so each check tests the boundary on both sides.
 import { describe, expect, it } from 'vitest'
-import { SHOOT_COMMAND_TYPES, shootCommandSchema, type ShootCommandType, type ShootRole } from '../../shared/types/shoot'
-import { SHOOT_COMMAND_ROLES, parseShootCommand, shootCommandAllowed, shootCommandForbiddenMessage } from '../../shared/utils/shoot-commands'
+import { SHOOT_COMMAND_TYPES, type ShootCommandType, type ShootRole } from '../../shared/types/shoot'
+import { SHOOT_COMMAND_ROLES, shootCommandAllowed, shootCommandForbiddenMessage } from '../../shared/utils/shoot-commands'
+import { parseShootCommand, shootCommandSchema } from '../../shared/utils/shoot-schema'
 
 describe('who may send which command', () => {
   // DESIGN.md, "Who uses it": the producer may do everything; the host drives a shoot (advance,

@@ -1,0 +1,413 @@
+// The shoot reducer's core: (state, well-formed command) → new state | error. Pure: the time and
+// new ids come in through the context, the input state is never changed. The server reaches it
+// through applyShootCommand (shoot-reducer.ts), which first checks the command's shape with zod;
+// screens apply their own commands with it directly for optimistic feedback.
+//
+// Order of checks: the sender's role, the shoot having ended, then the command against the state.
+// Before a command applies, timers whose deadline has passed are marked due, so a command never
+// acts on a timer that has in fact already rung.
+import {
+  SHOOT_MARKER_LIMIT, SHOOT_TIMER_LIMIT, SHOOT_TIMER_MAX_MS, SHOOT_TIMER_SLOTS,
+  type ShootActor, type ShootApplyResult, type ShootCommand, type ShootCommandContext, type ShootCommandError,
+  type ShootCommandOf, type ShootCursor, type ShootErrorCode, type ShootEvent, type ShootState, type ShootTimer,
+} from '../types/shoot'
+import { shootCommandAllowed, shootCommandForbiddenMessage } from './shoot-commands'
+import { shootClockAt, shootClockAtSpeed, shootClockStarted, shootClockStopped } from './shoot-clock'
+import {
+  isShootTimerLive, markDueTimers, shootTimerDueAt, shootTimerPausedAt, shootTimerRunningFrom, timerRemainingMs,
+} from './shoot-timers'
+import { shootCursorMoved, shootCursorRef, shootSegmentPositions, shootStepRefAt } from './shoot'
+
+type Failure = { ok: false; error: ShootCommandError }
+type Change = { state: ShootState; events: ShootEvent[] }
+type Outcome = Change | Failure
+
+const fail = (code: ShootErrorCode, message: string, field?: string): Failure =>
+  ({ ok: false, error: field ? { code, message, field } : { code, message } })
+const isFailure = (o: Outcome): o is Failure => 'ok' in o
+
+/** Applies one well-formed command (one this code built, or one shoot-schema.ts has read). */
+export function applyKnownShootCommand(state: ShootState, command: ShootCommand, ctx: ShootCommandContext): ShootApplyResult {
+  const now = ctx?.nowServerMs
+  if (typeof now !== 'number' || !Number.isFinite(now)) return fail('invalid', 'nowServerMs: the server time must be a finite number of ms', 'nowServerMs')
+  const role = ctx.actor?.role
+  if (!shootCommandAllowed(role, command.type)) return fail('forbidden', shootCommandForbiddenMessage(role, command.type))
+  if (state.status === 'ended') return fail('shoot-ended', 'This shoot has ended, so nothing in it can change; start a new shoot to go again.')
+
+  const marked = markDueTimers(state, now)
+  const base: ShootState = { ...marked.state, seq: state.seq }
+  const outcome = dispatch(base, command, ctx, now)
+  if (isFailure(outcome)) return outcome
+  return {
+    ok: true,
+    state: { ...outcome.state, seq: state.seq + 1 },
+    events: [...marked.due.map(dueEvent), ...outcome.events],
+  }
+}
+
+function dispatch(s: ShootState, cmd: ShootCommand, ctx: ShootCommandContext, now: number): Outcome {
+  switch (cmd.type) {
+    case 'shoot.start': return startShoot(s, now)
+    case 'shoot.pause': return pauseShoot(s, now)
+    case 'shoot.resume': return resumeShoot(s, now)
+    case 'shoot.end': return endShoot(s, cmd, now)
+    case 'step.next': return stepBy(s, 1, now)
+    case 'step.previous': return stepBy(s, -1, now)
+    case 'step.jump': return jumpTo(s, cmd, now)
+    case 'timer.start': return startTimer(s, cmd, ctx, now)
+    case 'timer.pause': return pauseTimer(s, cmd, now)
+    case 'timer.resume': return resumeTimer(s, cmd, now)
+    case 'timer.addTime': return addTime(s, cmd, now)
+    case 'timer.cancel': return cancelTimer(s, cmd, now)
+    case 'timer.acknowledge': return acknowledgeTimer(s, cmd, ctx, now)
+    case 'rolling.set': return setRolling(s, cmd, now)
+    case 'clock.speed': return setSpeed(s, cmd, now)
+    case 'marker.add': return addMarker(s, cmd, ctx, now)
+    default: {
+      const unknown: never = cmd
+      return fail('invalid', `type: "${(unknown as { type: string }).type}" is not a shoot command`, 'type')
+    }
+  }
+}
+
+// ---- the shoot as a whole --------------------------------------------------------------------
+
+function statusEvent(s: ShootState, now: number): ShootEvent {
+  return { type: 'shoot.status', status: s.status, atServerMs: now, shootMs: shootClockAt(s.clock, now) }
+}
+
+/** Rehearsal timers follow the shoot clock: held while it stops, released when it runs. */
+function holdRunningTimers(s: ShootState, now: number): { timers: ShootTimer[]; events: ShootEvent[] } {
+  const events: ShootEvent[] = []
+  const timers = s.timers.map((t) => {
+    if (t.state !== 'running') return t
+    events.push({ type: 'timer.changed', timerId: t.id, state: 'paused' })
+    return shootTimerPausedAt(t, now, true)
+  })
+  return { timers, events }
+}
+function releaseHeldTimers(s: ShootState, now: number, speed: number): { timers: ShootTimer[]; events: ShootEvent[] } {
+  const events: ShootEvent[] = []
+  const timers = s.timers.map((t) => {
+    if (t.state !== 'paused' || !t.heldByShoot) return t
+    events.push({ type: 'timer.changed', timerId: t.id, state: 'running' })
+    return shootTimerRunningFrom(t, now, t.remainingMs ?? 0, speed)
+  })
+  return { timers, events }
+}
+
+function startShoot(s: ShootState, now: number): Outcome {
+  if (s.status !== 'ready') {
+    return fail('already-started', s.status === 'paused' ? 'The shoot has started and is paused; resume it instead.' : 'The shoot is already running.')
+  }
+  const clock = { ...s.clock, anchorServerMs: now, anchorShootMs: 0, running: true }
+  const released = s.mode === 'rehearsal' ? releaseHeldTimers(s, now, clock.speed) : { timers: s.timers, events: [] }
+  const stepRef = shootCursorRef(s)
+  const next: ShootState = {
+    ...s,
+    status: 'running',
+    clock,
+    timers: released.timers,
+    startedAtServerMs: now,
+    rollingSinceShootMs: s.rolling ? 0 : null,
+    visits: [...s.visits, { stepRef, enteredServerMs: now, enteredShootMs: 0 }],
+  }
+  return {
+    state: next,
+    events: [statusEvent(next, now), { type: 'step.entered', stepRef, atServerMs: now, shootMs: 0 }, ...released.events],
+  }
+}
+
+function pauseShoot(s: ShootState, now: number): Outcome {
+  if (s.status === 'ready') return fail('not-started', 'The shoot has not started yet; start it first.')
+  if (s.status === 'paused') return fail('not-running', 'The shoot is already paused.')
+  const held = s.mode === 'rehearsal' ? holdRunningTimers(s, now) : { timers: s.timers, events: [] }
+  const next: ShootState = { ...s, status: 'paused', clock: shootClockStopped(s.clock, now), timers: held.timers }
+  return { state: next, events: [statusEvent(next, now), ...held.events] }
+}
+
+function resumeShoot(s: ShootState, now: number): Outcome {
+  if (s.status === 'ready') return fail('not-started', 'The shoot has not started yet; start it instead.')
+  if (s.status === 'running') return fail('not-paused', 'The shoot is running, not paused; there is nothing to resume.')
+  const released = s.mode === 'rehearsal' ? releaseHeldTimers(s, now, s.clock.speed) : { timers: s.timers, events: [] }
+  const next: ShootState = { ...s, status: 'running', clock: shootClockStarted(s.clock, now), timers: released.timers }
+  return { state: next, events: [statusEvent(next, now), ...released.events] }
+}
+
+function endShoot(s: ShootState, cmd: ShootCommandOf<'shoot.end'>, now: number): Outcome {
+  const live = s.timers.filter(isShootTimerLive)
+  if (live.length > 0 && !cmd.cancelTimers) {
+    const list = live.map((t) => `"${t.label}" (${t.state === 'due' ? 'ringing' : `${clockText(timerRemainingMs(t, now))} left`})`).join(', ')
+    return fail('timers-active', `${live.length === 1 ? '1 timer still needs' : `${live.length} timers still need`} attention: ${list}. `
+      + 'Acknowledge or cancel them first, or end with cancelTimers to cancel them all.')
+  }
+  const events: ShootEvent[] = []
+  const timers = s.timers.map((t) => {
+    if (!isShootTimerLive(t)) return t
+    events.push({ type: 'timer.changed', timerId: t.id, state: 'cancelled' })
+    return cancelled(t, now)
+  })
+  if (s.rolling) events.push({ type: 'rolling.changed', rolling: false, atServerMs: now })
+  const next: ShootState = {
+    ...s,
+    status: 'ended',
+    clock: shootClockStopped(s.clock, now),
+    timers,
+    rolling: false,
+    rollingSinceServerMs: null,
+    rollingSinceShootMs: null,
+    endedAtServerMs: now,
+  }
+  return { state: next, events: [...events, statusEvent(next, now)] }
+}
+
+// ---- the cursor --------------------------------------------------------------------------------
+
+function moveCursor(s: ShootState, cursor: ShootCursor, now: number): Change {
+  const moved: ShootState = { ...s, cursor: { segment: cursor.segment, step: cursor.step } }
+  if (s.status === 'ready') return { state: moved, events: [] } // the shoot will start here
+  const stepRef = shootCursorRef(moved)
+  const shootMs = shootClockAt(s.clock, now)
+  return {
+    state: { ...moved, visits: [...s.visits, { stepRef, enteredServerMs: now, enteredShootMs: shootMs }] },
+    events: [{ type: 'step.entered', stepRef, atServerMs: now, shootMs }],
+  }
+}
+
+function stepBy(s: ShootState, by: 1 | -1, now: number): Outcome {
+  const target = shootCursorMoved(s.runOrder, s.cursor, by)
+  if (!target) {
+    return by === 1
+      ? fail('at-last-step', 'This is the last step of the run order; there is no next step.')
+      : fail('at-first-step', 'This is the first step of the run order; there is no previous step.')
+  }
+  return moveCursor(s, target, now)
+}
+
+function jumpTo(s: ShootState, cmd: ShootCommandOf<'step.jump'>, now: number): Outcome {
+  const ref = shootStepRefAt(s.runOrder, cmd)
+  if (!ref) return fail('no-such-step', noSuchStep(s, cmd), s.runOrder[cmd.segment] ? 'step' : 'segment')
+  if (ref.segment === s.cursor.segment && ref.step === s.cursor.step) return fail('no-change', 'The cursor is already at that step.')
+  return moveCursor(s, ref, now)
+}
+
+function noSuchStep(s: ShootState, at: ShootCursor): string {
+  const seg = s.runOrder[at.segment]
+  if (!seg) return `segment: the run order has segments 0–${s.runOrder.length - 1}, not ${at.segment}.`
+  return `step: segment ${at.segment} has steps 0–${shootSegmentPositions(seg) - 1}, not ${at.step}.`
+}
+
+// ---- timers ------------------------------------------------------------------------------------
+
+function actorOf(ctx: ShootCommandContext): ShootActor {
+  const { role, id, name } = ctx.actor
+  return name === undefined ? { role, id } : { role, id, name }
+}
+
+function newId(given: string | undefined, ctx: ShootCommandContext, taken: (id: string) => boolean, what: string, field: string): string | Failure {
+  const id = given ?? ctx.newId?.()
+  if (typeof id !== 'string' || id === '') return fail('no-id', `${field}: a new ${what} needs an id; send ${field} or give the reducer a newId maker.`, field)
+  if (taken(id)) return fail('duplicate-id', `${field}: this shoot already has a ${what} with id "${id}".`, field)
+  return id
+}
+
+function lowestFreeSlot(live: ShootTimer[]): number | null {
+  for (let slot = 0; slot < SHOOT_TIMER_SLOTS; slot++) if (!live.some((t) => t.slot === slot)) return slot
+  return null
+}
+
+function startTimer(s: ShootState, cmd: ShootCommandOf<'timer.start'>, ctx: ShootCommandContext, now: number): Outcome {
+  if (s.timers.length >= SHOOT_TIMER_LIMIT) return fail('too-many-timers', `This shoot has had ${SHOOT_TIMER_LIMIT} timers, the most one shoot keeps.`)
+  const live = s.timers.filter(isShootTimerLive)
+  if (live.length >= SHOOT_TIMER_SLOTS) {
+    return fail('too-many-timers', `${SHOOT_TIMER_SLOTS} timers are live, the most a shoot runs at once; acknowledge or cancel one first.`)
+  }
+  let slot: number
+  if (cmd.slot !== undefined) {
+    const holder = live.find((t) => t.slot === cmd.slot)
+    if (holder) return fail('slot-taken', `slot: slot ${cmd.slot} is taken by "${holder.label}"; pick a free slot or leave slot out.`, 'slot')
+    slot = cmd.slot
+  } else {
+    slot = lowestFreeSlot(live)!
+  }
+  const id = newId(cmd.timerId, ctx, (x) => s.timers.some((t) => t.id === x), 'timer', 'timerId')
+  if (typeof id !== 'string') return id
+  const stepRef = cmd.stepRef ? shootStepRefAt(s.runOrder, cmd.stepRef) : shootCursorRef(s)
+  if (!stepRef) return fail('no-such-step', `stepRef.${noSuchStep(s, cmd.stepRef!)}`, 'stepRef')
+
+  const base: ShootTimer = {
+    id, slot, label: cmd.label, sound: cmd.sound ?? null, stepRef, durationMs: cmd.durationMs,
+    deadlineServerMs: null, remainingMs: null, speed: s.clock.speed, state: 'running', heldByShoot: false,
+    startedAtServerMs: now, startedBy: actorOf(ctx), dueAtServerMs: null, acknowledgedBy: null,
+    acknowledgedAtServerMs: null, cancelledAtServerMs: null,
+  }
+  const held = s.mode === 'rehearsal' && !s.clock.running
+  const timer = held
+    ? { ...base, state: 'paused' as const, remainingMs: cmd.durationMs, heldByShoot: true }
+    : shootTimerRunningFrom(base, now, cmd.durationMs, s.clock.speed)
+  return {
+    state: { ...s, timers: [...s.timers, timer] },
+    events: [{ type: 'timer.changed', timerId: id, state: timer.state }],
+  }
+}
+
+function findTimer(s: ShootState, timerId: string): ShootTimer | Failure {
+  return s.timers.find((t) => t.id === timerId) ?? fail('unknown-timer', `timerId: this shoot has no timer "${timerId}".`, 'timerId')
+}
+
+function closedFailure(t: ShootTimer): Failure | null {
+  if (t.state === 'cancelled') return fail('timer-closed', `"${t.label}" was cancelled; start a new timer instead.`)
+  if (t.state === 'acknowledged') {
+    const by = t.acknowledgedBy?.name ?? t.acknowledgedBy?.role ?? 'someone'
+    return fail('timer-closed', `"${t.label}" has rung and was acknowledged by ${by}; start a new timer or add time to run it again.`)
+  }
+  return null
+}
+
+function replaceTimer(s: ShootState, timer: ShootTimer, extra: ShootEvent[] = []): Change {
+  return {
+    state: { ...s, timers: s.timers.map((t) => (t.id === timer.id ? timer : t)) },
+    events: [{ type: 'timer.changed', timerId: timer.id, state: timer.state }, ...extra],
+  }
+}
+
+function rehearsalStopped(s: ShootState): boolean {
+  return s.mode === 'rehearsal' && !s.clock.running
+}
+
+function pauseTimer(s: ShootState, cmd: ShootCommandOf<'timer.pause'>, now: number): Outcome {
+  const t = findTimer(s, cmd.timerId)
+  if ('ok' in t) return t
+  const closed = closedFailure(t)
+  if (closed) return closed
+  if (t.state === 'due') return fail('timer-due', `"${t.label}" is ringing; acknowledge it, or add time to run it again.`)
+  if (t.state === 'paused') {
+    return fail('timer-not-running', t.heldByShoot
+      ? `"${t.label}" is held while the rehearsal is stopped; it runs again when the rehearsal does.`
+      : `"${t.label}" is already paused.`)
+  }
+  return replaceTimer(s, shootTimerPausedAt(t, now))
+}
+
+function resumeTimer(s: ShootState, cmd: ShootCommandOf<'timer.resume'>, now: number): Outcome {
+  const t = findTimer(s, cmd.timerId)
+  if ('ok' in t) return t
+  const closed = closedFailure(t)
+  if (closed) return closed
+  if (t.state === 'due') return fail('timer-due', `"${t.label}" is ringing; acknowledge it, or add time to run it again.`)
+  if (t.state === 'running') return fail('timer-not-paused', `"${t.label}" is running, not paused.`)
+  if (rehearsalStopped(s)) {
+    return fail('rehearsal-stopped', `The rehearsal clock is stopped and its timers with it; ${s.status === 'ready' ? 'start' : 'resume'} the rehearsal first.`)
+  }
+  return replaceTimer(s, shootTimerRunningFrom(t, now, t.remainingMs ?? 0, s.clock.speed))
+}
+
+function addTime(s: ShootState, cmd: ShootCommandOf<'timer.addTime'>, now: number): Outcome {
+  const t = findTimer(s, cmd.timerId)
+  if ('ok' in t) return t
+  if (t.state === 'cancelled') return closedFailure(t)!
+  const tooLong = () => fail('invalid', `deltaMs: that would leave more than 24 hours on "${t.label}".`, 'deltaMs')
+
+  if (t.state === 'due' || t.state === 'acknowledged') {
+    // A timer that has rung runs again for the time added ("two more minutes").
+    if (cmd.deltaMs < 0) return fail('timer-due', `"${t.label}" has already rung; there is no time left to take off. Add time to run it again.`)
+    let slot = t.slot
+    if (t.state === 'acknowledged') {
+      const live = s.timers.filter(isShootTimerLive)
+      if (live.some((o) => o.slot === slot)) {
+        const free = lowestFreeSlot(live)
+        if (free === null) return fail('too-many-timers', `${SHOOT_TIMER_SLOTS} timers are live, the most a shoot runs at once; acknowledge or cancel one first.`)
+        slot = free
+      }
+    }
+    const again: ShootTimer = { ...t, slot, durationMs: t.durationMs + cmd.deltaMs }
+    const timer = rehearsalStopped(s)
+      ? { ...again, state: 'paused' as const, deadlineServerMs: null, remainingMs: cmd.deltaMs, heldByShoot: true, dueAtServerMs: null, acknowledgedBy: null, acknowledgedAtServerMs: null }
+      : shootTimerRunningFrom(again, now, cmd.deltaMs, s.clock.speed)
+    return replaceTimer(s, timer)
+  }
+
+  const left = timerRemainingMs(t, now)
+  const after = left + cmd.deltaMs
+  if (after > SHOOT_TIMER_MAX_MS) return tooLong()
+  if (after <= 0) {
+    // Taking off all the time that is left: the timer is due now.
+    const due = shootTimerDueAt({ ...t, durationMs: Math.max(0, Math.round(t.durationMs - left)) }, now)
+    return replaceTimer(s, due, [dueEvent(due)])
+  }
+  const changed: ShootTimer = { ...t, durationMs: t.durationMs + cmd.deltaMs }
+  if (t.state === 'paused') return replaceTimer(s, { ...changed, remainingMs: after })
+  return replaceTimer(s, shootTimerRunningFrom(changed, now, after, t.speed))
+}
+
+function cancelled(t: ShootTimer, now: number): ShootTimer {
+  return {
+    ...t, state: 'cancelled', remainingMs: Math.round(timerRemainingMs(t, now)), deadlineServerMs: null,
+    heldByShoot: false, cancelledAtServerMs: now,
+  }
+}
+
+function cancelTimer(s: ShootState, cmd: ShootCommandOf<'timer.cancel'>, now: number): Outcome {
+  const t = findTimer(s, cmd.timerId)
+  if ('ok' in t) return t
+  const closed = closedFailure(t)
+  if (closed) return closed
+  return replaceTimer(s, cancelled(t, now))
+}
+
+function acknowledgeTimer(s: ShootState, cmd: ShootCommandOf<'timer.acknowledge'>, ctx: ShootCommandContext, now: number): Outcome {
+  const t = findTimer(s, cmd.timerId)
+  if ('ok' in t) return t
+  const closed = closedFailure(t)
+  if (closed) return closed
+  if (t.state !== 'due') {
+    return fail('timer-not-due', `"${t.label}" has ${clockText(timerRemainingMs(t, now))} left and is not ringing; cancel it to stop it early.`)
+  }
+  return replaceTimer(s, { ...t, state: 'acknowledged', acknowledgedBy: actorOf(ctx), acknowledgedAtServerMs: now })
+}
+
+function dueEvent(t: ShootTimer): ShootEvent {
+  return { type: 'timer.due', timerId: t.id, label: t.label, slot: t.slot, sound: t.sound, dueAtServerMs: t.dueAtServerMs ?? t.deadlineServerMs ?? 0 }
+}
+
+// ---- rolling, speed, markers -----------------------------------------------------------------------
+
+function setRolling(s: ShootState, cmd: ShootCommandOf<'rolling.set'>, now: number): Outcome {
+  if (cmd.rolling === s.rolling) return fail('no-change', s.rolling ? 'The camera is already rolling.' : 'The camera is not rolling.')
+  const next: ShootState = cmd.rolling
+    ? { ...s, rolling: true, rollingSinceServerMs: now, rollingSinceShootMs: shootClockAt(s.clock, now) }
+    : { ...s, rolling: false, rollingSinceServerMs: null, rollingSinceShootMs: null }
+  return { state: next, events: [{ type: 'rolling.changed', rolling: cmd.rolling, atServerMs: now }] }
+}
+
+function setSpeed(s: ShootState, cmd: ShootCommandOf<'clock.speed'>, now: number): Outcome {
+  if (s.mode === 'take') return fail('take-mode', 'A take runs in real time (1×); clock speed is for rehearsals.')
+  if (cmd.speed === s.clock.speed) return fail('no-change', `The rehearsal already runs at ${cmd.speed}×.`)
+  const timers = s.timers.map((t) =>
+    t.state === 'running' ? shootTimerRunningFrom(t, now, timerRemainingMs(t, now), cmd.speed) : t)
+  return {
+    state: { ...s, clock: shootClockAtSpeed(s.clock, now, cmd.speed), timers },
+    events: [{ type: 'clock.changed', speed: cmd.speed, atServerMs: now }],
+  }
+}
+
+function addMarker(s: ShootState, cmd: ShootCommandOf<'marker.add'>, ctx: ShootCommandContext, now: number): Outcome {
+  if (s.status === 'ready') return fail('not-started', 'Start the shoot before adding markers: a marker is stamped with the shoot clock.')
+  if (s.markers.length >= SHOOT_MARKER_LIMIT) return fail('too-many-markers', `This shoot has ${SHOOT_MARKER_LIMIT} markers, the most one shoot keeps.`)
+  const id = newId(cmd.markerId, ctx, (x) => s.markers.some((m) => m.id === x), 'marker', 'markerId')
+  if (typeof id !== 'string') return id
+  const marker = {
+    id, kind: cmd.kind, text: cmd.text ? cmd.text : null, shootMs: shootClockAt(s.clock, now), serverMs: now,
+    stepRef: shootCursorRef(s), by: actorOf(ctx), rollingSinceServerMs: s.rollingSinceServerMs,
+  }
+  return { state: { ...s, markers: [...s.markers, marker] }, events: [{ type: 'marker.added', markerId: id, kind: cmd.kind }] }
+}
+
+/** m:ss (or h:mm:ss) of kitchen time, for messages; rounds up so "0:00 left" never shows early. */
+function clockText(ms: number): string {
+  const total = Math.ceil(Math.max(0, ms) / 1000)
+  const h = Math.floor(total / 3600)
+  const m = Math.floor((total % 3600) / 60)
+  const sec = String(total % 60).padStart(2, '0')
+  return h > 0 ? `${h}:${String(m).padStart(2, '0')}:${sec}` : `${m}:${sec}`
+}
