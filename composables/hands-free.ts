@@ -3,6 +3,7 @@
 // Voice commands (useVoiceCommands) call `run` too, so both paths behave alike.
 import type { ShootCommand, ShootCommandType } from '~~/shared/types/shoot'
 import { actionForKey, keyName, stepTimer, type KeyAction } from '~~/shared/utils/key-map'
+import { dueTimersAt } from '~~/shared/utils/alarm-policy'
 
 export type HandsFreeHandlers = Partial<Record<KeyAction, () => void>>
 
@@ -96,7 +97,9 @@ export function defaultShootHandlers() {
     acknowledge: {
       type: 'timer.acknowledge',
       run: () => {
-        const due = (shoot.state?.timers ?? []).filter((t) => t.state === 'due')
+        // Due on this screen's clock, as the alarm is: a timer past its deadline that the server's
+        // tick has not marked yet is acknowledged too (the reducer marks it due first).
+        const due = dueTimersAt(shoot.state?.timers ?? [], shoot.serverNowMs())
         if (!due.length) {
           message.value = 'No alarm is ringing, so there is nothing to acknowledge.'
           return
