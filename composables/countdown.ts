@@ -22,9 +22,10 @@ export function countdownText(ms: number): string {
  * arrives (or while this screen is offline); a due timer stays due until someone acknowledges it.
  */
 export function useTimerCountdown(timer: MaybeRefOrGetter<ShootTimer | null | undefined>, now: Readonly<Ref<number>> = useServerNow()) {
+  // Never more than the time set: a clock estimate a few ms early must not show 20:01 on a 20:00 timer.
   const remainingMs = computed(() => {
     const t = toValue(timer)
-    return t ? timerRemainingMs(t, now.value) : 0
+    return t ? Math.min(t.durationMs, timerRemainingMs(t, now.value)) : 0
   })
   const due = computed(() => {
     const t = toValue(timer)

@@ -23,14 +23,14 @@ describe.skipIf(!chromiumAvailable())('photos on the recipe page', async () => {
     const hero = page.getByRole('img', { name: 'Smoky butter bean and tomato stew' })
     await hero.waitFor()
     // The thumbnail really loaded (480 px WebP made at seeding).
-    expect(await hero.evaluate((img: HTMLImageElement) => img.naturalWidth)).toBe(480)
+    expect(await hero.evaluate(async (img: HTMLImageElement) => { await img.decode(); return img.naturalWidth })).toBe(480)
 
     const png = await sharp({ create: { width: 640, height: 400, channels: 3, background: '#c2572a' } }).png().toBuffer()
     const stepOne = page.getByTestId('step-1')
     await stepOne.locator('input[type=file]').setInputFiles({ name: 'onions.png', mimeType: 'image/png', buffer: png })
     const stepPhoto = stepOne.getByRole('img', { name: 'step 1' })
     await stepPhoto.waitFor()
-    expect(await stepPhoto.evaluate((img: HTMLImageElement) => img.naturalWidth)).toBe(480)
+    expect(await stepPhoto.evaluate(async (img: HTMLImageElement) => { await img.decode(); return img.naturalWidth })).toBe(480)
     expect(await axeViolations(page)).toEqual([])
     await screenshot(page, 'recipe-photos')
 
