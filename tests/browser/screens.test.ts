@@ -154,6 +154,8 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     await host.page.getByTestId('alarm-flash').waitFor({ timeout: 10_000 })
     await expect.poll(() => howlerPlaying(desk.page), { timeout: 5000 }).toContainEqual(expect.stringContaining('/sounds/alarm-slot-2.wav'))
     await expect.poll(() => alarmMode(desk.page)).toBe('sound+flash')
+    // At this device's volume (the default, 80 %).
+    await expect(desk.page.evaluate(() => (window as unknown as { Howler: { volume(): number } }).Howler.volume())).resolves.toBeCloseTo(0.8, 5)
     await expect.poll(() => alarmMode(host.page)).toBe('flash')
     await expect.poll(() => alarmMode(camera.page)).toBe('flash')
     await expect(howlerPlaying(host.page)).resolves.toEqual([])
@@ -213,6 +215,8 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
         await screenshot(s.page, `screens-${name}-${size}`)
       }
     }
+    await host.page.setViewportSize({ width: 768, height: 1024 })
+    await screenshot(host.page, 'screens-prompter-tablet-portrait')
     await host.page.evaluate(() => {
       const key = 'hobline:device-settings'
       localStorage.setItem(key, JSON.stringify({ ...JSON.parse(localStorage.getItem(key) ?? '{}'), mirror: true }))
@@ -238,6 +242,19 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     await expect(howlerPlaying(camera.page)).resolves.toEqual([])
     await host.page.keyboard.press('a')
     await expect.poll(() => howlerPlaying(host.page)).toEqual([])
+
+    // Voice commands show only where the browser recognises speech: here it does; without it, not.
+    await camera.page.getByTestId('voice').waitFor()
+    const deaf = await createPage(undefined, { viewport: PHONE })
+    await deaf.context().addCookies(await camera.page.context().cookies())
+    await deaf.addInitScript(() => {
+      delete (window as unknown as Record<string, unknown>).SpeechRecognition
+      delete (window as unknown as Record<string, unknown>).webkitSpeechRecognition
+    })
+    await deaf.goto(url(`/shoots/${shootId}/cue`), { waitUntil: 'networkidle' })
+    await ready(deaf)
+    await expect(deaf.getByTestId('voice').count()).resolves.toBe(0)
+    await deaf.close()
 
     for (const s of [host, camera]) expect(s.errors).toEqual([])
     for (const s of [host, camera]) await s.page.close()
