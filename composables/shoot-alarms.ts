@@ -79,6 +79,8 @@ export function useShootAlarms(options: ShootAlarmsOptions = {}) {
   const flashing = computed(() => ringing.value.length > 0 && output.value.flash)
   /** Whether the browser lets this screen make sound yet (most need one tap first: unlock). */
   const audioReady = ref(false)
+  /** The sounds are loaded but the browser keeps the page silent (no tap yet). */
+  const audioBlocked = ref(false)
 
   let loaded: AlarmBank | null = null
   let disposed = false
@@ -125,6 +127,7 @@ export function useShootAlarms(options: ShootAlarmsOptions = {}) {
   function onAudioState() {
     if (!loaded) return
     audioReady.value = canPlay(loaded)
+    audioBlocked.value = !audioReady.value
     check(shoot.serverNowMs())
   }
 
@@ -183,5 +186,5 @@ export function useShootAlarms(options: ShootAlarmsOptions = {}) {
     if (import.meta.client) document.documentElement.dataset.alarm = ''
   })
 
-  return { ringing, flashing, sounding, output, audioReady: readonly(audioReady), acknowledgeAll, unlock, playTick }
+  return { ringing, flashing, sounding, output, audioReady: readonly(audioReady), audioBlocked: readonly(audioBlocked), acknowledgeAll, unlock, playTick }
 }

@@ -5,11 +5,11 @@
 // and the host's tablet only flashes (quiet on set); acknowledging on the tablet silences all; a
 // reload and a dropped network lose nothing.
 import { createPage, url } from '@nuxt/test-utils/e2e'
-import type { Page } from 'playwright-core'
+import { chromium, type Page } from 'playwright-core'
 import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
-import { chromiumAvailable } from '../support/chromium'
+import { CHROMIUM_ARGS, CHROMIUM_PATH, chromiumAvailable } from '../support/chromium'
 import { screenshot } from '../support/page'
 
 const PASSWORD = 'hob-demo-2026'
@@ -259,4 +259,26 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     for (const s of [host, camera]) expect(s.errors).toEqual([])
     for (const s of [host, camera]) await s.page.close()
   }, 120_000)
+
+  it('asks for one tap where the browser keeps the page silent, and rings after it', async () => {
+    // Chromium's own autoplay policy (no flag): an audio context stays suspended until the user acts.
+    const browser = await chromium.launch({ executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS.filter((a) => !a.startsWith('--autoplay-policy')) })
+    try {
+      const page = await browser.newPage({ viewport: LAPTOP })
+      const errors: string[] = []
+      page.on('console', (m) => m.type() === 'error' && errors.push(m.text()))
+      expect((await page.request.post(url('/api/auth/login'), { data: { email: 'producer@brackenford.test', password: PASSWORD } })).status()).toBe(200)
+      const shootId: number = (await (await page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'take' } })).json()).shoot.id
+      await page.goto(url(`/shoots/${shootId}/desk`), { waitUntil: 'networkidle' })
+      await page.getByTestId('sound-blocked').waitFor({ timeout: 5000 })
+      await expect(page.evaluate(() => (window as unknown as { Howler: { ctx: AudioContext } }).Howler.ctx.state)).resolves.toBe('suspended')
+      expect(await axeViolations(page, { aaa: true })).toEqual([])
+      await page.getByRole('button', { name: 'Let this screen ring' }).click()
+      await page.getByTestId('sound-blocked').waitFor({ state: 'detached', timeout: 5000 })
+      await expect(page.evaluate(() => (window as unknown as { Howler: { ctx: AudioContext } }).Howler.ctx.state)).resolves.toBe('running')
+      expect(errors).toEqual([])
+    } finally {
+      await browser.close()
+    }
+  }, 60_000)
 })
