@@ -124,7 +124,12 @@ export async function studioSettings(studioId: number) {
   await useDb()
   const s = await Studio.findByPk(studioId)
   if (!s) throw createError({ statusCode: 404, statusMessage: 'There is no such studio.' })
-  return { id: s.id, name: s.name, locale: s.locale, currency: s.currency, budgetPerServingMinor: s.budgetPerServingMinor ?? null, cupUnit: s.cupUnit, unitSystem: s.unitSystem, kitchen: s.kitchen }
+  // Plain values: Sequelize's CreationOptional brand must not reach the pages through the API types.
+  return {
+    id: s.id, name: s.name, locale: s.locale as string, currency: s.currency as string,
+    budgetPerServingMinor: (s.budgetPerServingMinor ?? null) as number | null, cupUnit: s.cupUnit as string,
+    unitSystem: s.unitSystem as string, kitchen: s.kitchen as { hands: number; burners: number; ovens: number; racksPerOven: number; parallelRecipes: boolean },
+  }
 }
 
 /** Reads an import into a body ready to save, with what could not be understood. */

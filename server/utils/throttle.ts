@@ -29,7 +29,7 @@ export function assertUnderLimit(event: H3Event, key: string, limit: number, wha
   const w = windowFor(key, throttleWindowMs(), now)
   if (w.count >= limit) {
     const seconds = Math.max(1, Math.ceil((w.resetAt - now) / 1000))
-    setResponseHeader(event, 'Retry-After', String(seconds))
+    setResponseHeader(event, 'Retry-After', seconds)
     const wait = seconds >= 90 ? `${Math.ceil(seconds / 60)} minutes` : `${seconds} seconds`
     throw createError({ statusCode: 429, statusMessage: `Too many ${what}. Try again in ${wait}.`, data: { retryAfterSeconds: seconds } })
   }

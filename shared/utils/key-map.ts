@@ -38,7 +38,7 @@ export function isReservedKey(key: string): boolean {
 }
 
 /** The name Hobline gives the key of a keyboard event, or null for a lone modifier. */
-export function keyName(event: Pick<KeyboardEvent, 'key'>): string | null {
+export function keyName(event: { key: string }): string | null {
   const k = event.key
   if (!k || k === 'Unidentified' || k === 'Dead' || k === 'Process') return null
   if (MODIFIERS.includes(k)) return null

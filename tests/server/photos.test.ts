@@ -22,7 +22,7 @@ interface Upload {
 /** A multipart upload, as a browser form sends it, with the client's session cookie. */
 async function upload(base: (path: string) => string, cookie: string, path: string, bytes: Uint8Array, filename = 'dish.jpg', type = 'image/jpeg', field = 'photo'): Promise<Upload> {
   const form = new FormData()
-  form.append(field, new Blob([bytes], { type }), filename)
+  form.append(field, new Blob([new Uint8Array(bytes)], { type }), filename)
   const res = await fetch(base(path), { method: 'POST', body: form, headers: { cookie, accept: 'application/json' } })
   const text = await res.text()
   return { status: res.status, body: text ? JSON.parse(text) : null }

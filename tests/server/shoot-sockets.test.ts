@@ -122,7 +122,7 @@ describe('live shoot engine', async () => {
     const missed = await emitAck(p, 'shoot:command', { shootId, type: 'step.next' })
     expect(missed.ok).toBe(true)
     h.connect()
-    await new Promise((r) => h.once('connect', r))
+    await new Promise<void>((r) => h.once('connect', () => r()))
     const snap = await emitAck<ShootSnapshot>(h, 'shoot:join', { shootId })
     expect(snap.state.seq).toBe(missed.seq)
     expect(snap.state.cursor).toEqual({ segment: 0, step: 2 })
@@ -143,7 +143,7 @@ describe('live shoot engine', async () => {
 
     const again = await signedIn(demo.producer)
     const s = await open(again)
-    const snap = await emitAck<ShootSnapshot>(s, 'shoot:join', { shootId })
+    const snap = await emitAck<{ ok: boolean } & ShootSnapshot>(s, 'shoot:join', { shootId })
     expect(snap.ok).toBe(true)
     const stewAfter = snap.state.timers.find((t) => t.label === 'Stew simmer')!
     expect(stewAfter.deadlineServerMs).toBe(stew.deadlineServerMs)
