@@ -171,6 +171,15 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     }
     await expect.poll(() => howlerPlaying(desk.page)).toEqual([])
 
+    // The host starts this step's timer with its key ("t"): the step's longest time (2 minutes), on
+    // every screen, named after the step.
+    await host.page.keyboard.press('t')
+    const stepTimer = desk.page.locator('[data-testid^="timer-Stir in the garlic"]')
+    await stepTimer.waitFor()
+    expect(Number(await stepTimer.getAttribute('data-remaining-ms'))).toBeGreaterThan(110_000)
+    expect(Number(await stepTimer.getAttribute('data-remaining-ms'))).toBeLessThanOrEqual(120_000)
+    await host.page.locator('[data-testid^="tile-Stir in the garlic"]').waitFor()
+
     // A reload of the tablet returns to the same step and the same timer deadline.
     const deadline = await host.page.getByTestId('tile-Beans simmer').getAttribute('data-deadline')
     await host.page.reload({ waitUntil: 'networkidle' })
