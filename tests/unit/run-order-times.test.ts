@@ -1,19 +1,10 @@
 // Planned against actual on the control desk. The definitions are written in
 // shared/utils/run-order-times.ts; the figures are worked by hand on round minutes.
 import { describe, expect, it } from 'vitest'
-import type { ShootActor, ShootState } from '../../shared/types/shoot'
+import { MIN, T0, run } from '../support/shoot-commands'
 import { createShootState } from '../../shared/utils/shoot'
-import { applyShootCommand } from '../../shared/utils/shoot-reducer'
 import { overUnderText, runOrderTimes } from '../../shared/utils/run-order-times'
 
-const T0 = 1_760_000_000_000
-const MIN = 60_000
-const producer: ShootActor = { role: 'producer', id: 'user:1' }
-const run = (s: ShootState, command: unknown, now: number) => {
-  const r = applyShootCommand(s, command, { nowServerMs: now, actor: producer })
-  if (!r.ok) throw new Error(r.error.message)
-  return r.state
-}
 const step = (start: number | null, end: number | null, max: number | null = null) => ({ plannedStartMs: start, plannedEndMs: end, durationMin: null, durationMax: max })
 // Soup planned 0–10 min (two steps overlapping in the plan), bread 10–25 min, the sponsor read unplanned.
 const steps = { a: step(0, 6 * MIN), b: step(2 * MIN, 10 * MIN), c: step(10 * MIN, 25 * MIN), d: step(null, null, 120), e: step(null, null, 180) }

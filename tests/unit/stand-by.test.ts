@@ -3,19 +3,10 @@
 // time P is (P − shoot now) ÷ speed real ms away; a timer's deadline is already on the server clock.
 // Worked by hand on round numbers.
 import { describe, expect, it } from 'vitest'
-import type { ShootActor, ShootState } from '../../shared/types/shoot'
+import { MIN, T0, run } from '../support/shoot-commands'
 import { createShootState } from '../../shared/utils/shoot'
-import { applyShootCommand } from '../../shared/utils/shoot-reducer'
 import { STAND_BY_URGENT_MS, standByEvents } from '../../shared/utils/stand-by'
 
-const T0 = 1_760_000_000_000
-const MIN = 60_000
-const producer: ShootActor = { role: 'producer', id: 'user:1' }
-const run = (s: ShootState, command: unknown, now: number) => {
-  const r = applyShootCommand(s, command, { nowServerMs: now, actor: producer })
-  if (!r.ok) throw new Error(r.error.message)
-  return r.state
-}
 const steps = {
   chop: { plannedStartMs: 0, text: 'Chop the onion' },
   soften: { plannedStartMs: 5 * MIN, text: 'Soften the onion' },
