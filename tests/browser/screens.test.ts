@@ -151,7 +151,10 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     await desk.page.getByLabel('What is cooking').fill('Flatbread flip')
     await desk.page.getByLabel('Minutes').fill('0.05')
     await desk.page.getByRole('button', { name: 'Start timer' }).click()
+    // In its last minute the tile turns urgent; when due it shows done (and flashes).
+    await host.page.locator('[data-testid="tile-Flatbread flip"][data-urgent="true"]').waitFor()
     await host.page.getByTestId('alarm-flash').waitFor({ timeout: 10_000 })
+    await host.page.locator('[data-testid="tile-Flatbread flip"][data-state="due"]').waitFor()
     await expect.poll(() => howlerPlaying(desk.page), { timeout: 5000 }).toContainEqual(expect.stringContaining('/sounds/alarm-slot-2.wav'))
     await expect.poll(() => alarmMode(desk.page)).toBe('sound+flash')
     // At this device's volume (the default, 80 %).
