@@ -53,12 +53,14 @@ export interface ShootAlarmsOptions {
   /** Some other crew screen on the shoot rings while rolling. Default: from the screens the server
    * lists as on the shoot; false when it lists none, so the host's screen rings. */
   audibleElsewhere?: MaybeRefOrGetter<boolean>
+  /** The screen's server clock, when it already reads one (ScreenShell); otherwise its own. */
+  now?: Readonly<Ref<number>>
 }
 
 export function useShootAlarms(options: ShootAlarmsOptions = {}) {
   const shoot = useShootStore()
   const device = useDeviceSettings()
-  const now = useServerNow()
+  const now = options.now ?? useServerNow()
 
   const ringing = computed<ShootTimer[]>(() => dueTimersAt(shoot.state?.timers ?? [], now.value))
   const selfAudible = computed(() => device.audibleWhileRolling(shoot.role))

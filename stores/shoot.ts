@@ -321,11 +321,7 @@ export const useShootStore = defineStore('shoot', () => {
   function prime(id: number, initial: ShootSnapshot) {
     if (shootId.value !== null && shootId.value !== id) return
     shootId.value = id
-    if (!snapshot.value || initial.state.seq >= seq.value) {
-      snapshot.value = initial
-      seq.value = initial.state.seq
-      if (initial.presence) presence.value = initial.presence
-    }
+    adopt(initial, false)
   }
 
   /** Opens a shoot on this screen: joins its room and loads its snapshot (a snapshot fetched over

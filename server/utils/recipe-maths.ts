@@ -4,10 +4,16 @@ import { Recipe, RecipeIngredient, Studio } from '../db/models'
 import type { z } from 'zod'
 import type { studioSettingsSchema } from '../../shared/utils/recipe-schemas'
 import type { UnitId } from '../../shared/utils/units'
+import type { RecipeView } from './recipes'
 
 export async function scaledRecipe(recipeId: number, studioId: number, servings?: number, units?: 'metric' | 'us') {
-  const recipe = (await loadRecipe(recipeId))!
-  const settings = await studioSettings(studioId)
+  return scaleLoadedRecipe((await loadRecipe(recipeId))!, await studioSettings(studioId), servings, units)
+}
+
+type StudioSettings = Awaited<ReturnType<typeof studioSettings>>
+
+/** A recipe already loaded, scaled for a studio whose settings are already read. */
+export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, servings?: number, units?: 'metric' | 'us') {
   const system = units ?? (settings.unitSystem as 'metric' | 'us')
   const target = servings ?? recipe.servings
   const draft = recipeDraft(recipe)

@@ -2,6 +2,7 @@
 // the studio's unit system, the ingredients the step uses with their allergens, the cautions, the
 // camera shot, and when the cook plan puts the step (ms on the shoot clock). Sent in the snapshot.
 import { RecipeStep } from '../db/models'
+import type { Kitchen } from './cook-plan'
 import type { ShootState } from '../../shared/types/shoot'
 import type { ShootSnapshot } from '../../shared/types/socket-events'
 import { euAllergenLabel, type EuAllergenId } from '../../shared/utils/allergens'
@@ -12,11 +13,11 @@ type StepDetails = ShootSnapshot['steps']
 
 /** The cook plan's start and end of each step, in ms from the start of the cook; empty when the
  * episode cannot be planned (the plan page says why). */
-async function plannedTimes(episodeId: number | null, studioId: number) {
+async function plannedTimes(episodeId: number | null, kitchen: Kitchen) {
   const times = new Map<string, { start: number; end: number }>()
   if (episodeId === null) return { times, makespanMs: null as number | null }
   try {
-    const plan = await planEpisode(episodeId, (await studioSettings(studioId)).kitchen)
+    const plan = await planEpisode(episodeId, kitchen)
     for (const p of plan.steps) times.set(String(p.stepId), { start: p.start * 1000, end: p.end * 1000 })
     return { times, makespanMs: plan.makespan * 1000 }
   } catch {
@@ -28,13 +29,13 @@ export async function shootScript(state: ShootState, shoot: { studioId: number; 
   const ids = state.runOrder.flatMap((s) => s.stepIds).map(Number)
   const settings = await studioSettings(shoot.studioId)
   const units = settings.unitSystem as 'metric' | 'us'
-  const { times, makespanMs } = await plannedTimes(shoot.episodeId, shoot.studioId)
+  const { times, makespanMs } = await plannedTimes(shoot.episodeId, settings.kitchen)
   const steps: StepDetails = {}
   if (!ids.length) return { steps, units, makespanMs }
   const recipeIds = [...new Set((await RecipeStep.findAll({ where: { id: ids }, attributes: ['recipeId'] })).map((s) => s.recipeId))]
   for (const recipeId of recipeIds) {
     const view = (await loadRecipe(recipeId))!
-    const scaled = await scaledRecipe(recipeId, shoot.studioId, undefined, units)
+    const scaled = scaleLoadedRecipe(view, settings, undefined, units)
     const rendered = new Map(scaled.steps.map((s) => [s.id, s]))
     const scaledByKey = new Map(scaled.ingredients.map((i) => [i.key, i]))
     const viewByKey = new Map(view.ingredients.map((i) => [i.key, i]))

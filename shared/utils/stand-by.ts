@@ -5,6 +5,7 @@
 import type { ShootState } from '../types/shoot'
 import { shootClockAt } from './shoot-clock'
 import { shootPositions } from './shoot'
+import { segmentsText } from './step-segments'
 
 export interface StandByEvent {
   kind: 'timer' | 'step'
@@ -37,7 +38,7 @@ export function standByEvents(
     for (const p of positions.slice(at + 1)) {
       const step = p.stepId ? steps[p.stepId] : undefined
       if (!step || step.plannedStartMs === null || step.plannedStartMs <= shootNow) continue
-      const text = step.segments ? step.segments.map((s) => s.text).join('') : step.text
+      const text = step.segments ? segmentsText(step.segments) : step.text
       out.push({ kind: 'step', id: p.stepId!, label: text, inMs: (step.plannedStartMs - shootNow) / state.clock.speed })
     }
   }

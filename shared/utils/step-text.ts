@@ -11,6 +11,7 @@
 // with "{{" that is not a token is left alone.
 import type { RecipeIngredientDraft } from '../types/recipe'
 import { formatKitchenAmount, scaleAmount, type KitchenDisplayOptions } from './scale'
+import { segmentsText } from './step-segments'
 
 export interface StepToken {
   raw: string
@@ -77,7 +78,7 @@ export function renderStepText(text: string, options: RenderStepTextOptions): { 
     at = t.end
   }
   if (at < text.length) segments.push({ text: text.slice(at) })
-  return { text: segments.map((s) => s.text).join(''), segments, problems }
+  return { text: segmentsText(segments), segments, problems }
 }
 
 /** A key for a new ingredient, from its item and unique among `taken`: "plain flour" → "plain-flour". */
