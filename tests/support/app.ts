@@ -3,6 +3,7 @@ import { mkdtempSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join, resolve } from 'node:path'
 import { $fetch, setup } from '@nuxt/test-utils/e2e'
+import { checkPort } from 'get-port-please'
 import { beforeAll } from 'vitest'
 import { chromiumLaunchOptions } from './chromium'
 
@@ -18,6 +19,19 @@ export function tempDatabasePath(label = 'test'): string {
   return join(mkdtempSync(join(tmpdir(), `hobline-${label}-`)), 'hobline.sqlite')
 }
 
+/**
+ * A free port below Linux's ephemeral range (32768–60999). A random port inside that range can be
+ * taken by another test file's outgoing connection between the check and the server's listen
+ * (seen once in CI as EADDRINUSE).
+ */
+async function serverPort(): Promise<number> {
+  for (let i = 0; i < 50; i++) {
+    const port = 20000 + Math.floor(Math.random() * 12000)
+    if (await checkPort(port, '127.0.0.1')) return port
+  }
+  throw new Error('no free port between 20000 and 32000 for the test server')
+}
+
 /** Registers the suite's beforeAll/afterAll. Returns the database path the server uses. */
 export async function useBuiltApp(options: AppOptions = {}): Promise<{ databasePath: string }> {
   const databasePath = tempDatabasePath()
@@ -27,6 +41,7 @@ export async function useBuiltApp(options: AppOptions = {}): Promise<{ databaseP
     rootDir,
     build: false,
     server: true,
+    port: await serverPort(),
     browser: options.browser ?? false,
     browserOptions: { type: 'chromium', launch: chromiumLaunchOptions() },
     nuxtConfig: { nitro: { output: { dir: resolve(rootDir, '.output') } } },
