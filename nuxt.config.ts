@@ -1,4 +1,6 @@
 // Hobline: the run-of-show for cooking on camera.
+import { fileURLToPath } from 'node:url'
+
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
   devtools: { enabled: false },
@@ -60,6 +62,13 @@ export default defineNuxtConfig({
     experimental: { websocket: true },
     // Node 20 runs ES2022 natively (the unit maths uses BigInt literals for exact ratios).
     esbuild: { options: { target: 'es2022' } },
+  },
+  hooks: {
+    // A refusal thrown as a DomainError is answered by server/error.ts before Nuxt's own handler.
+    'nitro:config'(config) {
+      const nuxtHandlers = [config.errorHandler ?? []].flat()
+      config.errorHandler = [fileURLToPath(new URL('./server/error.ts', import.meta.url)), ...nuxtHandlers] as never
+    },
   },
   typescript: { strict: true },
 })

@@ -12,6 +12,7 @@ import { clockFilterAdd, clockFilterBest, ntpSample, serverNow, type ClockSample
 import { shootCommandAllowed } from '~~/shared/utils/shoot-commands'
 import { shootCursorMoved, shootCursorRef, shootStepRefAt } from '~~/shared/utils/shoot'
 import { applyKnownShootCommand } from '~~/shared/utils/shoot-apply'
+import { refusal, type Refusal } from '~~/shared/utils/domain-error'
 
 export type ShootConnection = 'connecting' | 'online' | 'offline'
 
@@ -45,7 +46,8 @@ export interface ShootLogEntry {
   atServerMs: number
 }
 
-export type ShootCommandReply = { ok: true; seq: number } | { ok: false; code: string; error: string }
+/** A command's answer: the sequence number it was given, or the server's refusal (one shape everywhere). */
+export type ShootCommandReply = { ok: true; seq: number } | Refusal
 
 /** A random id for a new timer or marker (the schema allows 1–64 of [A-Za-z0-9_-]); getRandomValues
  * works on a plain-HTTP address on the studio network, where randomUUID does not. */
@@ -367,7 +369,7 @@ export const useShootStore = defineStore('shoot', () => {
     const id = shootId.value
     const refuse = (code: string, message: string): ShootCommandReply => {
       setError({ code, message })
-      return { ok: false, code, error: message }
+      return refusal({ code, message })
     }
     if (id === null || !snapshot.value) return refuse('no-shoot', 'No shoot is open on this screen.')
     if (!online.value || !socket?.connected) return refuse('offline', SHOOT_OFFLINE_MESSAGE)

@@ -1,5 +1,6 @@
 // Public: a tablet trades a join code for a session limited to one shoot and one role.
 // Wrong guesses are limited per address.
+import { DomainError } from '../../shared/utils/domain-error'
 export default defineEventHandler(async (event) => {
   const { code } = await validateBody(event, joinBodySchema)
   const key = `join:${clientAddress(event)}`
@@ -7,7 +8,7 @@ export default defineEventHandler(async (event) => {
   const device = await redeemJoinCode(event, code)
   if (!device) {
     countAttempt(key)
-    throw createError({ statusCode: 404, statusMessage: 'That join code is not valid or has expired. Check it on the control desk, or ask for a new one.' })
+    throw new DomainError('not-found', 'That join code is not valid or has expired. Check it on the control desk, or ask for a new one.')
   }
   return { shootId: device.shootId, role: device.role, until: device.until, next: shootScreenPath(device.shootId, device.role) }
 })

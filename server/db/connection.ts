@@ -5,6 +5,7 @@ import { mkdirSync } from 'node:fs'
 import { dirname, resolve } from 'node:path'
 import { QueryTypes, Sequelize, Transaction } from 'sequelize'
 import sqlite3 from 'sqlite3'
+import { queueWrite } from './write-queue'
 
 export const BUSY_TIMEOUT_MS = 5000
 
@@ -85,20 +86,14 @@ export async function readPragmas(sequelize: Sequelize): Promise<DatabasePragmas
 }
 
 /**
- * One write transaction at a time in this process. SQLite has one writer anyway, and sqlite3 waits
- * for a lock inside Node's small thread pool: with more IMMEDIATE transactions waiting than the pool
- * has threads, the one holding the lock gets no thread to commit on, and every one of them stalls.
- * Queueing them here keeps the waiting in JavaScript. Do not start a transaction inside another.
+ * One write transaction at a time in this process, in the queue the shoot store shares
+ * (write-queue.ts says why). Do not start a transaction inside another.
  */
 function serialiseTransactions(sequelize: Sequelize) {
   const begin = sequelize.transaction.bind(sequelize) as (...args: unknown[]) => Promise<unknown>
-  let queue: Promise<unknown> = Promise.resolve()
   ;(sequelize as unknown as { transaction: (...args: unknown[]) => Promise<unknown> }).transaction = (...args: unknown[]) => {
     // Only the managed form (with a callback) is queued; an unmanaged one is the caller's to end.
     if (typeof args[args.length - 1] !== 'function') return begin(...args)
-    const run = () => begin(...args)
-    const next = queue.then(run, run)
-    queue = next.catch(() => {})
-    return next
+    return queueWrite(() => begin(...args))
   }
 }

@@ -6,6 +6,7 @@ import type { Transaction } from 'sequelize'
 import { Membership, PasswordReset, Studio, User } from '../db/models'
 import { passwordProblem } from '../../shared/utils/password-policy'
 import type { StudioRole } from '../../shared/utils/roles'
+import { DomainError } from '../../shared/utils/domain-error'
 
 export const RESET_LIFETIME_MS = 60 * 60 * 1000
 
@@ -21,7 +22,7 @@ export function publicUser(user: User) {
 
 export function assertPasswordAllowed(password: string, email: string) {
   const problem = passwordProblem(password, email)
-  if (problem) throw createError({ statusCode: 400, statusMessage: `password: ${problem}`, data: { field: 'password' } })
+  if (problem) throw new DomainError('invalid', `password: ${problem}`, { field: 'password' })
 }
 
 export async function membershipsOf(userId: number): Promise<MembershipView[]> {
@@ -40,7 +41,7 @@ export function slugFor(name: string): string {
 export async function createUser(input: { name: string; email: string; password: string }, transaction: Transaction): Promise<User> {
   assertPasswordAllowed(input.password, input.email)
   if (await User.findOne({ where: { email: input.email }, transaction })) {
-    throw createError({ statusCode: 409, statusMessage: 'email: An account with this e-mail address already exists. Sign in instead, or reset the password.', data: { field: 'email' } })
+    throw new DomainError('conflict', 'email: An account with this e-mail address already exists. Sign in instead, or reset the password.', { field: 'email' })
   }
   return User.create({ name: input.name, email: input.email, passwordHash: await hashPassword(input.password) }, { transaction })
 }
@@ -101,10 +102,10 @@ export async function resetPassword(token: string, password: string) {
   return sequelize.transaction(async (transaction) => {
     const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) }, transaction })
     if (!reset || reset.usedAt || reset.expiresAt.getTime() < Date.now()) {
-      throw createError({ statusCode: 410, statusMessage: 'This reset link has expired or was already used. Ask for a new one from the sign-in page.' })
+      throw new DomainError('gone', 'This reset link has expired or was already used. Ask for a new one from the sign-in page.')
     }
     const user = await User.findByPk(reset.userId, { transaction })
-    if (!user) throw createError({ statusCode: 410, statusMessage: 'The account for this link no longer exists.' })
+    if (!user) throw new DomainError('gone', 'The account for this link no longer exists.')
     assertPasswordAllowed(password, user.email)
     user.passwordHash = await hashPassword(password)
     await user.save({ transaction })

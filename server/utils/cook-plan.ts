@@ -1,5 +1,6 @@
 // The cook plan of an episode: its recipes' steps handed to the shared scheduler (planCook).
-import { Recipe, RecipeStep } from '../db/models'
+import type { RecipeStep } from '../db/models'
+import { DomainError } from '../../shared/utils/domain-error'
 import { PlanError, type PlanKitchen, type PlanStep } from '../../shared/utils/plan-types'
 
 export type Kitchen = Required<Pick<PlanKitchen, 'hands' | 'burners' | 'ovens' | 'racksPerOven' | 'parallelRecipes'>>
@@ -18,17 +19,12 @@ export function plannedDuration(step: { durationMin: number | null; durationMax:
 const stepKey = (id: number) => String(id)
 
 export async function planEpisode(episodeId: number, kitchen: Kitchen) {
-  const episode = (await loadEpisode(episodeId))!
-  const recipeIds = episode.segments.map((s) => s.recipeId).filter((x): x is number => !!x)
-  const recipes = new Map((await Recipe.findAll({ where: { id: recipeIds }, attributes: ['id', 'title'] })).map((r) => [r.id, r.title]))
-  const steps = await RecipeStep.findAll({ where: { recipeId: recipeIds }, order: [['recipeId', 'ASC'], ['position', 'ASC']] })
-  const byRecipe = new Map<number, RecipeStep[]>()
-  for (const s of steps) byRecipe.set(s.recipeId, [...(byRecipe.get(s.recipeId) ?? []), s])
+  const episode = await loadEpisodeRunOrder(episodeId)
+  const recipeSegments = episode.segments.filter((s) => s.recipeId)
 
   const input: PlanStep[] = []
   const info = new Map<string, { recipeId: number; recipeTitle: string; label: string; step: RecipeStep }>()
-  for (const recipeId of recipeIds) {
-    const list = byRecipe.get(recipeId) ?? []
+  for (const { recipeId, title: recipeTitle, steps: list } of recipeSegments) {
     const atPosition = new Map(list.map((s) => [s.position, s]))
     for (const s of list) {
       // Tokens read as the ingredient's name; no closing full stop, since cues quote the label in a sentence.
@@ -47,7 +43,7 @@ export async function planEpisode(episodeId: number, kitchen: Kitchen) {
         recipe: String(recipeId),
         label,
       })
-      info.set(stepKey(s.id), { recipeId, recipeTitle: recipes.get(recipeId) ?? '', label, step: s })
+      info.set(stepKey(s.id), { recipeId: recipeId!, recipeTitle, label, step: s })
     }
   }
 
@@ -74,10 +70,10 @@ export async function planEpisode(episodeId: number, kitchen: Kitchen) {
   } catch (error) {
     if (!(error instanceof PlanError)) throw error
     const named = error.stepIds.map((id) => ({ stepId: Number(id), label: info.get(id)?.label ?? id, recipeTitle: info.get(id)?.recipeTitle ?? '' }))
-    throw createError({
-      statusCode: 422,
-      statusMessage: `${error.message}${named.length ? ` (steps: ${named.map((n) => `"${n.label}" in ${n.recipeTitle}`).join('; ')})` : ''}`,
-      data: { code: error.code, stepIds: named.map((n) => n.stepId), steps: named },
-    })
+    throw new DomainError(
+      error.code,
+      `${error.message}${named.length ? ` (steps: ${named.map((n) => `"${n.label}" in ${n.recipeTitle}`).join('; ')})` : ''}`,
+      { data: { stepIds: named.map((n) => n.stepId), steps: named } },
+    )
   }
 }

@@ -1,8 +1,8 @@
 // A studio's crew: members with their roles, and invites by e-mail.
-import type { H3Event } from 'h3'
 import { Invite, Membership, Studio, User } from '../db/models'
 import { inviteMail } from '../mail/templates'
 import type { StudioRole } from '../../shared/utils/roles'
+import { DomainError } from '../../shared/utils/domain-error'
 
 export const INVITE_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000
 
@@ -26,9 +26,9 @@ export async function changeRole(studioId: number, userId: number, role: StudioR
   const sequelize = await useDb()
   return sequelize.transaction(async () => {
     const membership = await Membership.findOne({ where: { studioId, userId } })
-    if (!membership) throw createError({ statusCode: 404, statusMessage: 'That person is not in this studio.' })
+    if (!membership) throw new DomainError('not-found', 'That person is not in this studio.')
     if (membership.role === 'producer' && role !== 'producer' && (await producersLeft(studioId, userId)) === 0) {
-      throw createError({ statusCode: 409, statusMessage: 'A studio needs at least one producer. Make someone else a producer first.' })
+      throw new DomainError('conflict', 'A studio needs at least one producer. Make someone else a producer first.')
     }
     membership.role = role
     await membership.save()
@@ -40,9 +40,9 @@ export async function removeMember(studioId: number, userId: number) {
   const sequelize = await useDb()
   await sequelize.transaction(async () => {
     const membership = await Membership.findOne({ where: { studioId, userId } })
-    if (!membership) throw createError({ statusCode: 404, statusMessage: 'That person is not in this studio.' })
+    if (!membership) throw new DomainError('not-found', 'That person is not in this studio.')
     if (membership.role === 'producer' && (await producersLeft(studioId, userId)) === 0) {
-      throw createError({ statusCode: 409, statusMessage: 'A studio needs at least one producer. Make someone else a producer before removing this one.' })
+      throw new DomainError('conflict', 'A studio needs at least one producer. Make someone else a producer before removing this one.')
     }
     await membership.destroy()
   })
@@ -67,7 +67,7 @@ export async function listInvites(studioId: number) {
 }
 
 /** A new link (the old one stops working), a new expiry, and the mail. */
-async function sendInvite(event: H3Event, invite: Invite, inviterName: string) {
+async function sendInvite(site: string, invite: Invite, inviterName: string) {
   const { token, hash } = newToken()
   invite.tokenHash = hash
   invite.expiresAt = new Date(Date.now() + INVITE_LIFETIME_MS)
@@ -75,34 +75,34 @@ async function sendInvite(event: H3Event, invite: Invite, inviterName: string) {
   invite.lastSentAt = new Date()
   await invite.save()
   const studio = await Studio.findByPk(invite.studioId)
-  const link = `${siteUrl(event)}/invite/${token}`
+  const link = `${site}/invite/${token}`
   const mail = inviteMail({ studioName: studio!.name, inviterName, role: invite.role, link, expiresAt: invite.expiresAt, locale: studio!.locale })
   await sendMail({ ...mail, to: invite.email, kind: 'invite', studioId: invite.studioId })
   return { invite: inviteView(invite), token }
 }
 
-export async function inviteToStudio(event: H3Event, studioId: number, inviter: { id: number; name: string }, email: string, role: StudioRole) {
+export async function inviteToStudio(site: string, studioId: number, inviter: { id: number; name: string }, email: string, role: StudioRole) {
   await useDb()
   const existing = await User.findOne({ where: { email }, attributes: ['id'] })
   if (existing && (await Membership.findOne({ where: { studioId, userId: existing.id } }))) {
-    throw createError({ statusCode: 409, statusMessage: 'email: This person is already in the studio. Change their role in the crew list instead.', data: { field: 'email' } })
+    throw new DomainError('conflict', 'email: This person is already in the studio. Change their role in the crew list instead.', { field: 'email' })
   }
   // Inviting the same address again renews the pending invite instead of making a second one.
   let invite = await Invite.findOne({ where: { studioId, email, acceptedAt: null, revokedAt: null } })
   if (invite) invite.role = role
   else invite = Invite.build({ studioId, email, role, tokenHash: newToken().hash, invitedBy: inviter.id, expiresAt: new Date() })
-  return sendInvite(event, invite, inviter.name)
+  return sendInvite(site, invite, inviter.name)
 }
 
 async function pendingInvite(studioId: number, inviteId: number) {
   await useDb()
   const invite = await Invite.findOne({ where: { id: inviteId, studioId, acceptedAt: null, revokedAt: null } })
-  if (!invite) throw createError({ statusCode: 404, statusMessage: 'There is no pending invite with this id in the studio.' })
+  if (!invite) throw new DomainError('not-found', 'There is no pending invite with this id in the studio.')
   return invite
 }
 
-export async function resendInvite(event: H3Event, studioId: number, inviteId: number, inviterName: string) {
-  return sendInvite(event, await pendingInvite(studioId, inviteId), inviterName)
+export async function resendInvite(site: string, studioId: number, inviteId: number, inviterName: string) {
+  return sendInvite(site, await pendingInvite(studioId, inviteId), inviterName)
 }
 
 export async function revokeInvite(studioId: number, inviteId: number) {
@@ -114,10 +114,10 @@ export async function revokeInvite(studioId: number, inviteId: number) {
 async function openInvite(token: string) {
   await useDb()
   const invite = await Invite.findOne({ where: { tokenHash: hashToken(token) }, include: [{ model: Studio, as: 'studio', attributes: ['id', 'name'] }] })
-  if (!invite) throw createError({ statusCode: 404, statusMessage: 'This invite link is not known. It may have been replaced by a newer mail.' })
-  if (invite.acceptedAt) throw createError({ statusCode: 410, statusMessage: 'This invite was already accepted. Sign in to reach the studio.' })
-  if (invite.revokedAt) throw createError({ statusCode: 410, statusMessage: 'This invite was withdrawn by the studio. Ask the producer for a new one.' })
-  if (invite.expiresAt.getTime() < Date.now()) throw createError({ statusCode: 410, statusMessage: 'This invite has expired. Ask the producer to send it again.' })
+  if (!invite) throw new DomainError('not-found', 'This invite link is not known. It may have been replaced by a newer mail.')
+  if (invite.acceptedAt) throw new DomainError('gone', 'This invite was already accepted. Sign in to reach the studio.')
+  if (invite.revokedAt) throw new DomainError('gone', 'This invite was withdrawn by the studio. Ask the producer for a new one.')
+  if (invite.expiresAt.getTime() < Date.now()) throw new DomainError('gone', 'This invite has expired. Ask the producer to send it again.')
   return invite as Invite & { studio: Studio }
 }
 
@@ -134,10 +134,10 @@ export async function acceptInvite(token: string, input: { name?: string; passwo
     let user = await User.findOne({ where: { email: invite.email }, transaction })
     if (user) {
       if (!(await verifyPassword(user.passwordHash, input.password))) {
-        throw createError({ statusCode: 401, statusMessage: `password: That is not the password of the existing account for ${invite.email}.`, data: { field: 'password' } })
+        throw new DomainError('signed-out', `password: That is not the password of the existing account for ${invite.email}.`, { field: 'password' })
       }
     } else {
-      if (!input.name) throw createError({ statusCode: 400, statusMessage: 'name: Enter your name for the new account.', data: { field: 'name' } })
+      if (!input.name) throw new DomainError('invalid', 'name: Enter your name for the new account.', { field: 'name' })
       user = await createUser({ name: input.name, email: invite.email, password: input.password }, transaction)
     }
     const already = await Membership.findOne({ where: { userId: user.id, studioId: invite.studioId }, transaction })

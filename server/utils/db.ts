@@ -3,6 +3,7 @@
 // "migrating" until it is ready.
 import type { Sequelize } from 'sequelize'
 import type { MigrationState } from '../db/migrator'
+import { DomainError } from '../../shared/utils/domain-error'
 
 export type DatabaseStatus = 'starting' | 'migrating' | 'ready' | 'failed'
 
@@ -27,10 +28,10 @@ export function getDatabaseHandle(): DatabaseHandle | undefined {
 
 /** The Sequelize instance, once migrations have run; a 503 while starting or if start-up failed. */
 export async function useDb(): Promise<Sequelize> {
-  if (!handle) throw createError({ statusCode: 503, statusMessage: 'The database is not started yet. Try again in a moment.' })
+  if (!handle) throw new DomainError('unavailable', 'The database is not started yet. Try again in a moment.')
   try {
     return await handle.ready
   } catch {
-    throw createError({ statusCode: 503, statusMessage: 'The database could not start; the server log says why.' })
+    throw new DomainError('unavailable', 'The database could not start; the server log says why.')
   }
 }

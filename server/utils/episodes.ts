@@ -1,6 +1,7 @@
 // Episodes: a title and a run order of segments (one recipe segment per recipe, in order, for now).
 import type { H3Event } from 'h3'
-import { Episode, EpisodeSegment, Recipe } from '../db/models'
+import { Episode, EpisodeSegment, Recipe, RecipeStep } from '../db/models'
+import { DomainError } from '../../shared/utils/domain-error'
 import type { StudioAction } from '../../shared/utils/roles'
 
 type Loaded = Episode & { segments: EpisodeSegment[] }
@@ -32,6 +33,23 @@ export async function listEpisodes(studioId: number) {
   return views.map((v) => ({ id: v.id, title: v.title, updatedAt: v.updatedAt, recipes: v.segments.filter((s) => s.recipeId).map((s) => ({ id: s.recipeId!, title: s.title })) }))
 }
 
+/**
+ * An episode's run order with every recipe segment's steps, in recipe order: what the cook plan
+ * schedules and what a shoot starts from. A 'not-found' DomainError when there is no such episode.
+ */
+export async function loadEpisodeRunOrder(episodeId: number) {
+  const episode = await loadEpisode(episodeId)
+  if (!episode) throw new DomainError('not-found', 'There is no such episode.')
+  const recipeIds = episode.segments.map((s) => s.recipeId).filter((x): x is number => !!x)
+  const steps = recipeIds.length ? await RecipeStep.findAll({ where: { recipeId: recipeIds }, order: [['recipeId', 'ASC'], ['position', 'ASC']] }) : []
+  return {
+    ...episode,
+    segments: episode.segments.map((s) => ({
+      ...s, title: s.title ?? 'Segment', steps: s.recipeId ? steps.filter((st) => st.recipeId === s.recipeId) : [],
+    })),
+  }
+}
+
 /** The guard for /api/episodes/:id/…: the caller may do `action` in the episode's studio. */
 export async function requireEpisode(event: H3Event, action: StudioAction, param = 'id') {
   const studioOf = async (id: number) => (await Episode.findByPk(id, { attributes: ['studioId'] }))?.studioId ?? null
@@ -41,9 +59,9 @@ export async function requireEpisode(event: H3Event, action: StudioAction, param
 
 async function assertRecipesInStudio(studioId: number, recipeIds: number[]) {
   const unique = [...new Set(recipeIds)]
-  if (unique.length !== recipeIds.length) throw createError({ statusCode: 400, statusMessage: 'recipeIds: a recipe appears twice; put each recipe in the episode once.', data: { field: 'recipeIds' } })
+  if (unique.length !== recipeIds.length) throw new DomainError('invalid', 'recipeIds: a recipe appears twice; put each recipe in the episode once.', { field: 'recipeIds' })
   if (unique.length && (await Recipe.count({ where: { id: unique, studioId } })) !== unique.length) {
-    throw createError({ statusCode: 400, statusMessage: 'recipeIds: one of the recipes is not in this studio.', data: { field: 'recipeIds' } })
+    throw new DomainError('invalid', 'recipeIds: one of the recipes is not in this studio.', { field: 'recipeIds' })
   }
 }
 
@@ -70,7 +88,7 @@ export async function saveEpisode(episodeId: number, studioId: number, body: { v
     const [changed] = await Episode.update({ ...(body.title ? { title: body.title } : {}), version: body.version + 1 }, { where: { id: episodeId, version: body.version } })
     if (!changed) {
       const current = await loadEpisode(episodeId)
-      throw createError({ statusCode: 409, statusMessage: `Someone else saved this episode while you were editing (now version ${current?.version}). Your changes are still on the page: compare, then save again.`, data: { current } })
+      throw new DomainError('conflict', `Someone else saved this episode while you were editing (now version ${current?.version}). Your changes are still on the page: compare, then save again.`, { data: { current } })
     }
     if (body.recipeIds) await writeRecipeSegments(episodeId, body.recipeIds)
   })

@@ -4,12 +4,15 @@
 // effect at once, without waiting for the session cookie to expire.
 import type { H3Event } from 'h3'
 import type { User, UserSession } from '#auth-utils'
-import { JoinCode, Membership, Shoot } from '../db/models'
+import { JoinCode, Membership } from '../db/models'
+import { DomainError } from '../../shared/utils/domain-error'
 import { deviceCan, roleCan, type DeviceRole, type StudioAction, type StudioRole } from '../../shared/utils/roles'
 
 export type Caller =
   | { kind: 'member'; user: User; studioId: number; role: StudioRole; shootId?: number }
   | { kind: 'device'; studioId: number; shootId: number; role: DeviceRole; codeId: number }
+
+const DEVICE_SCOPE_MESSAGE = 'This device joined one shoot only and may open nothing else.'
 
 export type Target = { studioId: number } | { shootId: number }
 
@@ -25,16 +28,7 @@ const ACTION_WORDS: Record<StudioAction, string> = {
   'episode.edit': 'edit episodes',
   'shoot.read': 'watch this shoot',
   'shoot.create': 'start a shoot',
-  'shoot.drive': 'drive the shoot',
-  'shoot.mark': 'add take markers',
-  'shoot.roll': 'set rolling',
   'joincode.manage': 'make join codes',
-}
-
-export class GuardError extends Error {
-  constructor(public statusCode: 401 | 403 | 404, message: string) {
-    super(message)
-  }
 }
 
 /** The decision itself, without an HTTP event: shared by routes and sockets. */
@@ -43,10 +37,10 @@ export async function authorizeSession(session: UserSession, target: Target, act
   let studioId: number
   let shootId: number | undefined
   if ('shootId' in target) {
-    const shoot = await Shoot.findByPk(target.shootId, { attributes: ['id', 'studioId'] })
-    if (!shoot) throw new GuardError(404, 'There is no such shoot.')
-    studioId = shoot.studioId
-    shootId = shoot.id
+    const shootStudio = await useShoot().store.studioOf(target.shootId)
+    if (shootStudio === null) throw new DomainError('not-found', 'There is no such shoot.')
+    studioId = shootStudio
+    shootId = target.shootId
   } else {
     studioId = target.studioId
   }
@@ -54,9 +48,9 @@ export async function authorizeSession(session: UserSession, target: Target, act
   if (session.user) {
     const membership = await Membership.findOne({ where: { userId: session.user.id, studioId }, attributes: ['role'] })
     // Not a member: answer as if it did not exist, so ids cannot be probed.
-    if (!membership) throw new GuardError(404, shootId ? 'There is no such shoot.' : 'There is no such studio on your account.')
+    if (!membership) throw new DomainError('not-found', shootId ? 'There is no such shoot.' : 'There is no such studio on your account.')
     if (!roleCan(membership.role, action)) {
-      throw new GuardError(403, `Your role here (${membership.role}) may not ${ACTION_WORDS[action]}. Ask the studio's producer.`)
+      throw new DomainError('forbidden', `Your role here (${membership.role}) may not ${ACTION_WORDS[action]}. Ask the studio's producer.`)
     }
     return { kind: 'member', user: session.user, studioId, role: membership.role, shootId }
   }
@@ -65,41 +59,36 @@ export async function authorizeSession(session: UserSession, target: Target, act
     const device = session.device
     const code = await JoinCode.findByPk(device.codeId, { attributes: ['id', 'revokedAt'] })
     if (!code || code.revokedAt || device.until < Date.now()) {
-      throw new GuardError(401, 'This device is no longer joined to the shoot. Enter a new join code from the control desk.')
+      throw new DomainError('signed-out', 'This device is no longer joined to the shoot. Enter a new join code from the control desk.')
     }
     if (shootId === undefined || shootId !== device.shootId || studioId !== device.studioId) {
-      throw new GuardError(403, 'This device joined one shoot only and may open nothing else.')
+      throw new DomainError('forbidden', DEVICE_SCOPE_MESSAGE)
     }
     if (!deviceCan(device.role, action)) {
-      throw new GuardError(403, `A ${device.role} device may not ${ACTION_WORDS[action]}.`)
+      throw new DomainError('forbidden', `A ${device.role} device may not ${ACTION_WORDS[action]}.`)
     }
     return { kind: 'device', studioId, shootId, role: device.role, codeId: device.codeId }
   }
 
-  throw new GuardError(401, 'Sign in first.')
-}
-
-function toHttp(error: unknown): never {
-  if (error instanceof GuardError) throw createError({ statusCode: error.statusCode, statusMessage: error.message })
-  throw error
+  throw new DomainError('signed-out', 'Sign in first.')
 }
 
 /** 401 unless a member (not a device) is signed in. */
 export async function requireMember(event: H3Event): Promise<User> {
   const session = await getUserSession(event)
-  if (!session.user) throw createError({ statusCode: 401, statusMessage: 'Sign in first.' })
+  if (!session.user) throw new DomainError('signed-out', 'Sign in first.')
   return session.user
 }
 
 export async function authorize(event: H3Event, target: Target, action: StudioAction): Promise<Caller> {
-  return authorizeSession(await getUserSession(event), target, action).catch(toHttp)
+  return authorizeSession(await getUserSession(event), target, action)
 }
 
 /** For routes under /api/studios/:studioId/…: a member of that studio whose role allows `action`. */
 export async function requireStudio(event: H3Event, action: StudioAction): Promise<Extract<Caller, { kind: 'member' }>> {
   const studioId = routeId(event, 'studioId')
   const caller = await authorize(event, { studioId }, action)
-  if (caller.kind !== 'member') throw createError({ statusCode: 403, statusMessage: 'This device joined one shoot only and may open nothing else.' })
+  if (caller.kind !== 'member') throw new DomainError('forbidden', DEVICE_SCOPE_MESSAGE)
   return caller
 }
 
@@ -123,9 +112,9 @@ export async function requireStudioThing(
   const studioId = await findStudioId(id)
   if (studioId === null) {
     await requireMember(event)
-    throw createError({ statusCode: 404, statusMessage: `There is no such ${noun}.` })
+    throw new DomainError('not-found', `There is no such ${noun}.`)
   }
   const caller = await authorize(event, { studioId }, action)
-  if (caller.kind !== 'member') throw createError({ statusCode: 403, statusMessage: 'This device joined one shoot only and may open nothing else.' })
+  if (caller.kind !== 'member') throw new DomainError('forbidden', DEVICE_SCOPE_MESSAGE)
   return { caller, id, studioId }
 }

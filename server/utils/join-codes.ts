@@ -2,8 +2,9 @@
 import type { H3Event } from 'h3'
 import QRCode from 'qrcode'
 import { Op } from 'sequelize'
-import { JoinCode, Shoot } from '../db/models'
+import { JoinCode } from '../db/models'
 import type { DeviceRole } from '../../shared/utils/roles'
+import { DomainError } from '../../shared/utils/domain-error'
 
 export const JOIN_CODE_MINUTES = 30
 /** How long a device stays joined after it used a code (a long shoot day). */
@@ -13,8 +14,9 @@ export function displayJoinCode(code: string) {
   return `${code.slice(0, 3)}-${code.slice(3)}`
 }
 
-async function codeView(event: H3Event, code: JoinCode) {
-  const joinUrl = `${siteUrl(event)}/join?code=${code.code}`
+/** `site` is the address devices reach the app at (siteUrl). */
+async function codeView(site: string, code: JoinCode) {
+  const joinUrl = `${site}/join?code=${code.code}`
   return {
     id: code.id,
     shootId: code.shootId,
@@ -27,31 +29,31 @@ async function codeView(event: H3Event, code: JoinCode) {
   }
 }
 
-export async function createJoinCode(event: H3Event, shootId: number, role: DeviceRole, createdBy: number, minutes = JOIN_CODE_MINUTES) {
+export async function createJoinCode(site: string, shootId: number, role: DeviceRole, createdBy: number, minutes = JOIN_CODE_MINUTES) {
   await useDb()
-  const shoot = await Shoot.findByPk(shootId, { attributes: ['id', 'studioId'] })
-  if (!shoot) throw createError({ statusCode: 404, statusMessage: 'There is no such shoot.' })
+  const studioId = await useShoot().store.studioOf(shootId)
+  if (studioId === null) throw new DomainError('not-found', 'There is no such shoot.')
   // A fresh code must not equal one still usable.
   for (let attempt = 0; attempt < 8; attempt++) {
     const code = newJoinCode()
     const clash = await JoinCode.findOne({ where: { code, revokedAt: null, expiresAt: { [Op.gt]: new Date() } } })
     if (clash) continue
-    const row = await JoinCode.create({ shootId, studioId: shoot.studioId, role, code, createdBy, expiresAt: new Date(Date.now() + minutes * 60_000) })
-    return codeView(event, row)
+    const row = await JoinCode.create({ shootId, studioId, role, code, createdBy, expiresAt: new Date(Date.now() + minutes * 60_000) })
+    return codeView(site, row)
   }
-  throw createError({ statusCode: 503, statusMessage: 'Could not make a unique join code; try again.' })
+  throw new DomainError('unavailable', 'Could not make a unique join code; try again.')
 }
 
-export async function listJoinCodes(event: H3Event, shootId: number) {
+export async function listJoinCodes(site: string, shootId: number) {
   await useDb()
   const rows = await JoinCode.findAll({ where: { shootId, revokedAt: null, expiresAt: { [Op.gt]: new Date() } }, order: [['id', 'DESC']] })
-  return Promise.all(rows.map((r) => codeView(event, r)))
+  return Promise.all(rows.map((r) => codeView(site, r)))
 }
 
 export async function revokeJoinCode(shootId: number, codeId: number) {
   await useDb()
   const row = await JoinCode.findOne({ where: { id: codeId, shootId } })
-  if (!row) throw createError({ statusCode: 404, statusMessage: 'There is no such join code for this shoot.' })
+  if (!row) throw new DomainError('not-found', 'There is no such join code for this shoot.')
   if (!row.revokedAt) {
     row.revokedAt = new Date()
     await row.save()

@@ -4,6 +4,7 @@
 import type { H3Event } from 'h3'
 import type { MailCatcher } from '../mail/catcher'
 import { deliverMail, type OutgoingMail } from '../mail/send'
+import { DomainError } from '../../shared/utils/domain-error'
 
 let catcher: Promise<MailCatcher> | undefined
 
@@ -24,12 +25,12 @@ export async function sendMail(message: OutgoingMail): Promise<{ messageId: stri
   if (smtpUrl) {
     target = smtpUrl
   } else {
-    if (!catcher) throw createError({ statusCode: 503, statusMessage: 'Mail cannot be sent: no SMTP server is configured and the local catcher is not running.' })
+    if (!catcher) throw new DomainError('unavailable', 'Mail cannot be sent: no SMTP server is configured and the local catcher is not running.')
     try {
       const { host, port } = await catcher
       target = { host, port }
     } catch {
-      throw createError({ statusCode: 503, statusMessage: 'Mail cannot be sent: the local catcher could not start; the server log says why.' })
+      throw new DomainError('unavailable', 'Mail cannot be sent: the local catcher could not start; the server log says why.')
     }
   }
   try {
@@ -37,10 +38,7 @@ export async function sendMail(message: OutgoingMail): Promise<{ messageId: stri
   } catch (error) {
     const code = (error as { responseCode?: number }).responseCode
     console.error(`[hobline] sending a ${message.kind} mail failed:`, (error as Error).message)
-    throw createError({
-      statusCode: 502,
-      statusMessage: `The mail server did not take the mail${code ? ` (SMTP ${code})` : ''}. Try sending it again in a moment.`,
-    })
+    throw new DomainError('upstream', `The mail server did not take the mail${code ? ` (SMTP ${code})` : ''}. Try sending it again in a moment.`)
   }
 }
 

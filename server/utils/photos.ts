@@ -6,7 +6,7 @@
 //
 // Nothing here uses Nitro's auto-imports, so command-line scripts can import this file as well.
 import { randomBytes } from 'node:crypto'
-import { createError, getRequestHeader, readMultipartFormData, type H3Event } from 'h3'
+import { getRequestHeader, readMultipartFormData, type H3Event } from 'h3'
 import type { Driver, Storage } from 'unstorage'
 import fsDriver from 'unstorage/drivers/fs'
 import s3Driver from 'unstorage/drivers/s3'
@@ -14,6 +14,7 @@ import type { Sharp, SharpOptions } from 'sharp'
 import { Recipe, RecipeStep } from '../db/models'
 import { readDemoPhotoFile, type DemoPhotoName } from '../db/demo-photos'
 import { useDb } from './db'
+import { DomainError } from '../../shared/utils/domain-error'
 
 export type PhotoType = 'jpeg' | 'png' | 'webp'
 
@@ -53,18 +54,16 @@ const megabytes = (bytes: number) => `${(bytes / (1024 * 1024)).toFixed(1).repla
 
 function tooBig(size?: number) {
   const what = size ? `The photo is ${megabytes(size)}; photos` : 'Photos'
-  return createError({
-    statusCode: 413,
-    statusMessage: `${what} can be up to ${megabytes(PHOTO_MAX_BYTES)}. Save it smaller (2,000 pixels across is plenty for a recipe) and upload it again.`,
-    data: { field: 'photo', maxBytes: PHOTO_MAX_BYTES },
-  })
+  return new DomainError(
+    'too-large',
+    `${what} can be up to ${megabytes(PHOTO_MAX_BYTES)}. Save it smaller (2,000 pixels across is plenty for a recipe) and upload it again.`,
+    { field: 'photo', data: { maxBytes: PHOTO_MAX_BYTES } },
+  )
 }
 
 function notAPhoto(detail: string) {
-  return createError({
-    statusCode: 415,
-    statusMessage: `photo: ${detail} Upload a ${ACCEPTED} image.`,
-    data: { field: 'photo', accepted: Object.values(TYPES).map((t) => t.mime) },
+  return new DomainError('unsupported-type', `photo: ${detail} Upload a ${ACCEPTED} image.`, {
+    field: 'photo', data: { accepted: Object.values(TYPES).map((t) => t.mime) },
   })
 }
 
@@ -72,17 +71,17 @@ function notAPhoto(detail: string) {
 export async function readPhotoUpload(event: H3Event, field = 'photo'): Promise<Buffer> {
   const type = getRequestHeader(event, 'content-type') ?? ''
   if (!type.toLowerCase().startsWith('multipart/form-data')) {
-    throw createError({ statusCode: 400, statusMessage: `${field}: send the photo as a form upload (multipart/form-data) in a field named "${field}".`, data: { field } })
+    throw new DomainError('invalid', `${field}: send the photo as a form upload (multipart/form-data) in a field named "${field}".`, { field: field })
   }
   const length = Number(getRequestHeader(event, 'content-length'))
   if (!Number.isFinite(length) || length <= 0) {
-    throw createError({ statusCode: 411, statusMessage: `${field}: the upload must state its size (Content-Length); send it from a form or with a Content-Length header.`, data: { field } })
+    throw new DomainError('length-required', `${field}: the upload must state its size (Content-Length); send it from a form or with a Content-Length header.`, { field: field })
   }
   if (length > PHOTO_MAX_BYTES + MULTIPART_SLACK) throw tooBig(length)
   const parts = (await readMultipartFormData(event)) ?? []
   const part = parts.find((p) => p.name === field)
   if (!part || part.data.length === 0) {
-    throw createError({ statusCode: 400, statusMessage: `${field}: attach the photo in a form field named "${field}".`, data: { field } })
+    throw new DomainError('invalid', `${field}: attach the photo in a form field named "${field}".`, { field: field })
   }
   if (part.data.length > PHOTO_MAX_BYTES) throw tooBig(part.data.length)
   return part.data
@@ -129,11 +128,11 @@ export async function preparePhoto(bytes: Buffer): Promise<PhotoVersions> {
     throw notAPhoto(`the file starts like a ${type.toUpperCase()} image but could not be read; it may be damaged or cut short.`)
   }
   if (width * height > PHOTO_MAX_PIXELS) {
-    throw createError({
-      statusCode: 413,
-      statusMessage: `The photo is ${width} × ${height} pixels; photos can be up to ${PHOTO_MAX_PIXELS / 1_000_000} megapixels. Resize it and upload it again.`,
-      data: { field: 'photo', maxPixels: PHOTO_MAX_PIXELS },
-    })
+    throw new DomainError(
+      'too-large',
+      `The photo is ${width} × ${height} pixels; photos can be up to ${PHOTO_MAX_PIXELS / 1_000_000} megapixels. Resize it and upload it again.`,
+      { field: 'photo', data: { maxPixels: PHOTO_MAX_PIXELS } },
+    )
   }
   try {
     const upright = sharp(bytes, { limitInputPixels: PHOTO_MAX_PIXELS, failOn: 'error' }).rotate()
@@ -206,7 +205,7 @@ export function setPhotoStorage(storage: Storage | undefined, problem?: string) 
 }
 
 function photoStore(): Storage {
-  if (!store) throw createError({ statusCode: 503, statusMessage: storeProblem })
+  if (!store) throw new DomainError('unavailable', storeProblem)
   return store
 }
 
@@ -242,14 +241,14 @@ export function parsePhotoKey(raw: string | undefined): { key: string; studioId:
   try {
     key = decodeURIComponent(key)
   } catch {
-    throw createError({ statusCode: 400, statusMessage: 'photo address: it has a broken %-escape; use the address the recipe gives.' })
+    throw new DomainError('invalid', 'photo address: it has a broken %-escape; use the address the recipe gives.')
   }
   const segments = key.split('/')
   if (key.startsWith('/') || /^[A-Za-z]:/.test(key) || /[\\\0]/.test(key) || segments.some((s) => s === '..' || s === '.' || s === '')) {
-    throw createError({ statusCode: 400, statusMessage: 'photo address: it must stay inside the photo store (no "..", "." or empty parts, no absolute paths); use the address the recipe gives.' })
+    throw new DomainError('invalid', 'photo address: it must stay inside the photo store (no "..", "." or empty parts, no absolute paths); use the address the recipe gives.')
   }
   const m = KEY.exec(key)
-  if (!m) throw createError({ statusCode: 404, statusMessage: 'There is no such photo.' })
+  if (!m) throw new DomainError('not-found', 'There is no such photo.')
   return { key, studioId: Number(m[1]), recipeId: Number(m[2]) }
 }
 
@@ -288,7 +287,7 @@ export async function setRecipePhoto(recipeId: number, studioId: number, bytes: 
   const row = await Recipe.findOne({ where: { id: recipeId, studioId }, attributes: ['id', 'photo'] })
   if (!row) {
     await deletePhotos([key])
-    throw createError({ statusCode: 404, statusMessage: 'There is no such recipe.' })
+    throw new DomainError('not-found', 'There is no such recipe.')
   }
   const before = row.photo
   await Recipe.update({ photo: key }, { where: { id: recipeId } })
@@ -308,7 +307,7 @@ export async function clearRecipePhoto(recipeId: number) {
 export async function requireRecipeStep(recipeId: number, stepId: number) {
   await useDb()
   const step = await RecipeStep.findOne({ where: { id: stepId, recipeId }, attributes: ['id', 'photo'] })
-  if (!step) throw createError({ statusCode: 404, statusMessage: 'There is no such step in this recipe.' })
+  if (!step) throw new DomainError('not-found', 'There is no such step in this recipe.')
   return step
 }
 
@@ -351,7 +350,7 @@ export async function readPhoto(key: string, size: 'full' | 'thumb' = 'full'): P
     if (thumb) return { bytes: thumb, type: 'image/webp' }
   }
   const bytes = await getBytes(key)
-  if (!bytes) throw createError({ statusCode: 404, statusMessage: 'There is no such photo; it may have been replaced or deleted.' })
+  if (!bytes) throw new DomainError('not-found', 'There is no such photo; it may have been replaced or deleted.')
   return { bytes, type: MIME_BY_EXT[key.slice(key.lastIndexOf('.') + 1)]! }
 }
 

@@ -5,6 +5,7 @@ import { Price, Studio } from '../db/models'
 import type { StudioPrice } from '../../shared/utils/cost'
 import type { UnitId } from '../../shared/utils/units'
 import type { priceBodySchema } from '../../shared/utils/recipe-schemas'
+import { DomainError } from '../../shared/utils/domain-error'
 
 type PriceBody = z.output<typeof priceBodySchema>
 
@@ -30,7 +31,7 @@ export async function createPrice(studioId: number, body: PriceBody) {
 async function ownPrice(studioId: number, priceId: number) {
   await useDb()
   const price = await Price.findOne({ where: { id: priceId, studioId } })
-  if (!price) throw createError({ statusCode: 404, statusMessage: 'There is no such price in this studio.' })
+  if (!price) throw new DomainError('not-found', 'There is no such price in this studio.')
   return price
 }
 
@@ -50,7 +51,7 @@ export async function assertPricesInStudio(studioId: number, ingredients: { pric
   if (!ids.length) return
   const found = await Price.count({ where: { id: ids, studioId } })
   if (found !== ids.length) {
-    throw createError({ statusCode: 400, statusMessage: 'ingredients.priceId: an ingredient links to a price that is not in this studio\'s price list.', data: { field: 'ingredients.priceId' } })
+    throw new DomainError('invalid', 'ingredients.priceId: an ingredient links to a price that is not in this studio\'s price list.', { field: 'ingredients.priceId' })
   }
 }
 
@@ -77,17 +78,17 @@ export async function importPriceCsv(studioId: number, text: string) {
 export async function readUploadText(event: H3Event, field: string, maxBytes: number): Promise<string> {
   const type = getRequestHeader(event, 'content-type') ?? ''
   const length = Number(getRequestHeader(event, 'content-length') ?? 0)
-  const tooBig = () => createError({ statusCode: 413, statusMessage: `The upload is larger than ${Math.round(maxBytes / 1024)} KB; send a smaller file.` })
+  const tooBig = () => new DomainError('too-large', `The upload is larger than ${Math.round(maxBytes / 1024)} KB; send a smaller file.`)
   if (length > maxBytes) throw tooBig()
   if (type.startsWith('multipart/form-data')) {
     const parts = (await readMultipartFormData(event)) ?? []
     const part = parts.find((p) => p.name === field)
-    if (!part) throw createError({ statusCode: 400, statusMessage: `${field}: attach the file in a form field named "${field}".`, data: { field } })
+    if (!part) throw new DomainError('invalid', `${field}: attach the file in a form field named "${field}".`, { field: field })
     if (part.data.length > maxBytes) throw tooBig()
     return part.data.toString('utf8')
   }
   const raw = await readRawBody(event, 'utf8')
-  if (!raw || !raw.trim()) throw createError({ statusCode: 400, statusMessage: 'body: the upload is empty; paste or attach the file.', data: { field: 'body' } })
+  if (!raw || !raw.trim()) throw new DomainError('invalid', 'body: the upload is empty; paste or attach the file.', { field: 'body' })
   if (Buffer.byteLength(raw) > maxBytes) throw tooBig()
   return raw
 }

@@ -5,6 +5,7 @@ import { Recipe, RecipeIngredient, RecipeStep, Studio } from '../db/models'
 import type { RecipeCreateBody, RecipeUpdateBody } from '../../shared/utils/recipe-schemas'
 import type { StudioAction } from '../../shared/utils/roles'
 import type { RecipeDraft } from '../../shared/types/recipe'
+import { DomainError } from '../../shared/utils/domain-error'
 
 type Loaded = Recipe & { ingredients: RecipeIngredient[]; steps: RecipeStep[] }
 
@@ -101,11 +102,11 @@ export async function saveRecipe(recipeId: number, body: RecipeUpdateBody): Prom
     )
     if (changed === 0) {
       const current = await loadRecipe(recipeId)
-      throw createError({
-        statusCode: 409,
-        statusMessage: `Someone else saved this recipe while you were editing (now version ${current?.version}). Your changes are still in the editor: compare, then save again.`,
-        data: { current },
-      })
+      throw new DomainError(
+        'conflict',
+        `Someone else saved this recipe while you were editing (now version ${current?.version}). Your changes are still in the editor: compare, then save again.`,
+        { data: { current } },
+      )
     }
     await writeParts(recipeId, body)
   })
@@ -123,7 +124,7 @@ export async function deleteRecipe(recipeId: number) {
 export async function studioSettings(studioId: number) {
   await useDb()
   const s = await Studio.findByPk(studioId)
-  if (!s) throw createError({ statusCode: 404, statusMessage: 'There is no such studio.' })
+  if (!s) throw new DomainError('not-found', 'There is no such studio.')
   // Plain values: Sequelize's CreationOptional brand must not reach the pages through the API types.
   return {
     id: s.id, name: s.name, locale: s.locale as string, currency: s.currency as string,
@@ -139,13 +140,13 @@ export async function readRecipeImport(studioId: number, text: string) {
   try {
     imported = importSchemaOrgRecipe(text, { cups: settings.cupUnit === 'metric-cup' ? 'metric' : 'us' })
   } catch (error) {
-    if (error instanceof RecipeImportError) throw createError({ statusCode: 400, statusMessage: `body: ${error.message}`, data: { field: 'body' } })
+    if (error instanceof RecipeImportError) throw new DomainError('invalid', `body: ${error.message}`, { field: 'body' })
     throw error
   }
   const parsed = recipeCreateSchema.safeParse(imported.recipe)
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!
-    throw createError({ statusCode: 422, statusMessage: `The recipe was read, but ${issue.path.join('.')}: ${issue.message}`, data: { field: issue.path.join('.'), draft: imported.recipe, problems: imported.problems } })
+    throw new DomainError('invalid', `The recipe was read, but ${issue.path.join('.')}: ${issue.message}`, { data: { field: issue.path.join('.'), draft: imported.recipe, problems: imported.problems } })
   }
   return { draft: imported.recipe, body: parsed.data, problems: imported.problems, images: imported.images }
 }

@@ -2,6 +2,7 @@
 // a scaled-out deployment would move them to the shared store). A tripped limit is a 429 that says
 // when to try again, with a Retry-After header.
 import type { H3Event } from 'h3'
+import { DomainError } from '../../shared/utils/domain-error'
 
 interface Window {
   count: number
@@ -31,7 +32,7 @@ export function assertUnderLimit(event: H3Event, key: string, limit: number, wha
     const seconds = Math.max(1, Math.ceil((w.resetAt - now) / 1000))
     setResponseHeader(event, 'Retry-After', seconds)
     const wait = seconds >= 90 ? `${Math.ceil(seconds / 60)} minutes` : `${seconds} seconds`
-    throw createError({ statusCode: 429, statusMessage: `Too many ${what}. Try again in ${wait}.`, data: { retryAfterSeconds: seconds } })
+    throw new DomainError('too-many', `Too many ${what}. Try again in ${wait}.`, { data: { retryAfterSeconds: seconds } })
   }
 }
 

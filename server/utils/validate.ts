@@ -1,15 +1,29 @@
-// Request validation with zod: a 400 whose message names the field and says what to fix.
+// Request validation with zod: a refusal ('invalid', 400) whose message names the field and says
+// what to fix.
 import type { H3Event } from 'h3'
 import type { z } from 'zod'
+import { DomainError } from '../../shared/utils/domain-error'
 
 function fail(error: z.ZodError): never {
   const issue = error.issues[0]
   const field = issue?.path.join('.') || 'body'
-  throw createError({
-    statusCode: 400,
-    statusMessage: `${field}: ${issue?.message ?? 'is not valid'}`,
-    data: { field, issues: error.issues.map((i) => ({ field: i.path.join('.') || 'body', message: i.message })) },
+  throw new DomainError('invalid', `${field}: ${issue?.message ?? 'is not valid'}`, {
+    field,
+    data: { issues: error.issues.map((i) => ({ field: i.path.join('.') || 'body', message: i.message })) },
   })
+}
+
+/** The request body, which must be a JSON object (an empty body counts as `{}`). */
+export async function readJsonObject(event: H3Event): Promise<Record<string, unknown>> {
+  let body: unknown
+  try {
+    body = await readBody(event)
+  } catch {
+    throw new DomainError('invalid', 'body: send a JSON object (the body could not be read as JSON).', { field: 'body' })
+  }
+  if (body === undefined || body === null || body === '') return {}
+  if (typeof body !== 'object' || Array.isArray(body)) throw new DomainError('invalid', 'body: send a JSON object.', { field: 'body' })
+  return body as Record<string, unknown>
 }
 
 export async function validateBody<S extends z.ZodType>(event: H3Event, schema: S): Promise<z.output<S>> {
@@ -17,7 +31,7 @@ export async function validateBody<S extends z.ZodType>(event: H3Event, schema: 
   try {
     body = await readBody(event)
   } catch {
-    throw createError({ statusCode: 400, statusMessage: 'body: send a JSON object (the body could not be read as JSON).' })
+    throw new DomainError('invalid', 'body: send a JSON object (the body could not be read as JSON).', { field: 'body' })
   }
   const parsed = schema.safeParse(body ?? {})
   if (!parsed.success) fail(parsed.error)
@@ -35,7 +49,7 @@ export function routeId(event: H3Event, name: string): number {
   const raw = getRouterParam(event, name)
   const id = Number(raw)
   if (!raw || !Number.isSafeInteger(id) || id <= 0) {
-    throw createError({ statusCode: 400, statusMessage: `${name}: must be a positive whole number, got "${String(raw).slice(0, 40)}".` })
+    throw new DomainError('invalid', `${name}: must be a positive whole number, got "${String(raw).slice(0, 40)}".`, { field: name })
   }
   return id
 }

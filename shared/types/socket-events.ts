@@ -1,5 +1,6 @@
 // The socket.io event map, shared by the server plugin and the client store.
-import type { ShootCommandError, ShootEvent, ShootState } from './shoot'
+import type { ShootEvent, ShootState } from './shoot'
+import type { Refusal } from '../utils/domain-error'
 import type { StepTextSegment } from '../utils/step-text'
 
 export interface ShootInfo {
@@ -72,7 +73,8 @@ export interface ShootEventMessage {
   sentAt?: number
 }
 
-export type SocketAck<T> = ({ ok: true } & T) | { ok: false; error: ShootCommandError | { code: string; message: string } }
+/** Every acknowledgement: the answer, or a refusal in the one shape (shared/utils/domain-error.ts). */
+export type SocketAck<T> = ({ ok: true } & T) | Refusal
 
 export interface ClientToServerEvents {
   'shoot:join': (payload: { shootId: number }, ack: (reply: SocketAck<ShootSnapshot>) => void) => void

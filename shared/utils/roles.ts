@@ -20,9 +20,6 @@ export type StudioAction =
   | 'episode.edit'
   | 'shoot.read'
   | 'shoot.create'
-  | 'shoot.drive'
-  | 'shoot.mark'
-  | 'shoot.roll'
   | 'joincode.manage'
 
 const READ: StudioAction[] = ['studio.read', 'crew.read', 'recipe.read', 'episode.read', 'shoot.read']
@@ -30,15 +27,18 @@ const READ: StudioAction[] = ['studio.read', 'crew.read', 'recipe.read', 'episod
 const ALLOWED: Record<StudioRole, ReadonlySet<StudioAction>> = {
   producer: new Set<StudioAction>([
     ...READ, 'crew.manage', 'mail.read', 'recipe.edit', 'price.edit', 'episode.edit',
-    'shoot.create', 'shoot.drive', 'shoot.mark', 'shoot.roll', 'joincode.manage',
+    'shoot.create', 'joincode.manage',
   ]),
-  host: new Set<StudioAction>([...READ, 'recipe.edit', 'shoot.drive', 'shoot.mark']),
-  camera: new Set<StudioAction>([...READ, 'shoot.mark', 'shoot.roll']),
+  host: new Set<StudioAction>([...READ, 'recipe.edit']),
+  camera: new Set<StudioAction>(READ),
   viewer: new Set<StudioAction>(READ),
 }
 
-/** Actions a device session may take on its one shoot; anything about the studio itself is refused. */
-const DEVICE_SCOPE: ReadonlySet<StudioAction> = new Set<StudioAction>(['shoot.read', 'shoot.drive', 'shoot.mark', 'shoot.roll', 'recipe.read', 'episode.read'])
+/**
+ * Actions a device session may take on its one shoot; anything about the studio itself is refused.
+ * Which shoot command a role may send is the table in shoot-commands.ts, decided by the engine.
+ */
+const DEVICE_SCOPE: ReadonlySet<StudioAction> = new Set<StudioAction>(['shoot.read', 'recipe.read', 'episode.read'])
 
 export function roleCan(role: StudioRole, action: StudioAction): boolean {
   return ALLOWED[role]?.has(action) ?? false

@@ -3,7 +3,8 @@
 // through applyShootCommand (shoot-reducer.ts), which first checks the command's shape with zod;
 // screens apply their own commands with it directly for optimistic feedback.
 //
-// Order of checks: the sender's role, the shoot having ended, then the command against the state.
+// Order of checks: the shoot having ended, then the command against the state. Who may send which
+// command is decided once, before this, by applyShootCommand (shoot-reducer.ts) from the role table.
 // Before a command applies, timers whose deadline has passed are marked due, so a command never
 // acts on a timer that has in fact already rung.
 import {
@@ -11,11 +12,11 @@ import {
   type ShootActor, type ShootApplyResult, type ShootCommand, type ShootCommandContext, type ShootCommandError,
   type ShootCommandOf, type ShootCursor, type ShootErrorCode, type ShootEvent, type ShootState, type ShootTimer,
 } from '../types/shoot'
-import { shootCommandAllowed, shootCommandForbiddenMessage } from './shoot-commands'
 import { shootClockAt, shootClockAtSpeed, shootClockStarted, shootClockStopped } from './shoot-clock'
 import {
   isShootTimerLive, markDueTimers, shootTimerDueAt, shootTimerPausedAt, shootTimerRunningFrom, timerRemainingMs,
 } from './shoot-timers'
+import { clockTextMs } from './clock-text'
 import { shootCursorMoved, shootCursorRef, shootSegmentPositions, shootStepRefAt } from './shoot'
 
 type Failure = { ok: false; error: ShootCommandError }
@@ -30,8 +31,6 @@ const isFailure = (o: Outcome): o is Failure => 'ok' in o
 export function applyKnownShootCommand(state: ShootState, command: ShootCommand, ctx: ShootCommandContext): ShootApplyResult {
   const now = ctx?.nowServerMs
   if (typeof now !== 'number' || !Number.isFinite(now)) return fail('invalid', 'nowServerMs: the server time must be a finite number of ms', 'nowServerMs')
-  const role = ctx.actor?.role
-  if (!shootCommandAllowed(role, command.type)) return fail('forbidden', shootCommandForbiddenMessage(role, command.type))
   if (state.status === 'ended') return fail('shoot-ended', 'This shoot has ended, so nothing in it can change; start a new shoot to go again.')
 
   const marked = markDueTimers(state, now)
@@ -137,7 +136,7 @@ function resumeShoot(s: ShootState, now: number): Outcome {
 function endShoot(s: ShootState, cmd: ShootCommandOf<'shoot.end'>, now: number): Outcome {
   const live = s.timers.filter(isShootTimerLive)
   if (live.length > 0 && !cmd.cancelTimers) {
-    const list = live.map((t) => `"${t.label}" (${t.state === 'due' ? 'ringing' : `${clockText(timerRemainingMs(t, now))} left`})`).join(', ')
+    const list = live.map((t) => `"${t.label}" (${t.state === 'due' ? 'ringing' : `${clockTextMs(timerRemainingMs(t, now))} left`})`).join(', ')
     return fail('timers-active', `${live.length === 1 ? '1 timer still needs' : `${live.length} timers still need`} attention: ${list}. `
       + 'Acknowledge or cancel them first, or end with cancelTimers to cancel them all.')
   }
@@ -361,7 +360,7 @@ function acknowledgeTimer(s: ShootState, cmd: ShootCommandOf<'timer.acknowledge'
   const closed = closedFailure(t)
   if (closed) return closed
   if (t.state !== 'due') {
-    return fail('timer-not-due', `"${t.label}" has ${clockText(timerRemainingMs(t, now))} left and is not ringing; cancel it to stop it early.`)
+    return fail('timer-not-due', `"${t.label}" has ${clockTextMs(timerRemainingMs(t, now))} left and is not ringing; cancel it to stop it early.`)
   }
   return replaceTimer(s, { ...t, state: 'acknowledged', acknowledgedBy: actorOf(ctx), acknowledgedAtServerMs: now })
 }
@@ -403,11 +402,3 @@ function addMarker(s: ShootState, cmd: ShootCommandOf<'marker.add'>, ctx: ShootC
   return { state: { ...s, markers: [...s.markers, marker] }, events: [{ type: 'marker.added', markerId: id, kind: cmd.kind }] }
 }
 
-/** m:ss (or h:mm:ss) of kitchen time, for messages; rounds up so "0:00 left" never shows early. */
-function clockText(ms: number): string {
-  const total = Math.ceil(Math.max(0, ms) / 1000)
-  const h = Math.floor(total / 3600)
-  const m = Math.floor((total % 3600) / 60)
-  const sec = String(total % 60).padStart(2, '0')
-  return h > 0 ? `${h}:${String(m).padStart(2, '0')}:${sec}` : `${m}:${sec}`
-}

@@ -1,5 +1,6 @@
-// Who may send which shoot command (reading one from the wire is shoot-schema.ts). The server enforces
-// both; the screens use the same table to show only the controls a role may use.
+// Who may send which shoot command: the one table. The server decides with it once, in
+// applyShootCommand (shoot-reducer.ts), which the engine calls for every command; the screens read
+// it only to show the controls a role may use. Reading a command from the wire is shoot-schema.ts.
 import { SHOOT_COMMAND_TYPES, type ShootCommandType, type ShootRole } from '../types/shoot'
 
 const DRIVE: ShootRole[] = ['producer', 'host']
@@ -70,4 +71,10 @@ export function shootCommandForbiddenMessage(role: ShootRole | string, commandTy
   const list = allowed.length > 1 ? `${allowed.slice(0, -1).join(', ')} or ${allowed.at(-1)}` : allowed[0]
   const text = `${who} may not ${SHOOT_COMMAND_PHRASES[commandType]}; ${list} may`
   return text.charAt(0).toUpperCase() + text.slice(1) + '.'
+}
+
+/** The refusal for a role that may not send a command, or null when it may (or the type is unknown). */
+export function shootCommandRefusal(role: ShootRole | string | undefined, type: unknown): { code: 'forbidden'; message: string } | null {
+  if (!isShootCommandType(type) || shootCommandAllowed(role ?? '', type)) return null
+  return { code: 'forbidden', message: shootCommandForbiddenMessage(role ?? 'viewer', type) }
 }

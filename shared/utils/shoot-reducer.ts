@@ -1,10 +1,10 @@
 // The shoot reducer: (state, command from anywhere) → new state | error. Pure. The server applies
 // every command with it; the rules themselves are in shoot-apply.ts.
 //
-// Order of checks: the sender's role, the command's shape (zod, shoot-schema.ts), the shoot having
+// Order of checks: the sender's role (the one permission check of shoot commands), the command's shape (zod, shoot-schema.ts), the shoot having
 // ended, then the command against the state (shoot-apply.ts).
 import type { ShootApplyResult, ShootCommand, ShootCommandContext, ShootState } from '../types/shoot'
-import { isShootCommandType, shootCommandAllowed, shootCommandForbiddenMessage } from './shoot-commands'
+import { shootCommandRefusal } from './shoot-commands'
 import { parseShootCommand } from './shoot-schema'
 import { applyKnownShootCommand } from './shoot-apply'
 
@@ -14,9 +14,9 @@ export function applyShootCommand(state: ShootState, command: ShootCommand | unk
   if (typeof now !== 'number' || !Number.isFinite(now)) {
     return { ok: false, error: { code: 'invalid', message: 'nowServerMs: the server time must be a finite number of ms', field: 'nowServerMs' } }
   }
-  const type = (command as { type?: unknown } | null)?.type
-  const role = ctx.actor?.role
-  if (isShootCommandType(type) && !shootCommandAllowed(role, type)) return { ok: false, error: { code: 'forbidden', message: shootCommandForbiddenMessage(role, type) } }
+  // The one place that decides which role may send which command (the table in shoot-commands.ts).
+  const forbidden = shootCommandRefusal(ctx.actor?.role, (command as { type?: unknown } | null)?.type)
+  if (forbidden) return { ok: false, error: forbidden }
   const parsed = parseShootCommand(command)
   if (!parsed.ok) return parsed
   return applyKnownShootCommand(state, parsed.command, ctx)

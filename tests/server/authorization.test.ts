@@ -53,8 +53,9 @@ const rows: Row[] = [
   { file: 'shoots/[id]/join-codes/index.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/join-codes`, body: () => ({ role: 'camera' }), expect: shoot(201, 403, 403, 403, 403, 403) },
   { file: 'shoots/[id]/join-codes/[codeId].delete.ts', method: 'DELETE', path: (i) => `/api/shoots/${i.shoot}/join-codes/999999`, expect: shoot(404, 403, 403, 403, 403, 403) },
   { file: 'episodes/[id]/shoots.post.ts', method: 'POST', path: (i) => `/api/episodes/${i.episode}/shoots`, body: () => ({ mode: 'rehearsal' }), expect: studio(201, 403, 403, 403) },
-  // A host or camera command on a shoot made without a run order: the guard passes, the shoot refuses (409).
-  { file: 'shoots/[id]/commands.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/commands`, body: () => ({ type: 'rolling.set', rolling: true }), expect: shoot(409, 403, 409, 403, 403, 409) },
+  // Rolling is the producer's and the camera's (the role table of shoot commands): they get past it to
+  // the shoot, which refuses a camera that is not rolling to stop rolling (409); host and viewer get 403.
+  { file: 'shoots/[id]/commands.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/commands`, body: () => ({ type: 'rolling.set', rolling: false }), expect: shoot(409, 403, 409, 403, 403, 409) },
   { file: 'join.post.ts', method: 'POST', path: () => '/api/join', body: () => ({ code: 'QQQ-QQQ' }), expect: all(404) },
   { file: 'studios/[studioId]/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}`, expect: studio(200, 200, 200, 200) },
   { file: 'studios/[studioId]/index.patch.ts', method: 'PATCH', path: (i) => `/api/studios/${i.studio}`, body: () => ({ unitSystem: 'metric' }), expect: studio(200, 403, 403, 403) },

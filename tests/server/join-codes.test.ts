@@ -32,7 +32,7 @@ describe('join codes', async () => {
     expect(joined.body).toMatchObject({ shootId, role: 'camera', next: `/shoots/${shootId}/cue` })
     const shoot = await tablet.get(`/api/shoots/${shootId}`)
     expect(shoot.status).toBe(200)
-    expect(shoot.body.you).toEqual({ kind: 'device', role: 'camera' })
+    expect(shoot.body.you).toMatchObject({ kind: 'device', role: 'camera' })
     // Nothing else: not another shoot, not the studio, not the join codes.
     expect((await tablet.get(`/api/shoots/${otherShootId}`)).status).toBe(403)
     expect((await tablet.get(`/api/studios/${studioId}/members`)).status).toBe(403)

@@ -1,4 +1,5 @@
 // Public. Failed attempts are limited per e-mail and per address; a success clears the e-mail's count.
+import { DomainError } from '../../../shared/utils/domain-error'
 export default defineEventHandler(async (event) => {
   const { email, password } = await validateBody(event, loginBodySchema)
   const limits = useRuntimeConfig().auth
@@ -10,7 +11,7 @@ export default defineEventHandler(async (event) => {
   if (!user) {
     countAttempt(byEmail)
     countAttempt(byAddress)
-    throw createError({ statusCode: 401, statusMessage: 'That e-mail and password do not match an account. Check both, or reset the password.' })
+    throw new DomainError('signed-out', 'That e-mail and password do not match an account. Check both, or reset the password.')
   }
   clearAttempts(byEmail)
   await startMemberSession(event, user)

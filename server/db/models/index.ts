@@ -4,16 +4,15 @@ import { Episode, EpisodeSegment, initEpisodeModels } from './episode'
 import { Invite, Membership, PasswordReset, User, initAccountModels } from './account'
 import { Mail, initMailModel } from './mail'
 import { Price, Recipe, RecipeIngredient, RecipeStep, initRecipeModels } from './recipe'
-import { JoinCode, Shoot, ShootEvent, initShootEventModel, initShootModels } from './shoot'
+import { JoinCode, initJoinCodeModel } from './join-code'
 import { Studio, initStudio } from './studio'
 
-export { Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, ShootEvent, Recipe, RecipeIngredient, RecipeStep, Shoot, Studio, User }
+export { Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, Recipe, RecipeIngredient, RecipeStep, Studio, User }
 
 export function initModels(sequelize: Sequelize) {
   initStudio(sequelize)
   initAccountModels(sequelize)
-  initShootModels(sequelize)
-  initShootEventModel(sequelize)
+  initJoinCodeModel(sequelize)
   initMailModel(sequelize)
   initRecipeModels(sequelize)
   initEpisodeModels(sequelize)
@@ -23,6 +22,5 @@ export function initModels(sequelize: Sequelize) {
   Studio.hasMany(Membership, { foreignKey: 'studioId', as: 'memberships' })
   Membership.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' })
   Invite.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' })
-  JoinCode.belongsTo(Shoot, { foreignKey: 'shootId', as: 'shoot' })
   Mail.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' })
 }

@@ -1,4 +1,4 @@
 export default defineEventHandler(async (event) => {
   const { shootId } = await requireShoot(event, 'joincode.manage')
-  return { codes: await listJoinCodes(event, shootId) }
+  return { codes: await listJoinCodes(siteUrl(event), shootId) }
 })

@@ -1,7 +1,7 @@
 export default defineEventHandler(async (event) => {
   const caller = await requireShoot(event, 'joincode.manage')
   const { role, minutes } = await validateBody(event, joinCodeBodySchema)
-  const code = await createJoinCode(event, caller.shootId, role, caller.kind === 'member' ? caller.user.id : 0, minutes)
+  const code = await createJoinCode(siteUrl(event), caller.shootId, role, caller.kind === 'member' ? caller.user.id : 0, minutes)
   setResponseStatus(event, 201)
   return code
 })

@@ -1,0 +1,117 @@
+// The live shoot's engine: one command is authorised (the role table in shoot-commands.ts, through
+// applyShootCommand), reduced, persisted with its sequence number in one transaction, and
+// broadcast to the shoot's room. The latest state of each shoot that has not ended is kept in
+// memory for the ticker; the database is what counts (a restart reloads it, and timers that fell
+// due while the server was down fire at once).
+import { randomUUID } from 'node:crypto'
+import type { ShootActor, ShootMode, ShootSegment, ShootState } from '../../shared/types/shoot'
+import type { ShootEventMessage } from '../../shared/types/socket-events'
+import { DomainError, type DomainErrorBody } from '../../shared/utils/domain-error'
+import { createShootState } from '../../shared/utils/shoot'
+import { applyShootCommand } from '../../shared/utils/shoot-reducer'
+import { markDueTimers } from '../../shared/utils/shoot-timers'
+import type { ShootRow, ShootStore } from './store'
+
+export type CommandOutcome = { ok: true; seq: number } | { ok: false; error: DomainErrorBody }
+
+export interface ShootEngineOptions {
+  store: ShootStore
+  /** Hands an accepted change to every screen on the shoot. */
+  broadcast: (shootId: number, message: ShootEventMessage) => void
+  now?: () => number
+  newId?: () => string
+}
+
+export interface NewShootInput {
+  studioId: number
+  episodeId: number | null
+  title: string
+  mode: ShootMode
+  createdBy: number | null
+  runOrder: ShootSegment[]
+}
+
+export type ShootEngine = ReturnType<typeof createShootEngine>
+
+export function createShootEngine({ store, broadcast, now = Date.now, newId = () => randomUUID().slice(0, 12) }: ShootEngineOptions) {
+  const live = new Map<number, ShootState>()
+
+  const remember = (shootId: number, state: ShootState) => {
+    if (state.status === 'ended') live.delete(shootId)
+    else live.set(shootId, state)
+  }
+  const send = (message: ShootEventMessage | null) => {
+    if (!message) return
+    remember(message.shootId, message.state)
+    broadcast(message.shootId, message)
+  }
+  const stateOf = (row: ShootRow | null, shootId: number): ShootState => {
+    if (!row) throw new DomainError('not-found', 'There is no such shoot.')
+    remember(shootId, row.state)
+    return row.state
+  }
+
+  return {
+    async create(input: NewShootInput): Promise<ShootRow> {
+      if (!input.runOrder.length) throw new DomainError('invalid', 'The episode has no segments yet. Add a recipe to it before shooting.')
+      const row = await store.create({ ...input, state: (id) => createShootState({ id: String(id), mode: input.mode, runOrder: input.runOrder }) })
+      remember(row.id, row.state)
+      return row
+    },
+
+    /** The shoot as stored; a DomainError 'not-found' when there is none. */
+    async read(shootId: number): Promise<ShootRow> {
+      const row = await store.read(shootId)
+      stateOf(row, shootId)
+      return row!
+    },
+
+    /** Applies one command from `actor` (a member or device already let into the shoot). */
+    async apply(shootId: number, command: unknown, actor: ShootActor): Promise<CommandOutcome> {
+      let message: ShootEventMessage | null = null
+      const outcome = await store.transaction(async (tx): Promise<CommandOutcome> => {
+        const state = stateOf(await tx.read(shootId), shootId)
+        const at = now()
+        const result = applyShootCommand(state, command, { nowServerMs: at, actor, newId })
+        if (!result.ok) return { ok: false, error: result.error }
+        const type = (command as { type: string }).type
+        await tx.write(shootId, result.state, { type, command, actor, serverMs: at })
+        message = { shootId, seq: result.state.seq, type, by: actor, events: result.events, state: result.state, serverNow: at }
+        return { ok: true, seq: result.state.seq }
+      })
+      send(message)
+      return outcome
+    },
+
+    /** Marks due every timer whose deadline has passed on a live shoot, persists and broadcasts it. */
+    async tick(): Promise<number> {
+      const at = now()
+      const candidates = [...live.entries()]
+        .filter(([, s]) => s.timers.some((t) => t.state === 'running' && t.deadlineServerMs !== null && t.deadlineServerMs <= at))
+      for (const [shootId] of candidates) {
+        let message: ShootEventMessage | null = null
+        await store.transaction(async (tx) => {
+          const row = await tx.read(shootId)
+          if (!row) return live.delete(shootId)
+          const t = now()
+          const { state: next, due } = markDueTimers(row.state, t)
+          if (!due.length) return
+          await tx.write(shootId, next, { type: 'timer.due', command: { type: 'timer.due', timerIds: due.map((d) => d.id) }, actor: null, serverMs: t })
+          message = {
+            shootId, seq: next.seq, type: 'timer.due', by: null, serverNow: t, state: next,
+            events: due.map((d) => ({ type: 'timer.due' as const, timerId: d.id, label: d.label, slot: d.slot, sound: d.sound, dueAtServerMs: d.dueAtServerMs ?? t })),
+          }
+        })
+        send(message)
+      }
+      return candidates.length
+    },
+
+    /** Loads every shoot that has not ended, so the ticker watches their timers (at start-up). */
+    async loadLive(): Promise<number> {
+      const rows = await store.live()
+      for (const r of rows) remember(r.id, r.state)
+      return rows.length
+    },
+  }
+}

@@ -1,0 +1,177 @@
+// The only code that reads or writes the `shoots` and `shoot_events` tables. One sqlite3
+// connection of its own, kept open (Sequelize would open one per transaction, which costs more
+// than a shoot command's work), and every job on it runs after the one before, through the
+// process's one write queue (server/db/write-queue.ts), so a command never interleaves with
+// another or with a Sequelize transaction elsewhere. Plain Node: no Nitro, so tests open it on a
+// temporary file.
+import sqlite3 from 'sqlite3'
+import { BUSY_TIMEOUT_MS } from '../db/connection'
+import { queueWrite } from '../db/write-queue'
+import type { ShootActor, ShootMode, ShootState } from '../../shared/types/shoot'
+
+export interface ShootRow {
+  id: number
+  studioId: number
+  episodeId: number | null
+  title: string
+  mode: ShootMode
+  status: string
+  seq: number
+  state: ShootState
+  createdBy: number | null
+}
+
+/** One accepted command (or the server's own timer.due), as the event log keeps it. */
+export interface ShootLogEntry {
+  type: string
+  command: unknown
+  actor: ShootActor | null
+  serverMs: number
+}
+
+export interface NewShoot {
+  studioId: number
+  episodeId: number | null
+  title: string
+  mode: ShootMode
+  createdBy: number | null
+  /** The first state, made once the row's id is known. */
+  state: (id: number) => ShootState
+}
+
+/** What a job may do inside its transaction. */
+export interface ShootTx {
+  read(shootId: number): Promise<ShootRow | null>
+  write(shootId: number, next: ShootState, entry: ShootLogEntry): Promise<void>
+}
+
+export interface ShootStore {
+  create(input: NewShoot): Promise<ShootRow>
+  read(shootId: number): Promise<ShootRow | null>
+  studioOf(shootId: number): Promise<number | null>
+  /** Shoots that have not ended: the ticker watches their timers. */
+  live(): Promise<ShootRow[]>
+  /** The event log of a shoot, in sequence order. */
+  events(shootId: number): Promise<Array<ShootLogEntry & { seq: number }>>
+  /** BEGIN IMMEDIATE … COMMIT around `fn` (ROLLBACK when it throws), after every earlier job. */
+  transaction<T>(fn: (tx: ShootTx) => Promise<T>): Promise<T>
+  close(): Promise<void>
+}
+
+type Raw = {
+  id: number; studio_id: number; episode_id: number | null; title: string; mode: ShootMode; status: string
+  seq: number; state: string; created_by: number | null
+}
+
+const COLUMNS = 'id, studio_id, episode_id, title, mode, status, seq, state, created_by'
+
+function toRow(r: Raw): ShootRow {
+  return {
+    id: r.id, studioId: r.studio_id, episodeId: r.episode_id ?? null, title: r.title, mode: r.mode,
+    status: r.status, seq: r.seq, state: JSON.parse(r.state) as ShootState, createdBy: r.created_by ?? null,
+  }
+}
+
+/** The timestamp format the rest of the database uses (Sequelize's for SQLite). */
+export function sqliteStamp(ms: number): string {
+  return new Date(ms).toISOString().replace('T', ' ').replace('Z', ' +00:00')
+}
+
+function open(path: string): Promise<sqlite3.Database> {
+  return new Promise((resolve, reject) => {
+    const conn = new sqlite3.Database(path, sqlite3.OPEN_READWRITE, (err) => {
+      if (err) return reject(err)
+      conn.configure('busyTimeout', BUSY_TIMEOUT_MS)
+      // As connection.ts sets Sequelize's: foreign keys, and with WAL a commit that survives a
+      // crashed process without an fsync each time.
+      conn.exec('PRAGMA foreign_keys = ON; PRAGMA synchronous = NORMAL;', (e) => (e ? reject(e) : resolve(conn)))
+    })
+  })
+}
+
+/** `ready` is awaited before the file is first opened (the migrations that make its tables). */
+export function openShootStore(path: string, ready: () => Promise<unknown> = async () => {}): ShootStore {
+  let db: Promise<sqlite3.Database> | undefined
+  const conn = () => (db ??= ready().then(() => open(path)))
+  const run = async (sql: string, params: unknown[] = []) => {
+    const c = await conn()
+    return new Promise<number>((resolve, reject) =>
+      c.run(sql, params, function (this: sqlite3.RunResult, err) { return err ? reject(err) : resolve(this.lastID) }))
+  }
+  const get = async <T>(sql: string, params: unknown[] = []) => {
+    const c = await conn()
+    return new Promise<T | undefined>((resolve, reject) => c.get(sql, params, (err, row) => (err ? reject(err) : resolve(row as T | undefined))))
+  }
+  const all = async <T>(sql: string, params: unknown[] = []) => {
+    const c = await conn()
+    return new Promise<T[]>((resolve, reject) => c.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as T[]))))
+  }
+
+  const read = async (shootId: number) => {
+    const r = await get<Raw>(`SELECT ${COLUMNS} FROM shoots WHERE id = ?`, [shootId])
+    return r ? toRow(r) : null
+  }
+  const tx: ShootTx = {
+    read,
+    async write(shootId, next, entry) {
+      const stamp = sqliteStamp(entry.serverMs)
+      await run('UPDATE shoots SET state = ?, seq = ?, status = ?, mode = ?, updated_at = ? WHERE id = ?',
+        [JSON.stringify(next), next.seq, next.status, next.mode, stamp, shootId])
+      await run('INSERT INTO shoot_events (shoot_id, seq, type, command, actor, server_ms, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)',
+        [shootId, next.seq, entry.type, JSON.stringify(entry.command), JSON.stringify(entry.actor), entry.serverMs, stamp])
+    },
+  }
+  // Jobs on this one connection run one after another: a read between a transaction's BEGIN and
+  // COMMIT would see its writes before they are committed. Reads wait only for this connection;
+  // transactions also take their turn in the process's write queue.
+  let chain: Promise<unknown> = Promise.resolve()
+  const queued = <T>(fn: () => Promise<T>): Promise<T> => {
+    const next = chain.then(fn, fn)
+    chain = next.catch(() => {})
+    return next
+  }
+
+  function transaction<T>(fn: (t: ShootTx) => Promise<T>): Promise<T> {
+    return queueWrite(() => queued(async () => {
+      await run('BEGIN IMMEDIATE')
+      try {
+        const result = await fn(tx)
+        await run('COMMIT')
+        return result
+      } catch (error) {
+        await run('ROLLBACK').catch(() => {})
+        throw error
+      }
+    }))
+  }
+
+  return {
+    transaction,
+    read: (shootId) => queued(() => read(shootId)),
+    async studioOf(shootId) {
+      const r = await queued(() => get<{ studio_id: number }>('SELECT studio_id FROM shoots WHERE id = ?', [shootId]))
+      return r?.studio_id ?? null
+    },
+    live: () => queued(async () => (await all<Raw>(`SELECT ${COLUMNS} FROM shoots WHERE status IN ('ready', 'running', 'paused')`)).map(toRow)),
+    events: (shootId) => queued(async () => (await all<{ seq: number; type: string; command: string; actor: string; server_ms: number }>(
+      'SELECT seq, type, command, actor, server_ms FROM shoot_events WHERE shoot_id = ? ORDER BY seq', [shootId],
+    )).map((e) => ({ seq: e.seq, type: e.type, command: JSON.parse(e.command), actor: JSON.parse(e.actor), serverMs: Number(e.server_ms) }))),
+    create(input) {
+      return transaction(async () => {
+        const stamp = sqliteStamp(Date.now())
+        const id = await run(
+          'INSERT INTO shoots (studio_id, episode_id, title, mode, status, state, seq, created_by, created_at, updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
+          [input.studioId, input.episodeId, input.title, input.mode, 'ready', '{}', 0, input.createdBy, stamp, stamp],
+        )
+        const state = input.state(id)
+        await run('UPDATE shoots SET state = ?, seq = ?, status = ? WHERE id = ?', [JSON.stringify(state), state.seq, state.status, id])
+        return (await read(id))!
+      })
+    },
+    async close() {
+      const c = await db
+      db = undefined
+      await new Promise<void>((resolve) => (c ? c.close(() => resolve()) : resolve()))
+    },
+  }
+}

@@ -1,0 +1,49 @@
+// The live shoot inside the app: one socket.io server, one shoot store on the database file, the
+// handlers every screen's request goes through, and the ticker. Made once, on first use; the
+// socket plugin mounts it and the routes under server/api/shoots/ call its handlers.
+import type { H3Event } from 'h3'
+import { Server } from 'socket.io'
+import type { ClientToServerEvents, ServerToClientEvents } from '../../shared/types/socket-events'
+import { DomainError } from '../../shared/utils/domain-error'
+import { createShootHandlers, type ShootConnection } from '../shoot/handlers'
+import { createPresence } from '../shoot/presence'
+import { createScriptCache } from '../shoot/script'
+import { openShootStore } from '../shoot/store'
+
+export const shootRoom = (shootId: number) => `shoot:${shootId}`
+
+function createLiveShoot() {
+  const io = new Server<ClientToServerEvents, ServerToClientEvents>({ serveClient: false })
+  const store = openShootStore(getDatabaseHandle()!.path, () => useDb())
+  const script = createScriptCache()
+  const handlers = createShootHandlers({
+    store,
+    presence: createPresence(),
+    script,
+    authorize: (session, shootId) => authorizeSession(session, { shootId }, 'shoot.read'),
+    broadcast: {
+      // `sentAt` (wall clock, sub-millisecond) lets a screen and the benchmark see how long delivery took.
+      event: (shootId, message) => io.to(shootRoom(shootId)).emit('shoot:event', { ...message, sentAt: performance.timeOrigin + performance.now() }),
+      presence: (shootId, presence) => io.to(shootRoom(shootId)).emit('shoot:presence', { shootId, ...presence }),
+    },
+  })
+  return { io, store, script, handlers }
+}
+
+let live: ReturnType<typeof createLiveShoot> | undefined
+
+export function useShoot() {
+  return (live ??= createLiveShoot())
+}
+
+/** The connection of one HTTP request: its session, no room. */
+export async function httpConnection(event: H3Event): Promise<ShootConnection> {
+  return { id: 'http', session: await getUserSession(event) }
+}
+
+/** A handler's answer over HTTP: its value, or its refusal thrown for the error handler to send. */
+export function httpAnswer<T extends object>(result: ({ ok: true } & T) | { ok: false; error: { code: string; message: string; field?: string } }): T {
+  if (!result.ok) throw new DomainError(result.error.code, result.error.message, { field: result.error.field })
+  const { ok: _ok, ...value } = result
+  return value as unknown as T
+}
