@@ -7,7 +7,9 @@ import { Price, Recipe, RecipeIngredient, RecipeStep, initRecipeModels } from '.
 import { JoinCode, Shoot, ShootEvent, initShootEventModel, initShootModels } from './shoot'
 import { Studio, initStudio } from './studio'
 
-export { Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, ShootEvent, Recipe, RecipeIngredient, RecipeStep, Shoot, Studio, User }
+export {
+  Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, ShootEvent, Recipe, RecipeIngredient, RecipeStep, Shoot, Studio, User,
+}
 
 export function initModels(sequelize: Sequelize) {
   initStudio(sequelize)

@@ -63,7 +63,10 @@ export class ShootEvent extends Model<InferAttributes<ShootEvent>, InferCreation
 
 export function initShootEventModel(sequelize: Sequelize) {
   ShootEvent.init(
-    { id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true }, shootId: DataTypes.INTEGER, seq: DataTypes.INTEGER, type: DataTypes.STRING(32), command: DataTypes.TEXT, actor: DataTypes.TEXT, serverMs: DataTypes.BIGINT, createdAt: DataTypes.DATE },
+    {
+      id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true }, shootId: DataTypes.INTEGER, seq: DataTypes.INTEGER,
+      type: DataTypes.STRING(32), command: DataTypes.TEXT, actor: DataTypes.TEXT, serverMs: DataTypes.BIGINT, createdAt: DataTypes.DATE,
+    },
     { sequelize, tableName: 'shoot_events', underscored: true, updatedAt: false },
   )
 }
