@@ -20,7 +20,12 @@ export function shouldSeed(policy: string, dev: boolean): boolean {
   return dev
 }
 
-export async function startDatabase(path: string, seed: boolean, hashPassword: PasswordHasher = hashPasswordOutsideNitro, storePhoto?: DemoPhotoStore): Promise<StartedDatabase> {
+export async function startDatabase(
+  path: string,
+  seed: boolean,
+  hashPassword: PasswordHasher = hashPasswordOutsideNitro,
+  storePhoto?: DemoPhotoStore,
+): Promise<StartedDatabase> {
   const sequelize = await openDatabase(path)
   initModels(sequelize)
   const migrations = await migrate(sequelize)

@@ -14,7 +14,10 @@ export async function seedDemoRecipes(studioId: number, currency: string) {
   }
   const recipes: { recipe: Recipe; photo: DemoRecipe['photo'] }[] = []
   for (const demo of demoRecipes) {
-    const recipe = await Recipe.create({ studioId, title: demo.title, summary: demo.summary, servings: demo.servings, yieldText: null, tags: demo.tags, notes: null, times: { prep: null, cook: null, total: null } })
+    const recipe = await Recipe.create({
+      studioId, title: demo.title, summary: demo.summary, servings: demo.servings, yieldText: null, tags: demo.tags, notes: null,
+      times: { prep: null, cook: null, total: null },
+    })
     const keys: string[] = []
     for (const [position, [line, price]] of demo.lines.entries()) {
       const q = parseQuantity(line)
@@ -32,7 +35,8 @@ export async function seedDemoRecipes(studioId: number, currency: string) {
       await RecipeStep.create({
         recipeId: recipe.id, position: position + 1, text: step.text, script: step.script ?? [], handsOn: step.handsOn,
         durationMin: step.minutes ? step.minutes[0] * 60 : null, durationMax: step.minutes ? step.minutes[1] * 60 : null,
-        station: step.station ?? null, after: step.after ?? [], links: step.links ?? [], cameraShot: step.shot ?? null, cameraNote: step.note ?? null, cautions: step.cautions ?? [], group: null,
+        station: step.station ?? null, after: step.after ?? [], links: step.links ?? [],
+        cameraShot: step.shot ?? null, cameraNote: step.note ?? null, cautions: step.cautions ?? [], group: null,
       })
     }
     recipes.push({ recipe, photo: demo.photo })

@@ -2,7 +2,7 @@
 import { url } from '@nuxt/test-utils/e2e'
 import { io, type Socket } from 'socket.io-client'
 import type { ClientToServerEvents, ServerToClientEvents, ShootEventMessage } from '../../shared/types/socket-events'
-import type { Client } from './client'
+import type { Client, Json } from './client'
 
 export type TestSocket = Socket<ServerToClientEvents, ClientToServerEvents> & { received: ShootEventMessage[] }
 
@@ -22,7 +22,7 @@ export function connect(client: Client | null, transport: 'websocket' | 'polling
   })
 }
 
-export function emitAck<T = any>(socket: TestSocket, event: string, payload: unknown): Promise<T> {
+export function emitAck<T = Json>(socket: TestSocket, event: string, payload: unknown): Promise<T> {
   return new Promise((resolve) => (socket as unknown as { emit: (e: string, p: unknown, cb: (r: T) => void) => void }).emit(event, payload, resolve))
 }
 

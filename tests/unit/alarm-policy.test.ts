@@ -65,7 +65,8 @@ describe('alarm output while rolling: quiet on set (product rule (DESIGN.md))', 
   })
   it('with no host on set, moves that fall-back ring to the crew screens that are left', () => {
     for (const role of ['producer', 'camera']) {
-      expect(alarmOutput({ role, rolling: true, audibleWhileRolling: false, audibleElsewhere: false, hostOnSet: false })).toMatchObject({ sound: true, flash: true })
+      const output = alarmOutput({ role, rolling: true, audibleWhileRolling: false, audibleElsewhere: false, hostOnSet: false })
+      expect(output).toMatchObject({ sound: true, flash: true })
       expect(alarmOutput({ role, rolling: true, audibleWhileRolling: false, audibleElsewhere: true, hostOnSet: false })).toMatchObject({ sound: false })
     }
   })

@@ -143,7 +143,10 @@ describe('alarm pitches (Goertzel 1958; ISO 16 A4 = 440 Hz, equal temperament)',
   })
 
   it('finds a pure test tone to within 0.1 Hz (the detector itself)', () => {
-    const x = Float64Array.from({ length: 2000 }, (_, i) => Math.sin((2 * Math.PI * 1000 * i) / ALARM_SAMPLE_RATE) * 0.5 * (1 - Math.cos((2 * Math.PI * i) / 1999)))
+    const x = Float64Array.from(
+      { length: 2000 },
+      (_, i) => Math.sin((2 * Math.PI * 1000 * i) / ALARM_SAMPLE_RATE) * 0.5 * (1 - Math.cos((2 * Math.PI * i) / 1999)),
+    )
     expect(Math.abs(peakHz(x, ALARM_SAMPLE_RATE) - 1000)).toBeLessThan(0.1)
   })
 

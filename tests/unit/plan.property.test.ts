@@ -79,7 +79,9 @@ function constraints(input: PlanInput, recipeOrder: string[] | null): [string, s
   // One recipe at a time: every step of a recipe after every step of the one before it.
   if (recipeOrder) {
     for (let k = 0; k + 1 < recipeOrder.length; k++) {
-      for (const a of input.steps.filter((s) => s.recipe === recipeOrder[k])) for (const b of input.steps.filter((s) => s.recipe === recipeOrder[k + 1])) out.push([a.id, b.id, a.duration])
+      const before = input.steps.filter((s) => s.recipe === recipeOrder[k])
+      const after = input.steps.filter((s) => s.recipe === recipeOrder[k + 1])
+      for (const a of before) for (const b of after) out.push([a.id, b.id, a.duration])
     }
   }
   return out
@@ -90,22 +92,37 @@ function relaxedTimes(input: PlanInput, edges: [string, string, number][]) {
   const es: Record<string, number> = Object.fromEntries(input.steps.map((s) => [s.id, 0]))
   for (let round = 0, changed = true; changed; round++) {
     changed = false
-    for (const [a, b, w] of edges) if (es[a]! + w > es[b]! + EPS) (es[b] = es[a]! + w), (changed = true)
+    for (const [a, b, w] of edges) {
+      if (es[a]! + w > es[b]! + EPS) {
+        es[b] = es[a]! + w
+        changed = true
+      }
+    }
     if (round > input.steps.length + 2) throw new Error('no fixed point')
   }
   const length = Math.max(0, ...input.steps.map((s) => es[s.id]! + s.duration))
   const ls: Record<string, number> = Object.fromEntries(input.steps.map((s) => [s.id, length - s.duration]))
   for (let changed = true; changed; ) {
     changed = false
-    for (const [a, b, w] of edges) if (ls[b]! - w < ls[a]! - EPS) (ls[a] = ls[b]! - w), (changed = true)
+    for (const [a, b, w] of edges) {
+      if (ls[b]! - w < ls[a]! - EPS) {
+        ls[a] = ls[b]! - w
+        changed = true
+      }
+    }
   }
   return { es, ls, length }
 }
 
+/** How many steps each resource holds at once, with the planner's defaults (one cook, four burners, one oven rack). */
+function capacities(input: PlanInput): Record<string, number> {
+  const k = input.kitchen ?? {}
+  return { hands: k.hands ?? 1, burner: k.burners ?? 4, oven: (k.ovens ?? 1) * (k.racksPerOven ?? 1), counter: k.counters ?? Infinity }
+}
+
 /** Checks a plan against its input; returns nothing, fails the test on the first broken rule. */
 function checkPlan(input: PlanInput, plan: PlanResult) {
-  const k = input.kitchen ?? {}
-  const cap: Record<string, number> = { hands: k.hands ?? 1, burner: k.burners ?? 4, oven: (k.ovens ?? 1) * (k.racksPerOven ?? 1), counter: k.counters ?? Infinity }
+  const cap = capacities(input)
   expect(plan.steps.map((s) => s.id)).toEqual(input.steps.map((s) => s.id))
   const at = Object.fromEntries(plan.steps.map((s) => [s.id, s]))
   const spec = Object.fromEntries(input.steps.map((s) => [s.id, s]))
@@ -114,7 +131,7 @@ function checkPlan(input: PlanInput, plan: PlanResult) {
     expect(Math.abs(at[s.id]!.end - at[s.id]!.start - s.duration)).toBeLessThan(EPS)
   }
   // Recipes one at a time: their spans do not overlap.
-  const parallel = k.parallelRecipes ?? true
+  const parallel = input.kitchen?.parallelRecipes ?? true
   const recipes = [...new Set(input.steps.map((s) => s.recipe!))]
   const span = (r: string) => {
     const xs = plan.steps.filter((s) => spec[s.id]!.recipe === r)
@@ -213,23 +230,22 @@ function impossible(input: PlanInput, stepIds: string[]): boolean {
   if (input.kitchen?.parallelRecipes === false) {
     for (const s of input.steps) for (const l of s.links ?? []) if (l.kind === 'finish-together' && spec[l.from]!.recipe !== s.recipe && (l.lag ?? s.duration) > 0) return true
   }
-  const k = input.kitchen ?? {}
-  const cap: Record<string, number> = { hands: k.hands ?? 1, burner: k.burners ?? 4, oven: (k.ovens ?? 1) * (k.racksPerOven ?? 1), counter: k.counters ?? Infinity }
+  const cap = capacities(input)
   const group = new Set(stepIds)
   const edges = constraints(input, null).filter(([a, b]) => group.has(a) && group.has(b))
   const minutes = (id: string) => spec[id]!.duration / MIN
   const reach = stepIds.reduce((sum, id) => sum + minutes(id), 0) + 5 * stepIds.length
-  const at: Record<string, number> = {}
+  const at = new Map<string, number>()
   const holds = (id: string, r: string) => minutes(id) > 0 && (r === 'hands' ? spec[id]!.handsOn : spec[id]!.station === r)
-  const fits = () =>
-    Object.values(at).every((t) => Object.keys(cap).every((r) => Object.keys(at).filter((p) => holds(p, r) && at[p]! <= t && t < at[p]! + minutes(p)).length <= cap[r]!))
+  const busy = (r: string, t: number) => [...at].filter(([p, start]) => holds(p, r) && start <= t && t < start + minutes(p)).length
+  const fits = () => [...at.values()].every((t) => Object.keys(cap).every((r) => busy(r, t) <= cap[r]!))
   const place = (i: number): boolean => {
     if (i === stepIds.length) return true
     const id = stepIds[i]!
     for (let t = i ? -reach : 0; t <= (i ? reach : 0); t++) {
-      at[id] = t
-      if (edges.every(([a, b, w]) => !(a in at && b in at) || at[b]! * MIN >= at[a]! * MIN + w) && fits() && place(i + 1)) return true
-      delete at[id]
+      at.set(id, t)
+      if (edges.every(([a, b, w]) => !(at.has(a) && at.has(b)) || at.get(b)! * MIN >= at.get(a)! * MIN + w) && fits() && place(i + 1)) return true
+      at.delete(id)
     }
     return false
   }
@@ -289,7 +305,13 @@ describe('small random plans against exhaustive search', () => {
   const small = fc
     .tuple(
       fc.array(stepSpec(false, 12).map((s) => ({ ...s, minutes: Math.max(1, s.minutes) })), { minLength: 6, maxLength: 8 }),
-      fc.record({ hands: fc.constant(1), burners: fc.integer({ min: 1, max: 2 }), ovens: fc.constant(1), racksPerOven: fc.constant(1), counters: fc.option(fc.constant(1), { nil: undefined }) }),
+      fc.record({
+        hands: fc.constant(1),
+        burners: fc.integer({ min: 1, max: 2 }),
+        ovens: fc.constant(1),
+        racksPerOven: fc.constant(1),
+        counters: fc.option(fc.constant(1), { nil: undefined }),
+      }),
     )
     .map(([specs, kitchen]) => build(specs, kitchen))
 

@@ -174,7 +174,12 @@ describe('writing amounts exactly', () => {
 describe('parse → format → parse (property)', () => {
   const items = ['onions', 'plain flour', 'olive oil', 'garlic', 'carrots', 'chopped tomatoes', 'butter', 'basmati rice', 'eggs', 'caster sugar', 'flat-leaf parsley', 'chicken thighs', 'lemon']
   const preps = [null, 'thinly sliced', 'finely chopped', 'at room temperature', 'beaten', 'peeled and diced']
-  const nice = fc.oneof(fc.integer({ min: 1, max: 40 }), fc.integer({ min: 1, max: 80 }).map((n) => n / 8), fc.integer({ min: 1, max: 30 }).map((n) => n / 3), fc.integer({ min: 1, max: 999 }).map((n) => n / 100))
+  const nice = fc.oneof(
+    fc.integer({ min: 1, max: 40 }),
+    fc.integer({ min: 1, max: 80 }).map((n) => n / 8),
+    fc.integer({ min: 1, max: 30 }).map((n) => n / 3),
+    fc.integer({ min: 1, max: 999 }).map((n) => n / 100),
+  )
   const ingredient = fc.record({
     amount: fc.option(fc.tuple(nice, fc.option(nice, { nil: null })), { nil: null }),
     unit: fc.option(fc.constantFrom(...UNIT_IDS), { nil: null }),

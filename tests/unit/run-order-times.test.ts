@@ -5,7 +5,8 @@ import { MIN, T0, run } from '../support/shoot-commands'
 import { createShootState } from '../../shared/utils/shoot'
 import { overUnderText, runOrderTimes } from '../../shared/utils/run-order-times'
 
-const step = (start: number | null, end: number | null, max: number | null = null) => ({ plannedStartMs: start, plannedEndMs: end, durationMin: null, durationMax: max })
+const step = (start: number | null, end: number | null, max: number | null = null) =>
+  ({ plannedStartMs: start, plannedEndMs: end, durationMin: null, durationMax: max })
 // Soup planned 0–10 min (two steps overlapping in the plan), bread 10–25 min, the sponsor read unplanned.
 const steps = { a: step(0, 6 * MIN), b: step(2 * MIN, 10 * MIN), c: step(10 * MIN, 25 * MIN), d: step(null, null, 120), e: step(null, null, 180) }
 const base = () => createShootState({

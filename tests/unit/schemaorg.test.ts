@@ -231,7 +231,12 @@ describe('export → import round trip (property)', () => {
   const words = (min: number, max: number) => fc.array(word, { minLength: min, maxLength: max }).map((w) => w.join(' '))
   const items = ['onions', 'plain flour', 'olive oil', 'garlic', 'carrots', 'chopped tomatoes', 'butter', 'basmati rice', 'eggs', 'caster sugar', 'flat-leaf parsley', 'chicken thighs', 'lemon']
   const preps = [null, 'thinly sliced', 'finely chopped', 'at room temperature', 'peeled and diced']
-  const nice = fc.oneof(fc.integer({ min: 1, max: 40 }), fc.integer({ min: 1, max: 80 }).map((n) => n / 8), fc.integer({ min: 1, max: 30 }).map((n) => n / 3), fc.integer({ min: 1, max: 999 }).map((n) => n / 100))
+  const nice = fc.oneof(
+    fc.integer({ min: 1, max: 40 }),
+    fc.integer({ min: 1, max: 80 }).map((n) => n / 8),
+    fc.integer({ min: 1, max: 30 }).map((n) => n / 3),
+    fc.integer({ min: 1, max: 999 }).map((n) => n / 100),
+  )
   const ingredient = fc.record({
     amount: fc.option(fc.tuple(nice, nice), { nil: null }),
     unit: fc.option(fc.constantFrom(...UNIT_IDS), { nil: null }),
@@ -262,7 +267,11 @@ describe('export → import round trip (property)', () => {
     yieldText: fc.constantFrom(null, '1 loaf', '12 cookies', 'one 23 cm tart'),
     tags: fc.uniqueArray(fc.constantFrom('soup', 'Winter', 'quick, easy', 'vegetarian', 'budget'), { maxLength: 4 }),
     notes: fc.option(fc.string({ minLength: 1 }), { nil: null }),
-    times: fc.record({ prep: fc.option(fc.integer({ min: 0, max: 36000 }), { nil: null }), cook: fc.option(fc.integer({ min: 0, max: 36000 }), { nil: null }), total: fc.option(fc.integer({ min: 0, max: 90000 }), { nil: null }) }),
+    times: fc.record({
+      prep: fc.option(fc.integer({ min: 0, max: 36000 }), { nil: null }),
+      cook: fc.option(fc.integer({ min: 0, max: 36000 }), { nil: null }),
+      total: fc.option(fc.integer({ min: 0, max: 90000 }), { nil: null }),
+    }),
     ingredients: fc.array(ingredient, { maxLength: 8 }),
     steps: fc.array(step, { maxLength: 6 }),
   }).map((d) => ({

@@ -135,10 +135,16 @@ describe('round trips (property tests)', () => {
   })
   it('converting volume → mass → volume through a density returns the amount', () => {
     fc.assert(
-      fc.property(fc.double({ min: 1e-6, max: 1e6, noNaN: true }), fc.constantFrom(...volumes), fc.constantFrom(...masses), fc.double({ min: 0.05, max: 3, noNaN: true }), (v, vol, mass, d) => {
-        const back = convertAmount(convertAmount(v, vol, mass, { gramsPerMl: d }), mass, vol, { gramsPerMl: d })
-        expect(Math.abs(back - v) / v).toBeLessThan(1e-12)
-      }),
+      fc.property(
+        fc.double({ min: 1e-6, max: 1e6, noNaN: true }),
+        fc.constantFrom(...volumes),
+        fc.constantFrom(...masses),
+        fc.double({ min: 0.05, max: 3, noNaN: true }),
+        (v, vol, mass, d) => {
+          const back = convertAmount(convertAmount(v, vol, mass, { gramsPerMl: d }), mass, vol, { gramsPerMl: d })
+          expect(Math.abs(back - v) / v).toBeLessThan(1e-12)
+        },
+      ),
     )
   })
   it('°C → °F → °C returns the temperature', () => {

@@ -88,7 +88,10 @@ const stamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE }
 
 export function initRecipeModels(sequelize: Sequelize) {
   Price.init(
-    { id, studioId: DataTypes.INTEGER, item: DataTypes.STRING(120), packageSize: DataTypes.FLOAT, packageUnit: DataTypes.STRING(16), priceMinor: DataTypes.INTEGER, currency: DataTypes.STRING(3), shop: DataTypes.STRING(120), boughtOn: DataTypes.DATEONLY, ...stamps },
+    {
+      id, studioId: DataTypes.INTEGER, item: DataTypes.STRING(120), packageSize: DataTypes.FLOAT, packageUnit: DataTypes.STRING(16),
+      priceMinor: DataTypes.INTEGER, currency: DataTypes.STRING(3), shop: DataTypes.STRING(120), boughtOn: DataTypes.DATEONLY, ...stamps,
+    },
     { sequelize, tableName: 'prices', underscored: true },
   )
   Recipe.init(
@@ -101,7 +104,8 @@ export function initRecipeModels(sequelize: Sequelize) {
   )
   RecipeIngredient.init(
     {
-      id, recipeId: DataTypes.INTEGER, position: DataTypes.INTEGER, key: DataTypes.STRING(40), min: DataTypes.FLOAT, max: DataTypes.FLOAT, unit: DataTypes.STRING(16),
+      id, recipeId: DataTypes.INTEGER, position: DataTypes.INTEGER, key: DataTypes.STRING(40),
+      min: DataTypes.FLOAT, max: DataTypes.FLOAT, unit: DataTypes.STRING(16),
       item: DataTypes.STRING(200), prep: DataTypes.STRING(200), optional: DataTypes.BOOLEAN, toTaste: DataTypes.BOOLEAN, group: DataTypes.STRING(120),
       allergens: json('allergens', { eu: [], us: [] }), priceId: DataTypes.INTEGER, ...stamps,
     },
