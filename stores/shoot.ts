@@ -403,7 +403,8 @@ export const useShootStore = defineStore('shoot', () => {
 
   return {
     shootId, snapshot, seq, connection, browserOnline, offset, clockDelay, clockSampledAt, error, errorCode, pending, log, bound,
-    presence, audibleWhileRolling, setAudibleWhileRolling, online, you, role, steps, serverState, state, cursorRef, currentSegment, currentStep, nextRef, nextStep,
+    presence, audibleWhileRolling, setAudibleWhileRolling, online, you, role, steps, serverState, state,
+    cursorRef, currentSegment, currentStep, nextRef, nextStep,
     can, serverNowMs, clearError, bind, prime, open, leave, command, resync, sampleClock,
   }
 })

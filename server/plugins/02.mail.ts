@@ -11,7 +11,9 @@ export default defineNitroPlugin((nitroApp) => {
     let host = 'the configured server'
     try {
       host = new URL(String(config.mail.smtpUrl)).host
-    } catch {}
+    } catch {
+      // Not a URL: the log names it as written.
+    }
     console.info(`[hobline] mail goes out through SMTP at ${host}`)
     nitroApp.hooks.hook('close', () => closeTransports())
     return

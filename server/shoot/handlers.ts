@@ -4,14 +4,13 @@
 // they need comes in through the factory: no Nitro, no socket.io, so tests drive them directly.
 import type { UserSession } from '#auth-utils'
 import type { ShootActor } from '../../shared/types/shoot'
-import type { ShootPresence, ShootSnapshot } from '../../shared/types/socket-events'
+import type { ShootEventMessage, ShootPresence, ShootSnapshot } from '../../shared/types/socket-events'
 import { DomainError, isDomainError, refusal, type Refusal } from '../../shared/utils/domain-error'
 import type { DeviceRole, StudioRole } from '../../shared/utils/roles'
 import { createShootEngine, type CommandOutcome, type ShootEngine } from './engine'
 import type { Presence } from './presence'
 import type { ShootRow, ShootStore } from './store'
 import type { ShootScript } from './script'
-import type { ShootEventMessage } from '../../shared/types/socket-events'
 
 /** Who is let into a shoot, as the guard answers it. */
 export type ShootCaller =

@@ -16,7 +16,10 @@ export async function episodeView(e: Loaded) {
   const titles = await recipeTitles(segments.map((s) => s.recipeId).filter((x): x is number => !!x))
   return {
     id: e.id, studioId: e.studioId, title: e.title, version: e.version, updatedAt: e.updatedAt,
-    segments: segments.map((s) => ({ id: s.id, position: s.position, kind: s.kind, recipeId: s.recipeId, title: s.title ?? (s.recipeId ? titles.get(s.recipeId) ?? null : null) })),
+    segments: segments.map((s) => ({
+      id: s.id, position: s.position, kind: s.kind, recipeId: s.recipeId,
+      title: s.title ?? (s.recipeId ? titles.get(s.recipeId) ?? null : null),
+    })),
   }
 }
 
@@ -30,7 +33,10 @@ export async function listEpisodes(studioId: number) {
   await useDb()
   const rows = (await Episode.findAll({ where: { studioId }, include: [{ model: EpisodeSegment, as: 'segments' }], order: [['id', 'DESC']] })) as Loaded[]
   const views = await Promise.all(rows.map(episodeView))
-  return views.map((v) => ({ id: v.id, title: v.title, updatedAt: v.updatedAt, recipes: v.segments.filter((s) => s.recipeId).map((s) => ({ id: s.recipeId!, title: s.title })) }))
+  return views.map((v) => ({
+    id: v.id, title: v.title, updatedAt: v.updatedAt,
+    recipes: v.segments.filter((s) => s.recipeId).map((s) => ({ id: s.recipeId!, title: s.title })),
+  }))
 }
 
 /**
@@ -85,7 +91,10 @@ export async function saveEpisode(episodeId: number, studioId: number, body: { v
   const sequelize = await useDb()
   if (body.recipeIds) await assertRecipesInStudio(studioId, body.recipeIds)
   await sequelize.transaction(async () => {
-    const [changed] = await Episode.update({ ...(body.title ? { title: body.title } : {}), version: body.version + 1 }, { where: { id: episodeId, version: body.version } })
+    const [changed] = await Episode.update(
+      { ...(body.title ? { title: body.title } : {}), version: body.version + 1 },
+      { where: { id: episodeId, version: body.version } },
+    )
     if (!changed) {
       const current = await loadEpisode(episodeId)
       throw new DomainError('conflict', `Someone else saved this episode while you were editing (now version ${current?.version}). Your changes are still on the page: compare, then save again.`, { data: { current } })

@@ -188,7 +188,9 @@ export function photoDriver(config: PhotoStorageConfig): { driver: Driver; where
     let host = s3.endpoint
     try {
       host = new URL(s3.endpoint).host
-    } catch {}
+    } catch {
+      // Not a URL: the log names the endpoint as written.
+    }
     return { driver, where: `S3 bucket "${s3.bucket}" at ${host} (${region})` }
   }
   const dir = config.dir || '.data/photos'

@@ -8,7 +8,7 @@ describe('built app', async () => {
   await useBuiltApp()
 
   it('reports a migrated database on WAL with foreign keys', async () => {
-    const health = await $fetch<Record<string, any>>('/api/health')
+    const health = await $fetch<{ status: string; database: unknown; migrations: unknown }>('/api/health')
     expect(health.status).toBe('ok')
     expect(health.database).toMatchObject({ file: 'hobline.sqlite', journalMode: 'wal', foreignKeys: true, busyTimeoutMs: 5000 })
     expect(health.migrations).toEqual({ applied: migrations.map((m) => m.name), pending: [], migrated: true })

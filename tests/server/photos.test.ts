@@ -13,10 +13,11 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { rootDir, tempDatabasePath, useBuiltApp } from '../support/app'
 import { Client, demo, signedIn, uniqueEmail } from '../support/client'
 import { DEMO_PASSWORD } from '../../server/db/demo'
+import type { Json } from '../support/client'
 
 interface Upload {
   status: number
-  body: any
+  body: Json
 }
 
 /** A multipart upload, as a browser form sends it, with the client's session cookie. */

@@ -88,6 +88,36 @@ describe('live shoot engine', async () => {
     expect((await emitAck<ShootSnapshot>(camera, 'shoot:snapshot', { shootId })).state.seq).toBe(seq + 1)
   })
 
+  it('the same refusal reads the same over HTTP and over the socket: one code, one message, the field', async () => {
+    const host = await signedIn(demo.host)
+    const socket = await open(host)
+    const cases = [
+      { type: 'shoot.end' }, // the host drives but does not end a shoot (the role table)
+      { type: 'timer.cancel', timerId: 'no-such-timer' }, // the state refuses it
+      { type: 'marker.add', kind: 'brilliant' }, // bad input, with its field
+      { type: 'make.coffee' }, // no such command
+    ]
+    for (const command of cases) {
+      const overSocket = await emitAck<Record<string, never>>(socket, 'shoot:command', { shootId, ...command })
+      const overHttp = await host.post(`/api/shoots/${shootId}/commands`, command)
+      expect(overSocket.ok).toBe(false)
+      const error = (overSocket as unknown as { error: { code: string; message: string; field?: string } }).error
+      expect(overHttp.body.data).toEqual(error)
+      expect(overHttp.body.message).toBe(error.message)
+      expect(overHttp.status).toBe({ 'forbidden': 403, 'invalid': 400 }[error.code] ?? 409)
+    }
+    // A stranger and an unknown shoot too.
+    const stranger = await open(null)
+    const socketStranger = await emitAck<Record<string, never>>(stranger, 'shoot:command', { shootId, type: 'shoot.pause' })
+    const httpStranger = await new Client().post(`/api/shoots/${shootId}/commands`, { type: 'shoot.pause' })
+    expect(httpStranger.status).toBe(401)
+    expect(httpStranger.body.data).toEqual((socketStranger as unknown as { error: object }).error)
+    const socketUnknown = await emitAck<Record<string, never>>(socket, 'shoot:join', { shootId: 999_999 })
+    const httpUnknown = await host.get('/api/shoots/999999')
+    expect(httpUnknown.status).toBe(404)
+    expect(httpUnknown.body.data).toEqual((socketUnknown as unknown as { error: object }).error)
+  })
+
   it('a client whose clock is ten minutes off shows the same remaining time (within 50 ms)', async () => {
     const h = await open(await signedIn(demo.host))
     const snap = await emitAck<ShootSnapshot>(h, 'shoot:join', { shootId })
