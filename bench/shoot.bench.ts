@@ -154,6 +154,41 @@ const commandToAll: Benchmark = {
   },
 }
 
+const JOINERS = 20
+const JOIN_ROUNDS = 10
+
+// Twenty screens opening one shoot at the same moment (a crew arriving on set, or every screen
+// reconnecting after the Wi-Fi comes back): emit → snapshot acknowledgement, beside a clock ping
+// on the same sockets at the same moment, which does no work at all.
+const join: Benchmark = {
+  name: 'shoot: 20 screens join one shoot at once, join → snapshot p99',
+  async run(): Promise<BenchResult> {
+    const s = await (shared ??= setup())
+    await measure()
+    const shootId = s.shootIds[0]!
+    const screens = await Promise.all(Array.from({ length: JOINERS }, () => open(s.url, s.cookie)))
+    const joins: number[] = []
+    const pings: number[] = []
+    const timed = (socket: Socket, event: string, payload: unknown, into: number[]) => {
+      const sent = wall()
+      return ack<{ ok?: boolean; error?: { message: string } }>(socket, event, payload).then((r) => {
+        if (r.ok === false) throw new Error(`the benchmark's ${event} was refused: ${r.error?.message}`)
+        into.push(wall() - sent)
+      })
+    }
+    for (let n = 0; n < JOIN_ROUNDS; n++) {
+      await Promise.all(screens.map((c) => timed(c, 'shoot:join', { shootId }, joins)))
+      await Promise.all(screens.map((c) => timed(c, 'clock:ping', { t1: Date.now() }, pings)))
+      for (const c of screens) c.emit('shoot:leave', { shootId })
+    }
+    screens.forEach((c) => c.disconnect())
+    return {
+      figure: percentile(joins, 99), baseline: percentile(pings, 99), unit: 'ms',
+      note: `p50 ${percentile(joins, 50).toFixed(1)} ms (ping p50 ${percentile(pings, 50).toFixed(1)} ms); ${JOINERS} × ${JOIN_ROUNDS} joins of the demo episode's shoot (no bound set: compare before and after a change)`,
+    }
+  },
+}
+
 const throughput: Benchmark = {
   name: 'shoot: commands per second, every one persisted',
   async run(): Promise<BenchResult> {
@@ -182,4 +217,4 @@ const throughput: Benchmark = {
   },
 }
 
-export const shootBenchmarks: Benchmark[] = [fanOut, commandToAll, throughput]
+export const shootBenchmarks: Benchmark[] = [fanOut, commandToAll, join, throughput]
