@@ -26,11 +26,12 @@ export default defineNitroPlugin((nitroApp) => {
       rooms: { join: (shootId) => socket.join(shootRoom(shootId)), leave: (shootId) => socket.leave(shootRoom(shootId)) },
     }
     // Events with an answer: the handler's result is the acknowledgement.
-    for (const name of ['shoot:join', 'shoot:snapshot', 'shoot:command', 'clock:ping'] as const) {
-      const handle = { 'shoot:join': handlers.join, 'shoot:snapshot': handlers.snapshot, 'shoot:command': handlers.command, 'clock:ping': handlers.ping }[name]
-      socket.on(name, async (payload: unknown, ack: unknown) => {
-        if (typeof ack !== 'function') return
-        ack(await handle(conn, payload))
+    const answered = {
+      'shoot:join': handlers.join, 'shoot:snapshot': handlers.snapshot, 'shoot:command': handlers.command, 'clock:ping': handlers.ping,
+    } as const
+    for (const [name, handle] of Object.entries(answered)) {
+      socket.on(name as keyof typeof answered, async (payload: unknown, ack: unknown) => {
+        if (typeof ack === 'function') ack(await handle(conn, payload))
       })
     }
     // Events without one.
