@@ -10,7 +10,10 @@ import { DomainError } from '../../shared/utils/domain-error'
 type PriceBody = z.output<typeof priceBodySchema>
 
 export function priceView(p: Price) {
-  return { id: p.id, item: p.item, packageSize: p.packageSize, packageUnit: p.packageUnit, priceMinor: p.priceMinor, currency: p.currency, shop: p.shop, boughtOn: p.boughtOn }
+  return {
+    id: p.id, item: p.item, packageSize: p.packageSize, packageUnit: p.packageUnit,
+    priceMinor: p.priceMinor, currency: p.currency, shop: p.shop, boughtOn: p.boughtOn,
+  }
 }
 
 /** As the costing core wants it: ids as strings, "each" as a null unit. */

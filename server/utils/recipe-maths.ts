@@ -25,7 +25,10 @@ export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, 
     units: system,
     ingredients: scaled.ingredients.map((s) => {
       const ing = byKey.get(s.key)!
-      return { id: ing.id, key: s.key, item: s.item, prep: s.prep, min: s.min, max: s.max, unit: s.unit, text: s.text, exactText: s.exactText, optional: s.optional, toTaste: s.toTaste, group: s.group }
+      return {
+        id: ing.id, key: s.key, item: s.item, prep: s.prep, min: s.min, max: s.max, unit: s.unit,
+        text: s.text, exactText: s.exactText, optional: s.optional, toTaste: s.toTaste, group: s.group,
+      }
     }),
     steps: recipe.steps.map((step) => {
       const rendered = renderStepText(step.text, { system, metricCups: settings.cupUnit === 'metric-cup', ingredients: draft.ingredients, fromServings: recipe.servings, toServings: target })
@@ -39,8 +42,12 @@ async function pricesFor(studioId: number) {
   return (await listPrices(studioId)).map(studioPrice)
 }
 
-function costInput(ingredients: { key: string; item: string; min: number | null; max: number | null; unit: string | null; optional: boolean; priceId: number | null }[]) {
-  return ingredients.map((i) => ({ key: i.key, item: i.item, min: i.min, max: i.max, unit: i.unit as UnitId | null, optional: i.optional, priceId: i.priceId ? String(i.priceId) : null }))
+type CostLine = { key: string; item: string; min: number | null; max: number | null; unit: string | null; optional: boolean; priceId: number | null }
+
+function costInput(ingredients: CostLine[]) {
+  return ingredients.map((i) => ({
+    key: i.key, item: i.item, min: i.min, max: i.max, unit: i.unit as UnitId | null, optional: i.optional, priceId: i.priceId ? String(i.priceId) : null,
+  }))
 }
 
 export async function recipeCostView(recipeId: number, studioId: number, servings?: number) {
@@ -60,7 +67,10 @@ export async function recipeCostView(recipeId: number, studioId: number, serving
     perServing: dec(cost.perServingMinor),
     perServingWithOptional: dec(cost.perServingWithOptionalMinor),
     formatted: { total: fmt(cost.totalMinor), perServing: fmt(cost.perServingMinor), perServingWithOptional: fmt(cost.perServingWithOptionalMinor) },
-    minor: { total: cost.totalMinor, totalWithOptional: cost.totalWithOptionalMinor, perServing: cost.perServingMinor, perServingWithOptional: cost.perServingWithOptionalMinor },
+    minor: {
+      total: cost.totalMinor, totalWithOptional: cost.totalWithOptionalMinor,
+      perServing: cost.perServingMinor, perServingWithOptional: cost.perServingWithOptionalMinor,
+    },
     complete: cost.complete,
     budget: cost.budget && { ...cost.budget, perServing: dec(cost.budget.perServingMinor), formatted: fmt(cost.budget.perServingMinor) },
     lines: cost.lines.map((l) => ({ ...l, cost: l.costMinor === null ? null : dec(l.costMinor), formatted: l.costMinor === null ? null : fmt(l.costMinor) })),
@@ -79,7 +89,9 @@ export async function listRecipes(studioId: number, filters: { q?: string; tag?:
   const recipes = rows.map((r) => {
     const ings = (r as Recipe & { ingredients: RecipeIngredient[] }).ingredients
     const allergens = listRecipeAllergens(ings as never)
-    const cost = costRecipe(costInput(ings), prices, { currency: settings.currency, servings: r.servings, budgetPerServingMinor: settings.budgetPerServingMinor })
+    const cost = costRecipe(costInput(ings), prices, {
+      currency: settings.currency, servings: r.servings, budgetPerServingMinor: settings.budgetPerServingMinor,
+    })
     return {
       id: r.id, title: r.title, summary: r.summary, servings: r.servings, tags: r.tags, photo: photoUrl(r.photo), updatedAt: r.updatedAt,
       allergens: { eu: allergens.eu.map((a: { id: string }) => a.id), us: allergens.us.map((a: { id: string }) => a.id) },
