@@ -125,6 +125,7 @@ export function openShootStore(path: string, ready: () => Promise<unknown> = asy
   // COMMIT would see its writes before they are committed. Reads wait only for this connection;
   // transactions also take their turn in the process's write queue.
   let chain: Promise<unknown> = Promise.resolve()
+  const studios = new Map<number, number>()
   const queued = <T>(fn: () => Promise<T>): Promise<T> => {
     const next = chain.then(fn, fn)
     chain = next.catch(() => {})
@@ -148,8 +149,12 @@ export function openShootStore(path: string, ready: () => Promise<unknown> = asy
   return {
     transaction,
     read: (shootId) => queued(() => read(shootId)),
+    // A shoot never changes studio: read once, then from memory (the guard asks on every event).
     async studioOf(shootId) {
+      const known = studios.get(shootId)
+      if (known !== undefined) return known
       const r = await queued(() => get<{ studio_id: number }>('SELECT studio_id FROM shoots WHERE id = ?', [shootId]))
+      if (r) studios.set(shootId, r.studio_id)
       return r?.studio_id ?? null
     },
     live: () => queued(async () => (await all<Raw>(`SELECT ${COLUMNS} FROM shoots WHERE status IN ('ready', 'running', 'paused')`)).map(toRow)),
