@@ -1,0 +1,78 @@
+// The host's script as the cook plan gives it: the order in which the host meets the episode's
+// steps on set. Hands-on steps come in the order the plan starts them; every unattended wait
+// (simmer, rest, bake, boil) is a short "start it" beat at its planned start, so the pasta goes on
+// while the sauce is being made. Side by side, the recipes' beats interleave in one cooking
+// segment; one recipe at a time, each recipe's segment holds its own beats (its waits still
+// overlap inside it). A plan that cannot be made leaves the recipes in their written order.
+import type { ShootSegment } from '../types/shoot'
+
+export interface ScriptRecipe {
+  /** The episode segment's id (`segment-12`), its recipe and title, in the episode's order. */
+  segmentId: string
+  recipeId: string
+  title: string
+  /** The recipe's steps in their written order. */
+  stepIds: string[]
+}
+
+/** A step as the plan placed it: start and end in seconds from the start of the cook. */
+export interface ScriptPlannedStep {
+  stepId: string
+  start: number
+  end: number
+  handsOn: boolean
+}
+
+/** What the shoot's run order came from, for the desk to say. */
+export type ScriptSource =
+  | { kind: 'plan'; sideBySide: boolean }
+  | { kind: 'recipe-order'; reason: string; stepIds: string[] }
+
+/** Beats in plan order: by planned start; at the same moment a wait goes first (it takes a moment
+ * to start, and then it runs by itself), then the recipes' order, then the written order. */
+function planOrder(recipes: ScriptRecipe[], planned: Map<string, ScriptPlannedStep>, stepIds: string[]): string[] {
+  const written = new Map<string, number>()
+  let n = 0
+  for (const r of recipes) for (const id of r.stepIds) written.set(id, n++)
+  return [...stepIds].sort((a, b) => {
+    const pa = planned.get(a)!
+    const pb = planned.get(b)!
+    return pa.start - pb.start || Number(pa.handsOn) - Number(pb.handsOn) || written.get(a)! - written.get(b)!
+  })
+}
+
+/**
+ * The run order of a shoot from the episode's recipes and their cook plan. `plan` is null when the
+ * plan refused the episode; `problem` then says why, and the recipes run as written.
+ */
+export function shootRunOrderFromPlan(
+  recipes: ScriptRecipe[],
+  plan: { steps: ScriptPlannedStep[]; sideBySide: boolean } | null,
+  problem: { reason: string; stepIds: string[] } | null = null,
+): { runOrder: ShootSegment[]; source: ScriptSource } {
+  const written = (): ShootSegment[] => recipes.map((r) => ({ id: r.segmentId, title: r.title, stepIds: [...r.stepIds] }))
+  if (!plan) {
+    return { runOrder: written(), source: { kind: 'recipe-order', reason: problem?.reason ?? 'The episode has no cook plan.', stepIds: problem?.stepIds ?? [] } }
+  }
+  const planned = new Map(plan.steps.map((s) => [s.stepId, s]))
+  const missing = recipes.flatMap((r) => r.stepIds).filter((id) => !planned.has(id))
+  if (missing.length) {
+    return { runOrder: written(), source: { kind: 'recipe-order', reason: 'The cook plan leaves out some steps.', stepIds: missing } }
+  }
+  const withSteps = recipes.filter((r) => r.stepIds.length)
+  if (!plan.sideBySide || withSteps.length < 2) {
+    const runOrder = recipes.map((r) => ({ id: r.segmentId, title: r.title, stepIds: planOrder(recipes, planned, r.stepIds) }))
+    return { runOrder, source: { kind: 'plan', sideBySide: plan.sideBySide } }
+  }
+  const all = planOrder(recipes, planned, withSteps.flatMap((r) => r.stepIds))
+  const segment: ShootSegment = { id: 'segment-cook', title: cookTitle(withSteps.map((r) => r.title)), stepIds: all }
+  // Recipes without steps keep a place of their own, before the cooking.
+  const empty = recipes.filter((r) => !r.stepIds.length).map((r) => ({ id: r.segmentId, title: r.title, stepIds: [] }))
+  return { runOrder: [...empty, segment], source: { kind: 'plan', sideBySide: true } }
+}
+
+/** "Lentil stew, flatbreads and squash": the titles of the recipes cooked side by side. */
+export function cookTitle(titles: string[]): string {
+  if (titles.length <= 1) return titles[0] ?? 'Cooking'
+  return `${titles.slice(0, -1).join(', ')} and ${titles.at(-1)}`
+}
