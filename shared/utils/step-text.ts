@@ -5,7 +5,10 @@
 //   {{key|item}}       amount, unit and item:   "Add {{flour|item}}" → "Add 1½ cups plain flour"
 //   {{key*1/2}}        a share of the amount:    "Add {{butter*1/2}} of the butter" → "Add 50 g of the butter"
 //   {{key*0.25|item}}  both (the share is a decimal or a fraction n/d, above zero)
-// Spaces inside the braces are allowed ({{ milk | item }}). A key is letters, digits, "-" and "_".
+// Spaces inside the braces are allowed ({{ milk | item }}). A key is letters, digits, "-" and "_"
+// (INGREDIENT_KEY; makeIngredientKey makes lower-case ones with "-", imports and the API may use "_").
+// This file is the one reader of the grammar: the editor, the renderer, the timer labels and the
+// cook plan's labels all go through findStepTokens.
 // An ingredient with no amount renders as its item ("salt to taste" when it is to taste).
 // A token whose key no ingredient has is left as written and reported, so nothing is lost; text
 // with "{{" that is not a token is left alone.
@@ -23,7 +26,12 @@ export interface StepToken {
   end: number
 }
 
-const TOKEN = /\{\{\s*([A-Za-z0-9_-]+)\s*(?:\*\s*(\d+(?:\.\d+)?(?:\s*\/\s*\d+(?:\.\d+)?)?)\s*)?(?:\|\s*(item)\s*)?\}\}/g
+/** The characters of an ingredient key. */
+const KEY_CHARS = 'A-Za-z0-9_-'
+/** A whole ingredient key, as the recipe API accepts it: 1 to 40 of letters, digits, "-" and "_". */
+export const INGREDIENT_KEY = new RegExp(`^[${KEY_CHARS}]{1,40}$`)
+const SHARE = String.raw`\d+(?:\.\d+)?(?:\s*\/\s*\d+(?:\.\d+)?)?`
+const TOKEN = new RegExp(String.raw`\{\{\s*([${KEY_CHARS}]+)\s*(?:\*\s*(${SHARE})\s*)?(?:\|\s*(item)\s*)?\}\}`, 'g')
 
 /** Every well-formed token in a step's text, in order. */
 export function findStepTokens(text: string): StepToken[] {
@@ -37,6 +45,25 @@ export function findStepTokens(text: string): StepToken[] {
     out.push({ raw: m[0], key: m[1]!, factor, withItem: m[3] === 'item', start: m.index!, end: m.index! + m[0].length })
   }
   return out
+}
+
+/** An ingredient key as words in plain text: "red-onion" → "red onion", "sea_salt" → "sea salt". */
+export function ingredientKeyWords(key: string): string {
+  return key.replace(/[-_]+/g, ' ').trim()
+}
+
+/**
+ * A step's text for a short label, a plan or reading aloud: each token read as its ingredient key's
+ * words ({{red-onion|item}} → "red onion"), spaces collapsed. Text that is not a token stays as written.
+ */
+export function plainStepText(text: string): string {
+  let out = ''
+  let at = 0
+  for (const t of findStepTokens(text)) {
+    out += text.slice(at, t.start) + ingredientKeyWords(t.key)
+    at = t.end
+  }
+  return (out + text.slice(at)).replace(/\s+/g, ' ').trim()
 }
 
 /** Tokens that name no ingredient or ask for an impossible share, with what to fix. */
