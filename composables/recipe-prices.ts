@@ -1,8 +1,7 @@
 // The price list's form: what its inputs hold, and the request body made from them. The price is
 // typed as a decimal in the currency ("2.49") and sent in exact minor units (249).
 import type { UnitId } from '~~/shared/utils/units'
-
-export interface PriceRow { id: number; item: string; packageSize: number; packageUnit: string; priceMinor: number; currency: string; shop: string | null; boughtOn: string | null }
+import type { PriceRow } from '~/types/api'
 
 export interface PriceFormDraft { item: string; packageSize: string; packageUnit: string; price: string; currency: string; shop: string; boughtOn: string }
 
