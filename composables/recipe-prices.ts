@@ -33,6 +33,27 @@ export function priceBodyFrom(d: PriceFormDraft): { body?: Record<string, unknow
   }
 }
 
+/**
+ * Sends price drafts, one at a time: the form's own check first, then `send` with the body; the
+ * message and the field to fix come from the check or from the server (useSubmit).
+ */
+export function usePriceSend() {
+  let send = async () => {}
+  const { pending, error, field, submit } = useSubmit(() => send())
+  async function sendDraft(draft: PriceFormDraft, request: (body: Record<string, unknown>) => Promise<void>) {
+    if (pending.value) return
+    const made = priceBodyFrom(draft)
+    if (!made.body) {
+      error.value = made.message!
+      field.value = made.field!
+      return
+    }
+    send = () => request(made.body!)
+    await submit()
+  }
+  return { pending, error, field, sendDraft }
+}
+
 /** "500 g", "6 each", "1 L". */
 export function packageText(size: number, unit: string): string {
   return unit === 'each' ? `${size} each` : `${size} ${unitLabel(unit as UnitId, size)}`
