@@ -1,4 +1,6 @@
-// Amounts in step text that follow the scale.
+// Amounts in step text that follow the scale: the grammar of the tokens and of the ingredient keys
+// they name. The renderer is step-render.ts; this file imports no scaling code, so the shoot
+// screens read tokens (timer labels) without it.
 //
 // Token syntax (in a step's text, linked to an ingredient by its key):
 //   {{key}}            the ingredient's amount, scaled and kitchen-rounded: "Whisk in {{milk}}" → "Whisk in 240 mL"
@@ -8,13 +10,7 @@
 // Spaces inside the braces are allowed ({{ milk | item }}). A key is letters, digits, "-" and "_"
 // (INGREDIENT_KEY; makeIngredientKey makes lower-case ones with "-", imports and the API may use "_").
 // This file is the one reader of the grammar: the editor, the renderer, the timer labels and the
-// cook plan's labels all go through findStepTokens.
-// An ingredient with no amount renders as its item ("salt to taste" when it is to taste).
-// A token whose key no ingredient has is left as written and reported, so nothing is lost; text
-// with "{{" that is not a token is left alone.
-import type { RecipeIngredientDraft } from '../types/recipe'
-import { formatKitchenAmount, scaleAmount, type KitchenDisplayOptions } from './scale'
-import { segmentsText } from './step-segments'
+// cook plan's labels all go through findStepTokens. Text with "{{" that is not a token is left alone.
 
 export interface StepToken {
   raw: string
@@ -80,32 +76,6 @@ export interface StepTextSegment {
   /** Set on a rendered amount: the ingredient it came from and its exact value for the hover. */
   ingredientKey?: string
   exactText?: string
-}
-
-export interface RenderStepTextOptions extends KitchenDisplayOptions {
-  ingredients: readonly Pick<RecipeIngredientDraft, 'key' | 'min' | 'max' | 'unit' | 'item' | 'toTaste'>[]
-  fromServings: number
-  toServings: number
-}
-
-/** A step's text with its tokens replaced by scaled, kitchen-rounded amounts. */
-export function renderStepText(text: string, options: RenderStepTextOptions): { text: string; segments: StepTextSegment[]; problems: Array<{ token: string; reason: string }> } {
-  const problems = stepTokenProblems(text, options.ingredients.map((i) => i.key))
-  const bad = new Set(problems.map((p) => p.token))
-  const segments: StepTextSegment[] = []
-  let at = 0
-  for (const t of findStepTokens(text)) {
-    const ing = options.ingredients.find((i) => i.key === t.key)
-    if (!ing || bad.has(t.raw)) continue
-    if (t.start > at) segments.push({ text: text.slice(at, t.start) })
-    const share = (v: number | null) => (v === null ? null : scaleAmount(v, options.fromServings, options.toServings) * t.factor)
-    const amount = formatKitchenAmount(share(ing.min), share(ing.max), ing.unit, options, ing.toTaste)
-    const rendered = amount.min === null ? (ing.toTaste ? `${ing.item} to taste` : ing.item) : t.withItem ? `${amount.text} ${ing.item}` : amount.text
-    segments.push({ text: rendered, ingredientKey: ing.key, ...(amount.exactText ? { exactText: amount.exactText } : {}) })
-    at = t.end
-  }
-  if (at < text.length) segments.push({ text: text.slice(at) })
-  return { text: segmentsText(segments), segments, problems }
 }
 
 /** A key for a new ingredient, from its item and unique among `taken`: "plain flour" → "plain-flour". */

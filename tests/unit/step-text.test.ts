@@ -1,10 +1,11 @@
-// Step text with amounts that follow the scale (shared/utils/step-text.ts). Conversions by NIST
-// Handbook 44 Appendix C (oz = 28.349523125 g, cup = 236.5882365 mL); rounding as in scale.ts
-// (common practice).
+// Step text with amounts that follow the scale (shared/utils/step-text.ts, step-render.ts).
+// Conversions by NIST Handbook 44 Appendix C (oz = 28.349523125 g, cup = 236.5882365 mL); rounding
+// as in scale.ts (common practice).
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
+import { renderStepText } from '../../shared/utils/step-render'
 import {
-  INGREDIENT_KEY, findStepTokens, ingredientKeyWords, makeIngredientKey, plainStepText, renderStepText, stepTokenProblems,
+  INGREDIENT_KEY, findStepTokens, ingredientKeyWords, makeIngredientKey, plainStepText, stepTokenProblems,
 } from '../../shared/utils/step-text'
 
 const ingredients = [
