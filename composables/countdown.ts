@@ -3,17 +3,14 @@
 // the same time and a screen that slept, reloaded or lost the network shows the right one.
 import type { ShootTimer } from '~~/shared/types/shoot'
 import { timerRemainingMs } from '~~/shared/utils/shoot-timers'
+import { clockTextMs } from '~~/shared/utils/clock-text'
 
 /** The last minute of kitchen time, when a countdown turns urgent. */
 export const COUNTDOWN_URGENT_MS = 60_000
 
 /** m:ss, or h:mm:ss from an hour, rounded up so 0:00 shows only when the time is up. */
 export function countdownText(ms: number): string {
-  const total = Math.ceil(Math.max(0, ms) / 1000)
-  const h = Math.floor(total / 3600)
-  const m = Math.floor((total % 3600) / 60)
-  const s = String(total % 60).padStart(2, '0')
-  return h > 0 ? `${h}:${String(m).padStart(2, '0')}:${s}` : `${m}:${s}`
+  return clockTextMs(ms, 'up')
 }
 
 /**
@@ -47,5 +44,5 @@ export function useTimerCountdown(timer: MaybeRefOrGetter<ShootTimer | null | un
 
 /** Time gone by (the shoot clock, a marker's stamp): m:ss or h:mm:ss, rounded down. */
 export function elapsedText(ms: number): string {
-  return countdownText(Math.floor(Math.max(0, ms) / 1000) * 1000)
+  return clockTextMs(ms, 'down')
 }

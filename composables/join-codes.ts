@@ -1,10 +1,10 @@
 // The join codes of a shoot, for the devices page and the control desk: the list, making one for a
 // role, revoking one.
-export interface JoinCodeView { id: number; role: string; code: string; expiresAt: string; qrSvg: string; joinUrl: string; usedCount: number }
+import type { ApiAnswer } from '~/types/api'
 
 export function useJoinCodes(shootId: number | string, options: { server?: boolean } = {}) {
   const base = `/api/shoots/${shootId}/join-codes`
-  const { data, error: loadError, refresh } = useFetch<{ codes: JoinCodeView[] }>(base, { server: options.server ?? true })
+  const { data, error: loadError, refresh } = useFetch<ApiAnswer<'/api/shoots/:id/join-codes'>>(base, { server: options.server ?? true })
   const role = ref<'host' | 'camera'>('host')
   const { pending, error, submit } = useSubmit(async () => {
     await $fetch(base, { method: 'POST', body: { role: role.value } })

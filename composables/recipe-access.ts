@@ -14,3 +14,12 @@ export function useStudioAccess(studioId: MaybeRefOrGetter<number | null | undef
   })
   return { membership, can }
 }
+
+/** The opening of a page under /studios/:studioId: the studio's id, the member's access, and a 404
+ * when the studio is not one of theirs. */
+export function useStudioPage() {
+  const studioId = Number(useRoute().params.studioId)
+  const access = useStudioAccess(studioId)
+  if (!access.membership.value) throw createError({ statusCode: 404, statusMessage: 'There is no such studio on your account.', fatal: true })
+  return { studioId, ...access }
+}

@@ -4,29 +4,7 @@ import type { CautionId } from '~~/shared/utils/cautions'
 import type { EuAllergenId, UsAllergenId } from '~~/shared/utils/allergens'
 import type { RecipeStation } from '~~/shared/types/recipe'
 import type { UnitId } from '~~/shared/utils/units'
-
-/** A recipe as GET /api/recipes/:id returns it (the parts the editor uses). */
-export interface LoadedRecipe {
-  id: number
-  studioId: number
-  version: number
-  title: string
-  summary: string | null
-  servings: number
-  yieldText: string | null
-  tags: string[]
-  notes: string | null
-  times: { prep: number | null; cook: number | null; total: number | null }
-  updatedAt?: string | Date
-  ingredients: Array<{
-    id: number; key: string; min: number | null; max: number | null; unit: string | null; item: string; prep: string | null
-    optional: boolean; toTaste: boolean; group: string | null; allergens: { eu: string[]; us: string[] }; priceId: number | null
-  }>
-  steps: Array<{
-    id: number; text: string; script: string[]; handsOn: boolean; durationMin: number | null; durationMax: number | null
-    station: string | null; after: number[]; links?: StepLink[]; cameraShot: string | null; cameraNote: string | null; cautions: string[]; group: string | null
-  }>
-}
+import type { LoadedRecipe } from '~/types/api'
 
 /** A link to an earlier step beyond "waits for" (start with it, or finish together), by position. */
 export interface StepLink { step: number; kind: 'start-start' | 'finish-together'; lag: number }

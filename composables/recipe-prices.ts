@@ -1,8 +1,7 @@
 // The price list's form: what its inputs hold, and the request body made from them. The price is
 // typed as a decimal in the currency ("2.49") and sent in exact minor units (249).
 import type { UnitId } from '~~/shared/utils/units'
-
-export interface PriceRow { id: number; item: string; packageSize: number; packageUnit: string; priceMinor: number; currency: string; shop: string | null; boughtOn: string | null }
+import type { PriceRow } from '~/types/api'
 
 export interface PriceFormDraft { item: string; packageSize: string; packageUnit: string; price: string; currency: string; shop: string; boughtOn: string }
 
@@ -32,6 +31,27 @@ export function priceBodyFrom(d: PriceFormDraft): { body?: Record<string, unknow
   return {
     body: { item: d.item.trim(), packageSize: size, packageUnit: d.packageUnit, priceMinor, currency, shop: d.shop.trim() || null, boughtOn: d.boughtOn || null },
   }
+}
+
+/**
+ * Sends price drafts, one at a time: the form's own check first, then `send` with the body; the
+ * message and the field to fix come from the check or from the server (useSubmit).
+ */
+export function usePriceSend() {
+  let send = async () => {}
+  const { pending, error, field, submit } = useSubmit(() => send())
+  async function sendDraft(draft: PriceFormDraft, request: (body: Record<string, unknown>) => Promise<void>) {
+    if (pending.value) return
+    const made = priceBodyFrom(draft)
+    if (!made.body) {
+      error.value = made.message!
+      field.value = made.field!
+      return
+    }
+    send = () => request(made.body!)
+    await submit()
+  }
+  return { pending, error, field, sendDraft }
 }
 
 /** "500 g", "6 each", "1 L". */

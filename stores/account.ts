@@ -1,26 +1,14 @@
 // Who is signed in, their studios, and which one the app shell is working in.
 import { defineStore } from 'pinia'
-import { roleCan, type StudioAction, type StudioRole } from '~~/shared/utils/roles'
-
-export interface MembershipInfo {
-  studioId: number
-  studioName: string
-  role: StudioRole
-}
-
-interface MeResponse {
-  user: { id: number; name: string; email: string } | null
-  memberships: MembershipInfo[]
-  device: { shootId: number; studioId: number; role: 'host' | 'camera'; until: number } | null
-  studioId: number | null
-}
+import { roleCan, type StudioAction } from '~~/shared/utils/roles'
+import type { MeAnswer, MembershipInfo } from '~/types/api'
 
 export const useAccountStore = defineStore('account', {
   state: () => ({
     loaded: false,
-    user: null as MeResponse['user'],
+    user: null as MeAnswer['user'],
     memberships: [] as MembershipInfo[],
-    device: null as MeResponse['device'],
+    device: null as MeAnswer['device'],
     studioId: null as number | null,
   }),
   getters: {
@@ -30,7 +18,7 @@ export const useAccountStore = defineStore('account', {
   actions: {
     async load() {
       const headers = import.meta.server ? useRequestHeaders(['cookie']) : undefined
-      const me = await $fetch<MeResponse>('/api/me', { headers }).catch(() => null)
+      const me = await $fetch<MeAnswer>('/api/me', { headers }).catch(() => null)
       this.user = me?.user ?? null
       this.memberships = me?.memberships ?? []
       this.device = me?.device ?? null

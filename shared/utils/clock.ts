@@ -50,29 +50,6 @@ export function clockFilterBest(samples: readonly ClockSample[]): ClockSample | 
   return best
 }
 
-export interface ClockFilter {
-  /** Add a sample; returns the best sample of the window after adding it. */
-  add(sample: ClockSample): ClockSample | null
-  best(): ClockSample | null
-  /** Offset of the best sample, 0 until there is one. */
-  offset(): number
-  samples(): ClockSample[]
-}
-
-/** A clock filter holding its window, for a screen that pings now and then. */
-export function createClockFilter(size = 8): ClockFilter {
-  let window: ClockSample[] = clockFilterAdd([], { offset: 0, delay: -1 }, size) // validates size
-  return {
-    add(sample) {
-      window = clockFilterAdd(window, sample, size)
-      return clockFilterBest(window)
-    },
-    best: () => clockFilterBest(window),
-    offset: () => clockFilterBest(window)?.offset ?? 0,
-    samples: () => [...window],
-  }
-}
-
 /** The server clock now, read from the local clock and the offset. */
 export function serverNow(localNowMs: number, offset: number): number {
   return localNowMs + offset

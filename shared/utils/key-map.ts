@@ -4,6 +4,7 @@
 // A key is named by KeyboardEvent.key (W3C UI Events KeyboardEvent key Values), letters in lower
 // case and the space bar as "Space".
 import { SHOOT_TIMER_LABEL_MAX, SHOOT_TIMER_MAX_MS, SHOOT_TIMER_MIN_MS } from '../types/shoot'
+import { plainStepText } from './step-text'
 
 export const KEY_ACTIONS = ['next', 'previous', 'startTimer', 'acknowledge', 'flub'] as const
 export type KeyAction = (typeof KEY_ACTIONS)[number]
@@ -125,15 +126,6 @@ export function removeKey(map: KeyMap, action: KeyAction, key: string): KeyMap {
 }
 
 // ---- what the start-timer key starts ------------------------------------------------------------
-
-/** A step's text for a short label or for reading aloud: amount tokens read as their ingredient
- * ({{red-onion|item}} → "red onion"), spaces collapsed. */
-export function plainStepText(text: string): string {
-  return text
-    .replace(/\{\{\s*([A-Za-z0-9_-]+)[^}]*\}\}/g, (_, key: string) => key.replace(/[-_]+/g, ' '))
-    .replace(/\s+/g, ' ')
-    .trim()
-}
 
 /** The label length a hands-free timer gets: short enough to read on a cue screen. */
 export const STEP_TIMER_LABEL_LENGTH = 40

@@ -55,6 +55,12 @@ export interface PlanKitchen {
   parallelRecipes?: boolean
 }
 
+/** A studio's kitchen as it is saved and edited: every figure set, counters unlimited. */
+export type KitchenProfile = Required<Pick<PlanKitchen, 'hands' | 'burners' | 'ovens' | 'racksPerOven' | 'parallelRecipes'>>
+
+/** A new studio's kitchen: one cook, four burners, one oven taking one dish, recipes side by side. */
+export const DEFAULT_KITCHEN: Readonly<KitchenProfile> = { hands: 1, burners: 4, ovens: 1, racksPerOven: 1, parallelRecipes: true }
+
 export interface PlanInput {
   steps: PlanStep[]
   kitchen?: PlanKitchen

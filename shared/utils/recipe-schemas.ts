@@ -3,6 +3,7 @@
 import { z } from 'zod'
 import { EU_ALLERGENS, US_ALLERGENS } from './allergens'
 import { CAUTION_IDS } from './cautions'
+import { INGREDIENT_KEY } from './step-text'
 import { UNIT_IDS, type UnitId } from './units'
 
 const text = (field: string, max: number) => z.string({ error: `${field} must be text.` }).trim().max(max, `Use at most ${max} characters for ${field}.`)
@@ -13,7 +14,7 @@ const unitId = z.enum(UNIT_IDS as [UnitId, ...UnitId[]], { error: `unit must be 
 
 export const recipeIngredientSchema = z.object({
   id: z.number().int().positive().optional(),
-  key: z.string({ error: 'key must be text.' }).regex(/^[A-Za-z0-9_-]{1,40}$/, 'key uses letters, digits, "-" and "_" (at most 40).'),
+  key: z.string({ error: 'key must be text.' }).regex(INGREDIENT_KEY, 'key uses letters, digits, "-" and "_" (at most 40).'),
   min: amount('min'),
   max: amount('max'),
   unit: unitId.nullable(),

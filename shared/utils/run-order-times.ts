@@ -8,6 +8,7 @@
 //   still under its plan is not yet "early").
 import type { ShootState } from '../types/shoot'
 import { shootClockAt } from './shoot-clock'
+import { clockText } from './clock-text'
 
 export interface SegmentTimes {
   id: string
@@ -57,8 +58,6 @@ export function overUnderText(deltaMs: number): string {
   const s = Math.round(deltaMs / 1000)
   if (s === 0) return 'on time'
   const abs = Math.abs(s)
-  const text = abs >= 3600
-    ? `${Math.floor(abs / 3600)}:${String(Math.floor((abs % 3600) / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`
-    : `${Math.floor(abs / 60)}:${String(abs % 60).padStart(2, '0')}`
+  const text = clockText(abs)
   return s > 0 ? `${text} over` : `${text} under`
 }

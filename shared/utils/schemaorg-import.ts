@@ -12,7 +12,7 @@ import { parseIsoDuration } from './duration'
 import { parseQuantity, type QuantityParseOptions } from './quantity'
 import { isJsonObject, readRecipeInput, schemaText, cleanSchemaText, type JsonObject } from './schemaorg-read'
 import { hoblineProperty, readSchemaOrgInstructions } from './schemaorg-steps'
-import { makeIngredientKey } from './step-text'
+import { INGREDIENT_KEY, makeIngredientKey } from './step-text'
 
 export interface SchemaOrgImport {
   recipe: RecipeDraft
@@ -95,7 +95,7 @@ function readIngredients(node: JsonObject, problems: RecipeImportProblem[], opti
     }
     for (const w of p.warnings) problems.push({ field: at, reason: w })
     const x = isJsonObject(extras[out.length]) ? (extras[out.length] as JsonObject) : null
-    const key = typeof x?.key === 'string' && /^[A-Za-z0-9_-]+$/.test(x.key) && !out.some((o) => o.key === x.key) ? x.key : makeIngredientKey(p.item, out.map((o) => o.key))
+    const key = typeof x?.key === 'string' && INGREDIENT_KEY.test(x.key) && !out.some((o) => o.key === x.key) ? x.key : makeIngredientKey(p.item, out.map((o) => o.key))
     const allergens = readAllergens(x?.allergens) ?? (({ eu, us }) => ({ eu, us }))(suggestAllergens(p.item))
     out.push({
       key, position: out.length + 1, min: p.min, max: p.max, unit: p.unit, item: p.item, prep: p.prep, optional: p.optional,

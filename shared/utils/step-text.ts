@@ -1,17 +1,16 @@
-// Amounts in step text that follow the scale.
+// Amounts in step text that follow the scale: the grammar of the tokens and of the ingredient keys
+// they name. The renderer is step-render.ts; this file imports no scaling code, so the shoot
+// screens read tokens (timer labels) without it.
 //
 // Token syntax (in a step's text, linked to an ingredient by its key):
 //   {{key}}            the ingredient's amount, scaled and kitchen-rounded: "Whisk in {{milk}}" → "Whisk in 240 mL"
 //   {{key|item}}       amount, unit and item:   "Add {{flour|item}}" → "Add 1½ cups plain flour"
 //   {{key*1/2}}        a share of the amount:    "Add {{butter*1/2}} of the butter" → "Add 50 g of the butter"
 //   {{key*0.25|item}}  both (the share is a decimal or a fraction n/d, above zero)
-// Spaces inside the braces are allowed ({{ milk | item }}). A key is letters, digits, "-" and "_".
-// An ingredient with no amount renders as its item ("salt to taste" when it is to taste).
-// A token whose key no ingredient has is left as written and reported, so nothing is lost; text
-// with "{{" that is not a token is left alone.
-import type { RecipeIngredientDraft } from '../types/recipe'
-import { formatKitchenAmount, scaleAmount, type KitchenDisplayOptions } from './scale'
-import { segmentsText } from './step-segments'
+// Spaces inside the braces are allowed ({{ milk | item }}). A key is letters, digits, "-" and "_"
+// (INGREDIENT_KEY; makeIngredientKey makes lower-case ones with "-", imports and the API may use "_").
+// This file is the one reader of the grammar: the editor, the renderer, the timer labels and the
+// cook plan's labels all go through findStepTokens. Text with "{{" that is not a token is left alone.
 
 export interface StepToken {
   raw: string
@@ -23,7 +22,12 @@ export interface StepToken {
   end: number
 }
 
-const TOKEN = /\{\{\s*([A-Za-z0-9_-]+)\s*(?:\*\s*(\d+(?:\.\d+)?(?:\s*\/\s*\d+(?:\.\d+)?)?)\s*)?(?:\|\s*(item)\s*)?\}\}/g
+/** The characters of an ingredient key. */
+const KEY_CHARS = 'A-Za-z0-9_-'
+/** A whole ingredient key, as the recipe API accepts it: 1 to 40 of letters, digits, "-" and "_". */
+export const INGREDIENT_KEY = new RegExp(`^[${KEY_CHARS}]{1,40}$`)
+const SHARE = String.raw`\d+(?:\.\d+)?(?:\s*\/\s*\d+(?:\.\d+)?)?`
+const TOKEN = new RegExp(String.raw`\{\{\s*([${KEY_CHARS}]+)\s*(?:\*\s*(${SHARE})\s*)?(?:\|\s*(item)\s*)?\}\}`, 'g')
 
 /** Every well-formed token in a step's text, in order. */
 export function findStepTokens(text: string): StepToken[] {
@@ -37,6 +41,25 @@ export function findStepTokens(text: string): StepToken[] {
     out.push({ raw: m[0], key: m[1]!, factor, withItem: m[3] === 'item', start: m.index!, end: m.index! + m[0].length })
   }
   return out
+}
+
+/** An ingredient key as words in plain text: "red-onion" → "red onion", "sea_salt" → "sea salt". */
+export function ingredientKeyWords(key: string): string {
+  return key.replace(/[-_]+/g, ' ').trim()
+}
+
+/**
+ * A step's text for a short label, a plan or reading aloud: each token read as its ingredient key's
+ * words ({{red-onion|item}} → "red onion"), spaces collapsed. Text that is not a token stays as written.
+ */
+export function plainStepText(text: string): string {
+  let out = ''
+  let at = 0
+  for (const t of findStepTokens(text)) {
+    out += text.slice(at, t.start) + ingredientKeyWords(t.key)
+    at = t.end
+  }
+  return (out + text.slice(at)).replace(/\s+/g, ' ').trim()
 }
 
 /** Tokens that name no ingredient or ask for an impossible share, with what to fix. */
@@ -53,32 +76,6 @@ export interface StepTextSegment {
   /** Set on a rendered amount: the ingredient it came from and its exact value for the hover. */
   ingredientKey?: string
   exactText?: string
-}
-
-export interface RenderStepTextOptions extends KitchenDisplayOptions {
-  ingredients: readonly Pick<RecipeIngredientDraft, 'key' | 'min' | 'max' | 'unit' | 'item' | 'toTaste'>[]
-  fromServings: number
-  toServings: number
-}
-
-/** A step's text with its tokens replaced by scaled, kitchen-rounded amounts. */
-export function renderStepText(text: string, options: RenderStepTextOptions): { text: string; segments: StepTextSegment[]; problems: Array<{ token: string; reason: string }> } {
-  const problems = stepTokenProblems(text, options.ingredients.map((i) => i.key))
-  const bad = new Set(problems.map((p) => p.token))
-  const segments: StepTextSegment[] = []
-  let at = 0
-  for (const t of findStepTokens(text)) {
-    const ing = options.ingredients.find((i) => i.key === t.key)
-    if (!ing || bad.has(t.raw)) continue
-    if (t.start > at) segments.push({ text: text.slice(at, t.start) })
-    const share = (v: number | null) => (v === null ? null : scaleAmount(v, options.fromServings, options.toServings) * t.factor)
-    const amount = formatKitchenAmount(share(ing.min), share(ing.max), ing.unit, options, ing.toTaste)
-    const rendered = amount.min === null ? (ing.toTaste ? `${ing.item} to taste` : ing.item) : t.withItem ? `${amount.text} ${ing.item}` : amount.text
-    segments.push({ text: rendered, ingredientKey: ing.key, ...(amount.exactText ? { exactText: amount.exactText } : {}) })
-    at = t.end
-  }
-  if (at < text.length) segments.push({ text: text.slice(at) })
-  return { text: segmentsText(segments), segments, problems }
 }
 
 /** A key for a new ingredient, from its item and unique among `taken`: "plain flour" → "plain-flour". */

@@ -5,7 +5,7 @@ import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
 import { insertShoot } from '../support/shoot-row'
-import { screenshot } from '../support/page'
+import { screenshot, signInOnPage } from '../support/page'
 
 describe.skipIf(!chromiumAvailable())('joining a shoot on a tablet', async () => {
   const { databasePath } = await useBuiltApp({ browser: true })
@@ -13,11 +13,7 @@ describe.skipIf(!chromiumAvailable())('joining a shoot on a tablet', async () =>
   it('code with QR and countdown on the desk; typed on the tablet; the tablet sees that shoot only', async () => {
     const shootId = await insertShoot(databasePath, 1, 'Saturday braise rehearsal')
     const desk = await createPage(undefined, { viewport: { width: 1280, height: 800 } })
-    await desk.goto(url('/signin'), { waitUntil: 'networkidle' })
-    await desk.getByLabel('E-mail').fill('producer@brackenford.test')
-    await desk.getByLabel('Password').fill('hob-demo-2026')
-    await desk.getByRole('button', { name: 'Sign in' }).click()
-    await desk.waitForURL(/\/studios\//)
+    await signInOnPage(desk, 'producer@brackenford.test')
     await expect(desk.locator('header').innerText()).resolves.toContain('Brackenford Test Kitchen')
     await desk.goto(url(`/shoots/${shootId}/devices`), { waitUntil: 'networkidle' })
     await desk.getByLabel('Role on the device').selectOption('camera')

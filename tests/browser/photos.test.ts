@@ -5,20 +5,15 @@ import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
-import { screenshot } from '../support/page'
+import { consoleErrorsOf, screenshot, signInOnPage } from '../support/page'
 
 describe.skipIf(!chromiumAvailable())('photos on the recipe page', async () => {
   await useBuiltApp({ browser: true })
 
   it('shows the seeded photo, adds a step photo from a file and removes it', async () => {
     const page = await createPage(undefined, { viewport: { width: 1280, height: 900 } })
-    const errors: string[] = []
-    page.on('console', (m) => m.type() === 'error' && errors.push(m.text()))
-    await page.goto(url('/signin'), { waitUntil: 'networkidle' })
-    await page.getByLabel('E-mail').fill('host@brackenford.test')
-    await page.getByLabel('Password').fill('hob-demo-2026')
-    await page.getByRole('button', { name: 'Sign in' }).click()
-    await page.waitForURL(/\/studios\//)
+    const errors = consoleErrorsOf(page)
+    await signInOnPage(page, 'host@brackenford.test')
     await page.goto(url('/recipes/1'), { waitUntil: 'networkidle' })
     const hero = page.getByRole('img', { name: 'Smoky butter bean and tomato stew' })
     await hero.waitFor()

@@ -7,7 +7,15 @@ import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
-import { offHost, screenshot } from '../support/page'
+import { consoleErrorsOf, offHost, screenshot, signInOnPage } from '../support/page'
+
+/** A page signed in as a member of the demo studio, on their studio page, its console errors watched. */
+async function signedIn(email: string) {
+  const page = await createPage(undefined, { viewport: { width: 1280, height: 900 } })
+  const consoleErrors = consoleErrorsOf(page)
+  await signInOnPage(page, email)
+  return { page, consoleErrors }
+}
 
 async function makespan(page: Page) {
   return Number(await page.getByTestId('makespan').getAttribute('data-seconds'))
@@ -17,18 +25,9 @@ describe.skipIf(!chromiumAvailable())('cook plan timeline in the browser', async
   await useBuiltApp({ browser: true })
 
   it('draws the demo episode; one burner instead of four lengthens the cook; prints without controls', async () => {
-    const page = await createPage(undefined, { viewport: { width: 1280, height: 900 } })
+    const { page, consoleErrors } = await signedIn('producer@brackenford.test')
     const requests: string[] = []
-    const consoleErrors: string[] = []
     page.on('request', (r) => requests.push(r.url()))
-    page.on('console', (m) => m.type() === 'error' && consoleErrors.push(m.text()))
-    page.on('pageerror', (e) => consoleErrors.push(e.message))
-
-    await page.goto(url('/signin'), { waitUntil: 'networkidle' })
-    await page.getByLabel('E-mail').fill('producer@brackenford.test')
-    await page.getByLabel('Password').fill('hob-demo-2026')
-    await page.getByRole('button', { name: 'Sign in' }).click()
-    await page.waitForURL(/\/studios\/\d+$/)
 
     // The episode list, reached from the main navigation.
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Episodes' }).click()
@@ -133,14 +132,7 @@ describe.skipIf(!chromiumAvailable())('cook plan timeline in the browser', async
   })
 
   it('names the steps in words when the kitchen cannot cook them (no burner)', async () => {
-    const page = await createPage(undefined, { viewport: { width: 1280, height: 900 } })
-    const consoleErrors: string[] = []
-    page.on('console', (m) => m.type() === 'error' && consoleErrors.push(m.text()))
-    await page.goto(url('/signin'), { waitUntil: 'networkidle' })
-    await page.getByLabel('E-mail').fill('producer@brackenford.test')
-    await page.getByLabel('Password').fill('hob-demo-2026')
-    await page.getByRole('button', { name: 'Sign in' }).click()
-    await page.waitForURL(/\/studios\/\d+$/)
+    const { page, consoleErrors } = await signedIn('producer@brackenford.test')
     const { episodes } = await page.evaluate(() => fetch('/api/studios/1/episodes').then((r) => r.json())) as { episodes: { id: number; title: string }[] }
     const demo = episodes.find((e) => e.title === 'Thursday supper special')!
     await page.goto(url(`/episodes/${demo.id}/plan`), { waitUntil: 'networkidle' })
@@ -165,14 +157,7 @@ describe.skipIf(!chromiumAvailable())('cook plan timeline in the browser', async
   })
 
   it('makes an episode from two recipes, reorders them and saves with its version', async () => {
-    const page = await createPage(undefined, { viewport: { width: 1280, height: 900 } })
-    const consoleErrors: string[] = []
-    page.on('console', (m) => m.type() === 'error' && consoleErrors.push(m.text()))
-    await page.goto(url('/signin'), { waitUntil: 'networkidle' })
-    await page.getByLabel('E-mail').fill('producer@brackenford.test')
-    await page.getByLabel('Password').fill('hob-demo-2026')
-    await page.getByRole('button', { name: 'Sign in' }).click()
-    await page.waitForURL(/\/studios\/\d+$/)
+    const { page, consoleErrors } = await signedIn('producer@brackenford.test')
     await page.getByRole('link', { name: 'Episodes', exact: true }).first().click()
     await page.waitForURL(/\/episodes$/)
     // No title: said beside the field, nothing sent.
@@ -201,14 +186,7 @@ describe.skipIf(!chromiumAvailable())('cook plan timeline in the browser', async
   })
 
   it('a host tries another kitchen on the page only; the studio keeps its own', async () => {
-    const page = await createPage(undefined, { viewport: { width: 1280, height: 900 } })
-    const consoleErrors: string[] = []
-    page.on('console', (m) => m.type() === 'error' && consoleErrors.push(m.text()))
-    await page.goto(url('/signin'), { waitUntil: 'networkidle' })
-    await page.getByLabel('E-mail').fill('host@brackenford.test')
-    await page.getByLabel('Password').fill('hob-demo-2026')
-    await page.getByRole('button', { name: 'Sign in' }).click()
-    await page.waitForURL(/\/studios\/\d+$/)
+    const { page, consoleErrors } = await signedIn('host@brackenford.test')
     const { episodes } = await page.evaluate(() => fetch('/api/studios/1/episodes').then((r) => r.json())) as { episodes: { id: number; title: string }[] }
     const demo = episodes.find((e) => e.title === 'Thursday supper special')!
     // A host reads the run order but does not change it.

@@ -8,20 +8,14 @@ import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
-import { screenshot } from '../support/page'
+import { screenshot, signInOnPage } from '../support/page'
 
 const TITLE = 'Brackenford griddle batter'
 
 // NIST Handbook 44, Appendix C: 1 US cup = 8 fl oz = 236.5882365 mL; 1 oz = 28.349523125 g.
 const CUP_ML = 236.5882365
 
-async function signIn(page: Page) {
-  await page.goto(url('/signin'), { waitUntil: 'networkidle' })
-  await page.getByLabel('E-mail').fill('producer@brackenford.test')
-  await page.getByLabel('Password').fill('hob-demo-2026')
-  await page.getByRole('button', { name: 'Sign in' }).click()
-  await page.waitForURL(/\/studios\/\d+$/)
-}
+const signIn = (page: Page) => signInOnPage(page, 'producer@brackenford.test')
 
 /** Console errors, less the failed requests this test provokes on purpose (a 400 and two 409s). */
 function watchConsole(page: Page) {

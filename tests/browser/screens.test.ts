@@ -10,9 +10,8 @@ import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { CHROMIUM_ARGS, CHROMIUM_PATH, chromiumAvailable } from '../support/chromium'
-import { screenshot } from '../support/page'
+import { DEMO_PASSWORD, screenshot, signInOnPage, startTimerOnPage } from '../support/page'
 
-const PASSWORD = 'hob-demo-2026'
 const LAPTOP = { width: 1280, height: 800 }
 const TABLET = { width: 1024, height: 768 }
 const PHONE = { width: 390, height: 844 }
@@ -67,11 +66,7 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
   it('joins devices, moves every screen from the host\'s keys, rings quietly on set and recovers', async () => {
     // The producer signs in on the laptop and starts a rehearsal of the demo episode.
     const desk = await screen(LAPTOP)
-    await desk.page.goto(url('/signin'), { waitUntil: 'networkidle' })
-    await desk.page.getByLabel('E-mail').fill('producer@brackenford.test')
-    await desk.page.getByLabel('Password').fill(PASSWORD)
-    await desk.page.getByRole('button', { name: 'Sign in' }).click()
-    await desk.page.waitForURL(/\/studios\//)
+    await signInOnPage(desk.page, 'producer@brackenford.test')
     const created = await desk.page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' } })
     const shootId: number = (await created.json()).shoot.id
     await desk.page.goto(url(`/shoots/${shootId}/desk`), { waitUntil: 'networkidle' })
@@ -126,9 +121,7 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     for (const s of all) await atStep(s.page, 2)
 
     // A 20-minute timer started on the desk: every screen draws the same time left (within 50 ms).
-    await desk.page.getByLabel('What is cooking').fill('Beans simmer')
-    await desk.page.getByLabel('Minutes').fill('20')
-    await desk.page.getByRole('button', { name: 'Start timer' }).click()
+    await startTimerOnPage(desk.page, 'Beans simmer', '20')
     await host.page.getByTestId('tile-Beans simmer').waitFor()
     const deskTimer = await drawn(desk.page, '[data-testid="timer-Beans simmer"]', 'remainingMs')
     const hostTimer = await drawn(host.page, '[data-testid="tile-Beans simmer"]', 'remainingMs')
@@ -148,9 +141,7 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     for (const s of all) await expect(s.page.getByTestId('shoot-rolling').getAttribute('data-rolling')).resolves.toBe('true')
 
     // A 3-second timer falls due while rolling: the desk rings aloud; the tablet and phone flash only.
-    await desk.page.getByLabel('What is cooking').fill('Flatbread flip')
-    await desk.page.getByLabel('Minutes').fill('0.05')
-    await desk.page.getByRole('button', { name: 'Start timer' }).click()
+    await startTimerOnPage(desk.page, 'Flatbread flip', '0.05')
     // In its last minute the tile turns urgent; when due it shows done (and flashes).
     await host.page.locator('[data-testid="tile-Flatbread flip"][data-urgent="true"]').waitFor()
     await host.page.getByTestId('alarm-flash').waitFor({ timeout: 10_000 })
@@ -279,7 +270,7 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
       const page = await browser.newPage({ viewport: LAPTOP })
       const errors: string[] = []
       page.on('console', (m) => m.type() === 'error' && errors.push(m.text()))
-      expect((await page.request.post(url('/api/auth/login'), { data: { email: 'producer@brackenford.test', password: PASSWORD } })).status()).toBe(200)
+      expect((await page.request.post(url('/api/auth/login'), { data: { email: 'producer@brackenford.test', password: DEMO_PASSWORD } })).status()).toBe(200)
       const shootId: number = (await (await page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'take' } })).json()).shoot.id
       await page.goto(url(`/shoots/${shootId}/desk`), { waitUntil: 'networkidle' })
       await page.getByTestId('sound-blocked').waitFor({ timeout: 5000 })

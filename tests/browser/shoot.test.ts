@@ -7,9 +7,8 @@ import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
-import { screenshot } from '../support/page'
+import { consoleErrorsOf, screenshot, signInOnPage, startTimerOnPage } from '../support/page'
 
-const PASSWORD = 'hob-demo-2026'
 const SKEW_MS = 10 * 60_000
 const OFFLINE_MESSAGE = 'Offline: this was not sent. Wait for the connection to come back.'
 
@@ -20,18 +19,13 @@ interface Screen {
 
 async function signedInScreen(email: string, next: string, viewport: { width: number; height: number }, clockSkewMs = 0): Promise<Screen> {
   const page = await createPage(undefined, { viewport })
-  const errors: string[] = []
-  page.on('console', (m) => {
-    if (m.type() === 'error') errors.push(m.text())
-  })
-  page.on('pageerror', (e) => errors.push(String(e)))
+  const errors = consoleErrorsOf(page)
   // A device whose own clock is wrong: time still flows, from a start ten minutes ahead.
   if (clockSkewMs) await page.clock.install({ time: Date.now() + clockSkewMs })
-  await page.goto(url(`/signin?next=${encodeURIComponent(next)}`), { waitUntil: 'networkidle' })
-  await page.getByLabel('E-mail').fill(email)
-  await page.getByLabel('Password').fill(PASSWORD)
-  await page.getByRole('button', { name: 'Sign in' }).click()
-  await page.waitForURL((u) => u.pathname === next || (next === '/studio' && u.pathname.startsWith('/studio')))
+  await signInOnPage(page, email, {
+    path: `/signin?next=${encodeURIComponent(next)}`,
+    landing: (u) => u.pathname === next || (next === '/studio' && u.pathname.startsWith('/studio')),
+  })
   return { page, errors }
 }
 
@@ -92,9 +86,7 @@ describe.skipIf(!chromiumAvailable())('the live shoot in two browsers', async ()
     // The producer starts the shoot and a 20-minute timer; the host's screen follows.
     await producer.page.getByRole('button', { name: 'Start the shoot' }).click()
     await host.page.locator('[data-testid="shoot-status"][data-status="running"]').waitFor()
-    await producer.page.getByLabel('What is cooking').fill('Stew simmer')
-    await producer.page.getByLabel('Minutes').fill('20')
-    await producer.page.getByRole('button', { name: 'Start timer' }).click()
+    await startTimerOnPage(producer.page, 'Stew simmer', '20')
     await host.page.getByTestId('timer-Stew simmer').waitFor()
     await producer.page.getByTestId('timer-Stew simmer').waitFor()
     // The host has no controls the role may not use: no speed, no end.
@@ -128,9 +120,7 @@ describe.skipIf(!chromiumAvailable())('the live shoot in two browsers', async ()
     await host.page.getByTestId('marker-good').waitFor()
 
     // A short timer falls due on every screen and stays due until someone acknowledges it.
-    await host.page.getByLabel('What is cooking').fill('Flatbread rest')
-    await host.page.getByLabel('Minutes').fill('0.05')
-    await host.page.getByRole('button', { name: 'Start timer' }).click()
+    await startTimerOnPage(host.page, 'Flatbread rest', '0.05')
     await producer.page.locator('[data-testid="timer-Flatbread rest"][data-state="due"]').waitFor()
     await host.page.locator('[data-testid="timer-Flatbread rest"][data-state="due"]').waitFor()
     await expect(producer.page.getByTestId('timer-Flatbread rest').getByTestId('timer-state').textContent()).resolves.toMatch(/^\s*Due/)
@@ -186,9 +176,7 @@ describe.skipIf(!chromiumAvailable())('the live shoot in two browsers', async ()
     await expect(attr(producer.page, 'shoot-status', 'data-status')).resolves.toBe('running')
     // A time the form cannot send is named on the form, not sent.
     await producer.page.getByRole('button', { name: 'Dismiss' }).click()
-    await producer.page.getByLabel('What is cooking').fill('Squash roast')
-    await producer.page.getByLabel('Minutes').fill('0')
-    await producer.page.getByRole('button', { name: 'Start timer' }).click()
+    await startTimerOnPage(producer.page, 'Squash roast', '0')
     await expect(producer.page.locator('#timer-problem').textContent()).resolves.toMatch(/^Minutes: enter a number/)
     await expect(producer.page.getByTestId('timer-Squash roast').count()).resolves.toBe(0)
 

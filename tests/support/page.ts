@@ -15,6 +15,42 @@ export async function openPage(path: string, viewport = { width: 1280, height: 8
   return { page, response, requests }
 }
 
+/** The demo studio's password for every seeded member (server/db/demo data). */
+export const DEMO_PASSWORD = 'hob-demo-2026'
+
+/**
+ * Signs in through the sign-in form and waits for the page it lands on (a member's studio page by
+ * default); `path` is where the form is opened, e.g. `/signin?next=…`.
+ */
+export async function signInOnPage(
+  page: Page,
+  email: string,
+  { password = DEMO_PASSWORD, path = '/signin', landing = /\/studios\/\d+$/ }: { password?: string; path?: string; landing?: RegExp | ((u: URL) => boolean) } = {},
+) {
+  await page.goto(url(path), { waitUntil: 'networkidle' })
+  await page.getByLabel('E-mail').fill(email)
+  await page.getByLabel('Password').fill(password)
+  await page.getByRole('button', { name: 'Sign in' }).click()
+  await page.waitForURL(landing)
+}
+
+/** Starts a timer through a shoot screen's timer form (ShootTimerForm); minutes as typed, e.g. "0.05". */
+export async function startTimerOnPage(page: Page, label: string, minutes: string) {
+  await page.getByLabel('What is cooking').fill(label)
+  await page.getByLabel('Minutes').fill(minutes)
+  await page.getByRole('button', { name: 'Start timer' }).click()
+}
+
+/** The console errors and uncaught errors a page reports from now on. */
+export function consoleErrorsOf(page: Page): string[] {
+  const errors: string[] = []
+  page.on('console', (m) => {
+    if (m.type() === 'error') errors.push(m.text())
+  })
+  page.on('pageerror', (e) => errors.push(String(e)))
+  return errors
+}
+
 export function offHost(requests: string[]): string[] {
   return requests.filter((r) => {
     const { hostname, protocol } = new URL(r)

@@ -5,7 +5,7 @@
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
 import {
-  clockFilterAdd, clockFilterBest, countdownMs, createClockFilter, ntpSample, serverNow, type ClockSample,
+  clockFilterAdd, clockFilterBest, countdownMs, ntpSample, serverNow, type ClockSample,
 } from '../../shared/utils/clock'
 
 /** The four timestamps of a ping when the server clock = local clock + trueOffset. */
@@ -102,21 +102,6 @@ describe('clock filter: RFC 5905 §10, keep the last samples and trust the lowes
     expect(clockFilterAdd(window, { offset: Number.NaN, delay: 1 })).toEqual(window)
     expect(clockFilterBest([])).toBeNull()
     expect(() => clockFilterAdd([], { offset: 0, delay: 1 }, 0)).toThrow(/at least 1/)
-  })
-
-  it('createClockFilter holds the window and reports the best offset', () => {
-    const filter = createClockFilter(3)
-    expect(filter.offset()).toBe(0)
-    expect(filter.best()).toBeNull()
-    expect(filter.add({ offset: 599_990, delay: 100 })).toEqual({ offset: 599_990, delay: 100 })
-    filter.add({ offset: 600_001, delay: 12 })
-    filter.add({ offset: 600_030, delay: 90 })
-    expect(filter.offset()).toBe(600_001)
-    filter.add({ offset: 600_020, delay: 70 }) // the 100 ms sample leaves
-    filter.add({ offset: 600_025, delay: 80 }) // the 12 ms sample leaves
-    expect(filter.samples().map((s) => s.delay)).toEqual([90, 70, 80])
-    expect(filter.offset()).toBe(600_020)
-    expect(() => createClockFilter(0)).toThrow(/at least 1/)
   })
 })
 

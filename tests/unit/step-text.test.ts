@@ -1,9 +1,12 @@
-// Step text with amounts that follow the scale (shared/utils/step-text.ts). Conversions by NIST
-// Handbook 44 Appendix C (oz = 28.349523125 g, cup = 236.5882365 mL); rounding as in scale.ts
-// (common practice).
+// Step text with amounts that follow the scale (shared/utils/step-text.ts, step-render.ts).
+// Conversions by NIST Handbook 44 Appendix C (oz = 28.349523125 g, cup = 236.5882365 mL); rounding
+// as in scale.ts (common practice).
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
-import { findStepTokens, makeIngredientKey, renderStepText, stepTokenProblems } from '../../shared/utils/step-text'
+import { renderStepText } from '../../shared/utils/step-render'
+import {
+  INGREDIENT_KEY, findStepTokens, ingredientKeyWords, makeIngredientKey, plainStepText, stepTokenProblems,
+} from '../../shared/utils/step-text'
 
 const ingredients = [
   { key: 'butter', min: 100, max: 100, unit: 'g' as const, item: 'butter', toTaste: false },
@@ -23,6 +26,39 @@ describe('findStepTokens', () => {
   })
   it('leaves text that is not a token alone', () => {
     expect(findStepTokens('Use {{ two words }} or {single} or {{}}')).toEqual([])
+  })
+  it('reads keys of letters, digits, "-" and "_" in every form of token', () => {
+    const t = findStepTokens('{{red-onion}} {{sea_salt|item}} {{Egg_2-yolk*1/3}} {{ stock_1 * 0.5 | item }}')
+    expect(t.map((x) => [x.key, x.factor, x.withItem])).toEqual([
+      ['red-onion', 1, false], ['sea_salt', 1, true], ['Egg_2-yolk', 1 / 3, false], ['stock_1', 0.5, true],
+    ])
+  })
+  it('reads no token with another character in the key, a share without a number or another word after |', () => {
+    expect(findStepTokens('{{sea salt}} {{onion.red}} {{crème}} {{milk*}} {{milk*x}} {{milk|name}} {{milk|item|item}}')).toEqual([])
+  })
+  it('reads a share as a decimal or a fraction, spaces allowed around the slash', () => {
+    expect(findStepTokens('{{milk*2}} {{milk*0.75}} {{milk*3 / 4}} {{milk*1.5/3}}').map((x) => x.factor)).toEqual([2, 0.75, 0.75, 0.5])
+  })
+})
+
+describe('INGREDIENT_KEY', () => {
+  it('accepts what the token grammar reads, 1 to 40 characters', () => {
+    for (const key of ['milk', 'red-onion', 'sea_salt', 'Egg_2', 'a'.repeat(40)]) {
+      expect(INGREDIENT_KEY.test(key)).toBe(true)
+      expect(findStepTokens(`{{${key}}}`)[0]!.key).toBe(key)
+    }
+    for (const key of ['', 'a'.repeat(41), 'sea salt', 'crème', 'a.b', 'a|b']) expect(INGREDIENT_KEY.test(key)).toBe(false)
+  })
+})
+
+describe('plainStepText', () => {
+  it('reads each token as its key\'s words, "-" and "_" as spaces, and collapses spaces', () => {
+    expect(plainStepText('Sweat {{onion|item}} in {{butter*1/2}}  gently.')).toBe('Sweat onion in butter gently.')
+    expect(plainStepText('Add {{red-onion}} and {{sea_salt | item}}')).toBe('Add red onion and sea salt')
+    expect(ingredientKeyWords('double__cream-2')).toBe('double cream 2')
+  })
+  it('leaves text that is not a token as written, as the prompter shows it', () => {
+    expect(plainStepText('Stir {{sea salt}} and {{milk*x}} in')).toBe('Stir {{sea salt}} and {{milk*x}} in')
   })
 })
 
