@@ -1,9 +1,9 @@
 // The data a shoot screen page starts from: the snapshot fetched with the page (so the prompter's
 // text is in the first HTML the tablet gets) and held in the shoot store at once. The route's
 // answer is the same snapshot `shoot:join` acknowledges with.
-import type { ShootSnapshot } from '~~/shared/types/socket-events'
+import type { ApiAnswer } from '~~/types/api'
 
-export type ShootPageData = ShootSnapshot
+export type ShootPageData = ApiAnswer<'/api/shoots/:id'>
 
 export async function useShootPage() {
   const route = useRoute()

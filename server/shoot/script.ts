@@ -4,7 +4,8 @@
 // and kept until the episode, one of its recipes or the studio's settings change: a join or a
 // resync then costs three small reads, not a cook plan and the scaling of every recipe.
 import { Episode, Recipe, RecipeStep, Studio } from '../db/models'
-import { planEpisode, type Kitchen } from '../utils/cook-plan'
+import { planEpisode } from '../utils/cook-plan'
+import type { KitchenProfile } from '../../shared/utils/plan-types'
 import { loadRecipe, studioSettings } from '../utils/recipes'
 import { scaleLoadedRecipe } from '../utils/recipe-maths'
 import type { ShootSnapshot } from '../../shared/types/socket-events'
@@ -18,7 +19,7 @@ export type ShootScript = Pick<ShootSnapshot, 'steps' | 'units' | 'makespanMs'>
 
 /** The cook plan's start and end of each step, in ms from the start of the cook; empty when the
  * episode cannot be planned (the plan page says why). */
-async function plannedTimes(episodeId: number | null, kitchen: Kitchen) {
+async function plannedTimes(episodeId: number | null, kitchen: KitchenProfile) {
   const times = new Map<string, { start: number; end: number }>()
   if (episodeId === null) return { times, makespanMs: null as number | null }
   try {

@@ -1,9 +1,9 @@
 // The cook plan of an episode: its recipes' steps handed to the shared scheduler (planCook).
 import type { RecipeStep } from '../db/models'
 import { DomainError } from '../../shared/utils/domain-error'
-import { PlanError, type PlanKitchen, type PlanStep } from '../../shared/utils/plan-types'
+import { PlanError, type KitchenProfile, type PlanStep } from '../../shared/utils/plan-types'
+import { plainStepText } from '../../shared/utils/step-text'
 
-export type Kitchen = Required<Pick<PlanKitchen, 'hands' | 'burners' | 'ovens' | 'racksPerOven' | 'parallelRecipes'>>
 
 /** A step with no duration still takes the cook a moment: planned as one minute (common practice). */
 export const STEP_WITHOUT_DURATION_S = 60
@@ -18,7 +18,7 @@ export function plannedDuration(step: { durationMin: number | null; durationMax:
 
 const stepKey = (id: number) => String(id)
 
-export async function planEpisode(episodeId: number, kitchen: Kitchen) {
+export async function planEpisode(episodeId: number, kitchen: KitchenProfile) {
   const episode = await loadEpisodeRunOrder(episodeId)
   const recipeSegments = episode.segments.filter((s) => s.recipeId)
 
@@ -28,7 +28,7 @@ export async function planEpisode(episodeId: number, kitchen: Kitchen) {
     const atPosition = new Map(list.map((s) => [s.position, s]))
     for (const s of list) {
       // Tokens read as the ingredient's name; no closing full stop, since cues quote the label in a sentence.
-      const label = s.text.replace(/\{\{\s*([^}|*]+?)\s*(?:\*[^}|]*)?(?:\|[^}]*)?\}\}/g, (_m, key: string) => key.replace(/-/g, ' ')).replace(/[.。]+\s*$/, '')
+      const label = plainStepText(s.text).replace(/[.。]+\s*$/, '')
       // "Waits for" names earlier steps; a step that names none follows the one before it.
       const after = s.after.length ? s.after : s.position > 1 && !s.links.length ? [s.position - 1] : []
       input.push({

@@ -13,11 +13,6 @@ export function setMailCatcher(next: Promise<MailCatcher> | undefined) {
   catcher = next
 }
 
-/** The local catcher once it listens, or undefined when mail goes to a configured SMTP server. */
-export async function useMailCatcher(): Promise<MailCatcher | undefined> {
-  return catcher
-}
-
 export async function sendMail(message: OutgoingMail): Promise<{ messageId: string }> {
   const config = useRuntimeConfig()
   const smtpUrl = String(config.mail.smtpUrl || '')

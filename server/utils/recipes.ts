@@ -6,6 +6,7 @@ import type { RecipeCreateBody, RecipeUpdateBody } from '../../shared/utils/reci
 import type { StudioAction } from '../../shared/utils/roles'
 import type { RecipeDraft } from '../../shared/types/recipe'
 import { DomainError } from '../../shared/utils/domain-error'
+import type { KitchenProfile } from '../../shared/utils/plan-types'
 
 type Loaded = Recipe & { ingredients: RecipeIngredient[]; steps: RecipeStep[] }
 
@@ -130,7 +131,7 @@ export async function studioSettings(studioId: number) {
   return {
     id: s.id, name: s.name, locale: s.locale as string, currency: s.currency as string,
     budgetPerServingMinor: (s.budgetPerServingMinor ?? null) as number | null, cupUnit: s.cupUnit as string,
-    unitSystem: s.unitSystem as string, kitchen: s.kitchen as { hands: number; burners: number; ovens: number; racksPerOven: number; parallelRecipes: boolean },
+    unitSystem: s.unitSystem as string, kitchen: s.kitchen as KitchenProfile,
   }
 }
 

@@ -1,3 +1,4 @@
+import { DEFAULT_KITCHEN, type KitchenProfile } from '../../../shared/utils/plan-types'
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
 
 export class Studio extends Model<InferAttributes<Studio>, InferCreationAttributes<Studio>> {
@@ -13,7 +14,7 @@ export class Studio extends Model<InferAttributes<Studio>, InferCreationAttribut
   /** The unit system shoots and views default to: 'metric' or 'us'. */
   declare unitSystem: CreationOptional<string>
   /** The kitchen the cook plan runs against. */
-  declare kitchen: CreationOptional<{ hands: number; burners: number; ovens: number; racksPerOven: number; parallelRecipes: boolean }>
+  declare kitchen: CreationOptional<KitchenProfile>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 }
@@ -33,7 +34,7 @@ export function initStudio(sequelize: Sequelize) {
         type: DataTypes.TEXT,
         get(this: Studio) {
           const raw = this.getDataValue('kitchen') as unknown as string | null
-          return raw ? JSON.parse(raw) : { hands: 1, burners: 4, ovens: 1, racksPerOven: 1, parallelRecipes: true }
+          return raw ? JSON.parse(raw) : { ...DEFAULT_KITCHEN }
         },
         set(this: Studio, value: unknown) {
           this.setDataValue('kitchen', JSON.stringify(value) as never)
