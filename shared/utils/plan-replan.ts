@@ -85,7 +85,10 @@ function readProgress(net: PlanNet, progress: PlanProgress): Fixed {
       if (end < start) throw new PlanError('bad-input', `“${label}” is marked ${word} from ${clockText(start)} to ${clockText(end)}; it cannot end before it starts.`, [id])
       if (start > now) throw new PlanError('bad-input', `“${label}” is marked ${word} from ${clockText(start)}, after now (${clockText(now)}).`, [id])
       if (state === DONE && end > now) throw new PlanError('bad-input', `“${label}” is marked done at ${clockText(end)}, after now (${clockText(now)}).`, [id])
-      if (state === RUNNING && end < now) (end = now), fixed.overdue.push(id)
+      if (state === RUNNING && end < now) {
+        end = now
+        fixed.overdue.push(id)
+      }
       fixed.state[v] = state
       fixed.start[v] = start
       fixed.end[v] = end
@@ -134,9 +137,16 @@ function bestReplan(net: PlanNet, fixed: Fixed, times: PlanTimes, previous: Plan
   if (previous && Array.isArray(previous.steps)) {
     const before = new Map(previous.steps.map((s) => [s.id, s.start]))
     // Milestones between recipes hold nothing: they go as soon as they may.
-    const prio = Float64Array.from({ length: net.n }, (_, v) => (v >= net.stepCount ? -Infinity : before.has(net.ids[v]!) ? toMs(before.get(net.ids[v]!)!) : times.ls[v]!))
+    const prio = Float64Array.from({ length: net.n }, (_, v) => {
+      if (v >= net.stepCount) return -Infinity
+      const was = before.get(net.ids[v]!)
+      return was === undefined ? times.ls[v]! : toMs(was)
+    })
     best = scheme(prio, times.ls)
-    if (best) (bestLength = lengthOf(net, best)), (rule = 'the plan being followed')
+    if (best) {
+      bestLength = lengthOf(net, best)
+      rule = 'the plan being followed'
+    }
   }
   const margin = best ? STABLE_MARGIN : 0
   let challenger: Float64Array | null = null
@@ -146,9 +156,16 @@ function bestReplan(net: PlanNet, fixed: Fixed, times: PlanTimes, previous: Plan
     const S = scheme(r.prio(), r.tie)
     if (!S) continue
     const length = lengthOf(net, S)
-    if (length < challengerLength) (challenger = S), (challengerLength = length), (challengerRule = r.name)
+    if (length < challengerLength) {
+      challenger = S
+      challengerLength = length
+      challengerRule = r.name
+    }
   }
-  if (challenger && challengerLength <= bestLength - margin) (best = challenger), (rule = challengerRule)
+  if (challenger && challengerLength <= bestLength - margin) {
+    best = challenger
+    rule = challengerRule
+  }
   if (!best) throw new Error('The re-plan found no schedule; this is a fault in the planner.')
   return { S: best, rule }
 }
@@ -171,7 +188,11 @@ function findCollisions(net: PlanNet, fixed: Fixed, S: Float64Array): PlanCollis
       const u = eFrom[e]!
       const b = S[u]! + eW[e]!
       const timer = u < stepCount && !hands[u] && eFinish[e] === 1 && ePlain[e] === 1
-      if (b > bound || (b === bound && timer)) (bound = b), (by = u), (byEdge = e)
+      if (b > bound || (b === bound && timer)) {
+        bound = b
+        by = u
+        byEdge = e
+      }
     }
     if (by < 0 || by >= stepCount || hands[by] || !eFinish[byEdge] || !ePlain[byEdge]) continue
     const due = Math.max(fixed.now, bound)
@@ -191,7 +212,10 @@ function findCollisions(net: PlanNet, fixed: Fixed, S: Float64Array): PlanCollis
       if (s >= to || f <= from) continue
       events.push([Math.max(s, from), 1], [f, -1])
       const key = s <= due ? f - 1e12 : s
-      if (key < heldKey) (held = u), (heldKey = key)
+      if (key < heldKey) {
+        held = u
+        heldKey = key
+      }
     }
     events.sort((a, b) => a[0] - b[0] || a[1] - b[1])
     let level = 0
@@ -237,7 +261,8 @@ export function replanCook(input: PlanInput, progress: PlanProgress): ReplanResu
     const end = (S[v]! + net.dur[v]!) / 1000
     makespan = Math.max(makespan, end)
     const was = before.get(net.ids[v]!)
-    steps.push({ id: net.ids[v]!, start, end, lane: lane[v]!, handsLane: handsLane[v]!, rack: rack[v]!, state: states[fixed.state[v]!]!, moved: was === undefined ? null : start - was })
+    const state = states[fixed.state[v]!]!
+    steps.push({ id: net.ids[v]!, start, end, lane: lane[v]!, handsLane: handsLane[v]!, rack: rack[v]!, state, moved: was === undefined ? null : start - was })
   }
   const pending = new Set(steps.filter((s) => s.state === 'pending').map((s) => s.id))
   return {

@@ -92,7 +92,7 @@ export function planAssignLanes(net: PlanNet, S: Float64Array, tolerant = false)
     if (!slots) free.set(kind, (slots = Number.isFinite(fixed[kind]) ? new Array(fixed[kind]).fill(-Infinity) : []))
     if (end === start && slots.length) return 0
     let k = slots.findIndex((f) => f <= start)
-    if (k < 0 && tolerant && slots.length) k = slots.indexOf(Math.min(...slots))
+    if (k < 0 && tolerant && Number.isFinite(fixed[kind]) && slots.length) k = slots.indexOf(Math.min(...slots))
     if (k < 0) {
       if (Number.isFinite(fixed[kind])) throw new Error(`The cook plan overfilled the ${kind} lanes; this is a fault in the planner.`)
       k = slots.push(-Infinity) - 1
