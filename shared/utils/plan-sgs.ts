@@ -210,8 +210,20 @@ class SerialRun {
     this.reset()
     const { comps, comp, outOff, outEdges, eTo } = this.net
     const pinned = this.pins?.start
-    // Fixed nodes hold the kitchen before anything else is placed, and come first in the order.
-    if (pinned) for (let v = 0; v < this.net.n; v++) if (!Number.isNaN(pinned[v]!)) this.place(v, pinned[v]!)
+    // Fixed nodes hold the kitchen before anything else is placed, and come first in the order; one that
+    // ends by the release holds nothing (nothing else starts before the release).
+    if (pinned) {
+      for (let v = 0; v < this.net.n; v++) {
+        const t = pinned[v]!
+        if (Number.isNaN(t)) continue
+        if (t + this.net.dur[v]! > this.pins!.release) this.place(v, t)
+        else {
+          this.S[v] = t
+          this.placed[v] = 1
+          this.maxEnd = Math.max(this.maxEnd, t + this.net.dur[v]!)
+        }
+      }
+    }
     const isPinned = (v: number) => pinned !== undefined && !Number.isNaN(pinned[v]!)
     const C = comps.length
     const waiting = this.waiting.slice()
