@@ -89,6 +89,29 @@ describe('re-plan, worked by hand', () => {
     expect(at(re, 'strain')).toMatchObject({ start: 1920, end: 2100 })
   })
 
+  it('a running timer with nothing left to run is not overdue; what waits for it starts now', () => {
+    // Worked by hand: the stock ends exactly now, at 30 min.
+    const withStrain: PlanInput = { ...soup, steps: [...soup.steps, { id: 'strain', duration: 3 * MIN, handsOn: true, after: ['stock'] }] }
+    const done = { chop: { start: 0, end: 300 }, saute: { start: 300, end: 900 }, season: { start: 900, end: 1020 } }
+    const re = replanCook(withStrain, { now: 1800, done, running: { stock: { start: 0, end: 1800 } } })
+    expect([re.overdue, at(re, 'stock').end, at(re, 'strain').start]).toEqual([[], 1800, 1800])
+  })
+
+  it('a kitchen that cooks one recipe at a time keeps the next recipe waiting for the running one', () => {
+    // Worked by hand: the custard bakes until 40 min; the salad (next recipe) waits for it although the cook is free.
+    const input: PlanInput = {
+      kitchen: { hands: 1, ovens: 1, parallelRecipes: false },
+      steps: [
+        { id: 'mix', duration: 10 * MIN, handsOn: true, recipe: 'custard' },
+        { id: 'bake', duration: 30 * MIN, handsOn: false, station: 'oven', recipe: 'custard', after: ['mix'] },
+        { id: 'toss', duration: 5 * MIN, handsOn: true, recipe: 'salad' },
+      ],
+    }
+    const re = replanCook(input, { now: 900, done: { mix: { start: 0, end: 600 } }, running: { bake: { start: 600, end: 2400 } }, previous: planCook(input) })
+    expect(at(re, 'toss')).toMatchObject({ start: 2400, end: 2700 })
+    expect(re.makespan).toBe(2700)
+  })
+
   it('a step marked done in zero time holds nothing and lets its successor start now', () => {
     // Worked by hand: chop marked done from 1:00 to 1:00 (skipped); sauté starts at now, 1:00.
     const re = replanCook(soup, { now: 60, done: { chop: { start: 60, end: 60 } } })
