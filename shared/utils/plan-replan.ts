@@ -7,9 +7,10 @@
 // - Every other step is scheduled again, no earlier than now, by the same serial schedule-generation
 //   scheme with the same capacities (plan-sgs.ts; Kolisch, "Serial and parallel resource-constrained
 //   project scheduling methods revisited", EJOR 1996). The first order tried is the plan being followed
-//   (its start times as priorities), so cues do not jump about: the serial scheme decoding a feasible
-//   plan in start order starts no step later than that plan did (each step's slot is still free, the
-//   steps before it having only moved earlier). Then one pass of each of the planner's priority rules;
+//   (its start times as priorities), so cues do not jump about: while the kitchen keeps to that plan,
+//   the serial scheme decoding it in start order starts no step later than it did (each step's slot is
+//   still free, the steps before it having only moved earlier; tied groups aside, for which this is not
+//   proven). Then one pass of each of the planner's priority rules;
 //   one of those replaces the followed order only when it finishes at least a minute earlier.
 //   No sampling and no justification: a re-plan must take milliseconds.
 // - A finish-together link whose first step is already done or running becomes a lower bound: the
