@@ -28,9 +28,10 @@ export function planInnerEdges(net: PlanNet, c: number): number[] {
   return inner
 }
 
-export function planCriticalTimes(net: PlanNet): PlanTimes {
+/** `floor`, when given, is the earliest start of each node before any link (a re-plan: the present, or a fixed start). */
+export function planCriticalTimes(net: PlanNet, floor?: ArrayLike<number>): PlanTimes {
   const { n, comps, comp, eFrom, eTo, eW, inOff, inEdges, outOff, outEdges, dur } = net
-  const es = new Float64Array(n)
+  const es = floor ? Float64Array.from(floor) : new Float64Array(n)
   const inner: number[][] = comps.map((_, c) => (comps[c]!.length > 1 ? planInnerEdges(net, c) : []))
   for (let c = 0; c < comps.length; c++) {
     for (const v of comps[c]!) {

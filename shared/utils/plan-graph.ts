@@ -4,8 +4,11 @@
 import type { PlanNet } from './plan-network'
 import { PlanError } from './plan-types'
 
-/** "start(to) ≥ start(from) + w", ms; `plain` for an edge from a link, false for the back edge of a finish-together link. */
-export interface PlanEdge { from: number; to: number; w: number; plain: boolean }
+/**
+ * "start(to) ≥ start(from) + w", ms; `plain` for an edge from a link, false for the back edge of a finish-together link;
+ * `finish` when w counts the duration of `from` (it waits for the end of `from`), so a re-plan can put in the real duration.
+ */
+export interface PlanEdge { from: number; to: number; w: number; plain: boolean; finish?: boolean }
 
 /** Adjacency in compressed rows: offsets per node, then edge indices grouped by `key` node. */
 export function planCsr(n: number, key: Int32Array): [Int32Array, Int32Array] {
@@ -174,7 +177,7 @@ export function planStronglyConnected(net: PlanNet, rank: Int32Array) {
   })
 }
 
-/** The same network run backwards in time: start' = T − finish. Edges turn round; groups stay. */
+/** The same network run backwards in time: start' = T − finish. Edges turn round; groups stay (eFinish is not turned: only re-plans read it). */
 export function planMirror(net: PlanNet): PlanNet {
   const { eFrom, eTo, eW, dur, comps } = net
   const last = comps.length - 1

@@ -31,6 +31,8 @@ export interface PlanNet {
   eW: Float64Array
   /** 1 for an edge that comes from a link (or a milestone), 0 for the back edge of a finish-together link. */
   ePlain: Uint8Array
+  /** 1 for an edge whose weight counts the duration of its `from` node (finish-start, finish-together, into a milestone). */
+  eFinish: Uint8Array
   outOff: Int32Array
   outEdges: Int32Array
   inOff: Int32Array
@@ -151,7 +153,7 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
         throw new PlanError('bad-input', `The lag of “${label}” after “${labels[i]}” must be zero or more seconds (got ${String(link.lag)}); to overlap them, use a start-start or finish-together link.`, [ids[i]!, ids[j]!])
       }
       const lag = link.lag === undefined ? undefined : toMs(link.lag as number)
-      if (kind === 'finish-start') edges.push({ from: i, to: j, w: dur[i]! + (lag ?? 0), plain: true })
+      if (kind === 'finish-start') edges.push({ from: i, to: j, w: dur[i]! + (lag ?? 0), plain: true, finish: true })
       else if (kind === 'start-start') edges.push({ from: i, to: j, w: lag ?? 0, plain: true })
       else {
         const lead = lag ?? dur[j]!
@@ -161,7 +163,7 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
         if (lead < dur[j]!) {
           throw new PlanError('impossible-lag', `“${label}” lasts ${planDurationText(dur[j]!)} but must finish with “${labels[i]}”, ${planDurationText(lead)} after it goes in; make the lead at least ${planDurationText(dur[j]!)}.`, [ids[i]!, ids[j]!])
         }
-        edges.push({ from: i, to: j, w: dur[i]! - lead, plain: true }, { from: j, to: i, w: -(dur[i]! - lead), plain: false })
+        edges.push({ from: i, to: j, w: dur[i]! - lead, plain: true, finish: true }, { from: j, to: i, w: -(dur[i]! - lead), plain: false })
       }
     }
   })
@@ -174,7 +176,7 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
     for (let k = 0; k + 1 < order.length; k++) {
       const m = n++
       recipes.forEach((r, i) => {
-        if (r === order[k]) edges.push({ from: i, to: m, w: dur[i]!, plain: true })
+        if (r === order[k]) edges.push({ from: i, to: m, w: dur[i]!, plain: true, finish: true })
         if (r === order[k + 1]) edges.push({ from: m, to: i, w: 0, plain: true })
       })
       ids.push(''), labels.push(''), recipes.push(null), dur.push(0), hands.push(0), station.push(0)
@@ -189,6 +191,7 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
   const net: PlanNet = {
     n, stepCount, ids, labels, recipes, dur, hands: Uint8Array.from(hands), station: Int8Array.from(station), cap, ovens, racks,
     eFrom, eTo, eW: Float64Array.from(edges, (e) => e.w), ePlain: Uint8Array.from(edges, (e) => (e.plain ? 1 : 0)),
+    eFinish: Uint8Array.from(edges, (e) => (e.finish ? 1 : 0)),
     outOff, outEdges, inOff, inEdges, comp: new Int32Array(n), comps: [],
   }
   const rank = planTopoRanks(n, eFrom, eTo, Uint8Array.from(edges, (e) => (e.plain ? 1 : 0)))!

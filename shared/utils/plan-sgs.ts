@@ -13,6 +13,16 @@ import { PlanError } from './plan-types'
 
 const RETRIES = 16
 
+/**
+ * For a re-plan: nodes whose start is already fixed (done or under way: `start` in ms, NaN for the others)
+ * and the present (`release`, ms), before which no other node may start. A fixed node must have no links
+ * into it (they are history); it is placed first, at its start, whatever the kitchen holds then.
+ */
+export interface PlanPins {
+  start: Float64Array
+  release: number
+}
+
 /** One run of the serial scheme over a network; reusable for the tie check. */
 class SerialRun {
   readonly S: Float64Array
@@ -35,7 +45,10 @@ class SerialRun {
   private readonly keyI: Int32Array
   private readonly heap: Int32Array
 
-  constructor(readonly net: PlanNet) {
+  constructor(
+    readonly net: PlanNet,
+    private readonly pins: PlanPins | null = null,
+  ) {
     const n = net.n
     const C = net.comps.length
     this.waiting = new Int32Array(C)
@@ -99,7 +112,7 @@ class SerialRun {
   /** Earliest start of v from the steps outside its group (all placed). */
   private fromOutside(v: number): number {
     const { inOff, inEdges, eFrom, eW, comp } = this.net
-    let es = 0
+    let es = this.pins ? this.pins.release : 0
     for (let k = inOff[v]!; k < inOff[v + 1]!; k++) {
       const e = inEdges[k]!
       if (comp[eFrom[e]!] !== comp[v]) es = Math.max(es, this.S[eFrom[e]!]! + eW[e]!)
@@ -196,6 +209,22 @@ class SerialRun {
   run(prio: ArrayLike<number>, tie: ArrayLike<number>): Float64Array | null {
     this.reset()
     const { comps, comp, outOff, outEdges, eTo } = this.net
+    const pinned = this.pins?.start
+    // Fixed nodes hold the kitchen before anything else is placed, and come first in the order; one that
+    // ends by the release holds nothing (nothing else starts before the release).
+    if (pinned) {
+      for (let v = 0; v < this.net.n; v++) {
+        const t = pinned[v]!
+        if (Number.isNaN(t)) continue
+        if (t + this.net.dur[v]! > this.pins!.release) this.place(v, t)
+        else {
+          this.S[v] = t
+          this.placed[v] = 1
+          this.maxEnd = Math.max(this.maxEnd, t + this.net.dur[v]!)
+        }
+      }
+    }
+    const isPinned = (v: number) => pinned !== undefined && !Number.isNaN(pinned[v]!)
     const C = comps.length
     const waiting = this.waiting.slice()
     const { keyP, keyT, keyI } = this
@@ -206,7 +235,8 @@ class SerialRun {
       const members = comps[c]!
       for (let i = 0; i < members.length; i++) {
         const v = members[i]!
-        const p = prio[v]!
+        if (isPinned(v) && members.length > 1) throw new Error('A fixed step is tied into a group; this is a fault in the re-planner.')
+        const p = isPinned(v) ? -Infinity : prio[v]!
         const q = tie[v]!
         if (p < keyP[c]! || (p === keyP[c] && (q < keyT[c]! || (q === keyT[c] && v < keyI[c]!)))) (keyP[c] = p), (keyT[c] = q), (keyI[c] = v)
       }
@@ -241,8 +271,9 @@ class SerialRun {
     while (size) {
       const c = pop()
       const members = comps[c]!
-      if (members.length === 1) this.place(members[0]!, this.fit(members[0]!, this.fromOutside(members[0]!)))
-      else if (!this.placeGroup(members)) return null
+      if (members.length === 1) {
+        if (!isPinned(members[0]!)) this.place(members[0]!, this.fit(members[0]!, this.fromOutside(members[0]!)))
+      } else if (!this.placeGroup(members)) return null
       for (let i = 0; i < members.length; i++) {
         const v = members[i]!
         for (let k = outOff[v]!; k < outOff[v + 1]!; k++) {
@@ -268,10 +299,11 @@ class SerialRun {
 
 /**
  * The serial scheme on one network, reusable: `schedule(prio, tie)` gives the start of each node in ms
- * (lower priority first, ties by `tie`, then input order), or null when a tied group never fits.
+ * (lower priority first, ties by `tie`, then input order), or null when a tied group never fits. With
+ * `pins` (a re-plan), fixed nodes keep their starts and every other node starts at or after the release.
  */
-export function planSerialScheme(net: PlanNet): (prio: ArrayLike<number>, tie: ArrayLike<number>) => Float64Array | null {
-  const run = new SerialRun(net)
+export function planSerialScheme(net: PlanNet, pins: PlanPins | null = null): (prio: ArrayLike<number>, tie: ArrayLike<number>) => Float64Array | null {
+  const run = new SerialRun(net, pins)
   return (prio, tie) => run.run(prio, tie)
 }
 

@@ -136,3 +136,64 @@ export class PlanError extends Error {
     this.stepIds = stepIds
   }
 }
+
+/** What has happened so far in the shoot, for a re-plan (plan-replan.ts). Times in seconds from the start of the cook. */
+export interface PlanProgress {
+  /** The present on the shoot clock. */
+  now: number
+  /** Steps finished, with their real start and end. */
+  done?: Record<string, { start: number; end: number }>
+  /** Steps under way: their real start, and the end they are due at (a timer's deadline). */
+  running?: Record<string, { start: number; end: number }>
+  /** The plan being followed; its start times order the re-plan, so that it stays close. */
+  previous?: PlanResult | null
+}
+
+export interface ReplannedStep {
+  id: string
+  start: number
+  end: number
+  lane: string
+  handsLane: string | null
+  rack: number | null
+  state: 'done' | 'running' | 'pending'
+  /** Start − its start in the previous plan, seconds (positive: later); null without a previous plan or step. */
+  moved: number | null
+}
+
+/**
+ * A hands-on step that falls due when a timer ends (the end of an unattended step it waits for) but
+ * starts later because every cook's hands are then held: the food waits.
+ */
+export interface PlanCollision {
+  /** The hands-on step that will wait. */
+  stepId: string
+  /** The unattended step whose end makes it due. */
+  afterId: string
+  /** The hands-on step that holds the hands when it falls due (with several cooks, the one that frees first). */
+  heldBy: string
+  /** When its links let it start (the present, if that moment has passed). */
+  due: number
+  /** When the re-plan starts it. */
+  start: number
+  /** start − due, seconds. */
+  wait: number
+  text: string
+}
+
+export interface ReplanResult {
+  now: number
+  /** The projected finish of the cook. */
+  makespan: number
+  /** In the order of the input. */
+  steps: ReplannedStep[]
+  lanes: string[]
+  /** Cues for the unattended steps not yet started, in time order. */
+  cues: PlanCue[]
+  /** In order of when they fall due. */
+  collisions: PlanCollision[]
+  /** Running steps past their deadline: taken as still under way, ending now. */
+  overdue: string[]
+  /** The order that gave this re-plan: the plan being followed, or a priority rule. */
+  rule: string
+}

@@ -77,8 +77,12 @@ function bestSchedule(net: PlanNet, times: PlanTimes): { S: Float64Array; rule: 
   return { S: best, rule: bestRule }
 }
 
-/** Lane of every step: the lowest free lane of its kind at its start (interval colouring by start time). */
-function assignLanes(net: PlanNet, S: Float64Array) {
+/**
+ * Lane of every step: the lowest free lane of its kind at its start (interval colouring by start time).
+ * `tolerant` (a re-plan, whose past may have held more than the kitchen has): when every lane of a kind
+ * is taken, the one that frees first is shared instead of refusing.
+ */
+export function planAssignLanes(net: PlanNet, S: Float64Array, tolerant = false) {
   const count = net.stepCount
   const order = Array.from({ length: count }, (_, v) => v).sort((a, b) => S[a]! - S[b]! || a - b)
   const free = new Map<string, number[]>()
@@ -88,11 +92,12 @@ function assignLanes(net: PlanNet, S: Float64Array) {
     if (!slots) free.set(kind, (slots = Number.isFinite(fixed[kind]) ? new Array(fixed[kind]).fill(-Infinity) : []))
     if (end === start && slots.length) return 0
     let k = slots.findIndex((f) => f <= start)
+    if (k < 0 && tolerant && Number.isFinite(fixed[kind]) && slots.length) k = slots.indexOf(Math.min(...slots))
     if (k < 0) {
       if (Number.isFinite(fixed[kind])) throw new Error(`The cook plan overfilled the ${kind} lanes; this is a fault in the planner.`)
       k = slots.push(-Infinity) - 1
     }
-    slots[k] = end
+    slots[k] = Math.max(slots[k]!, end)
     return k
   }
   const lane: string[] = new Array(count)
@@ -123,7 +128,7 @@ function assignLanes(net: PlanNet, S: Float64Array) {
 }
 
 /** For each unattended step: when to start it and the hands-on step under way at that moment. */
-function leadCues(net: PlanNet, S: Float64Array, handsLane: (string | null)[]): PlanCue[] {
+export function planLeadCues(net: PlanNet, S: Float64Array, handsLane: (string | null)[]): PlanCue[] {
   const byLane = new Map<string, number[]>()
   for (let v = 0; v < net.stepCount; v++) {
     if (!net.hands[v] || net.dur[v] === 0) continue
@@ -180,7 +185,7 @@ export function planCook(input: PlanInput): PlanResult {
   const times = planCriticalTimes(net)
   planCheckTies(net)
   const { S, rule } = bestSchedule(net, times)
-  const { lane, handsLane, rack, lanes } = assignLanes(net, S)
+  const { lane, handsLane, rack, lanes } = planAssignLanes(net, S)
   const steps: PlannedStep[] = []
   let makespan = 0
   for (let v = 0; v < net.stepCount; v++) {
@@ -205,7 +210,7 @@ export function planCook(input: PlanInput): PlanResult {
     lanes,
     bounds: lowerBounds(net, times, makespan / 1000),
     criticalPath: planCriticalChain(net, times).map((v) => net.ids[v]!),
-    cues: leadCues(net, S, handsLane),
+    cues: planLeadCues(net, S, handsLane),
     rule,
   }
 }
