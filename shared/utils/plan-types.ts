@@ -149,13 +149,8 @@ export interface PlanProgress {
   previous?: PlanResult | null
 }
 
-export interface ReplannedStep {
-  id: string
-  start: number
-  end: number
-  lane: string
-  handsLane: string | null
-  rack: number | null
+/** A step of a re-plan: where it is now, as a first plan gives it, and how far along it is. */
+export interface ReplannedStep extends Pick<PlannedStep, 'id' | 'start' | 'end' | 'lane' | 'handsLane' | 'rack'> {
   state: 'done' | 'running' | 'pending'
   /** Start − its start in the previous plan, seconds (positive: later); null without a previous plan or step. */
   moved: number | null
