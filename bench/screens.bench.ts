@@ -63,6 +63,7 @@ async function lcpMs(s: Setup, path: string): Promise<number> {
     setTimeout(() => resolve(last), 1500)
   }))
   await page.context().close()
+  if (!(lcp > 0)) throw new Error(`no largest-contentful-paint entry on ${path}`)
   return lcp
 }
 
@@ -118,6 +119,7 @@ async function keyToPaint(page: Page, target: string, attr: string, rounds: numb
 }
 
 const ROUNDS = 10
+const LCP_RUNS = 5
 
 export const screenBenchmarks: Benchmark[] = [
   {
@@ -133,13 +135,17 @@ export const screenBenchmarks: Benchmark[] = [
     name: 'prompter LCP, CPU 4× slower',
     async run() {
       const s = await ready()
+      const prompter = `/shoots/${s.shootId}/prompter`
+      // One visit of each first, not counted: the server's first render of a route loads its code.
+      await lcpMs(s, prompter)
+      await lcpMs(s, '/join')
       const runs = [] as number[]
       const base = [] as number[]
-      for (let i = 0; i < 3; i++) {
-        runs.push(await lcpMs(s, `/shoots/${s.shootId}/prompter`))
+      for (let i = 0; i < LCP_RUNS; i++) {
+        runs.push(await lcpMs(s, prompter))
         base.push(await lcpMs(s, '/join'))
       }
-      return { figure: percentile(runs, 50) / 1000, unit: 's', baseline: percentile(base, 50) / 1000, bound: 1.0, note: 'median of 3; baseline: the join page' }
+      return { figure: percentile(runs, 50) / 1000, unit: 's', baseline: percentile(base, 50) / 1000, bound: 1.0, note: `median of ${LCP_RUNS}; baseline: the join page` }
     },
   },
   {
