@@ -18,6 +18,10 @@ export async function startBuiltApp(): Promise<{ url: string; databasePath: stri
     env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATABASE_PATH: databasePath, NUXT_DATABASE_SEED: 'always', NUXT_SESSION_PASSWORD: 'bench-session-password-of-at-least-32-characters', NUXT_PHOTOS_DIR: join(databasePath, '..', 'photos') },
     stdio: 'ignore',
   })
+  // run.ts ends with process.exit, and a benchmark that throws never reaches its stop(): the server
+  // goes with this process either way.
+  const killOnExit = () => child.kill('SIGTERM')
+  process.once('exit', killOnExit)
   const url = `http://127.0.0.1:${port}`
   for (let i = 0; i < 400; i++) {
     const health = await fetch(`${url}/api/health`).then((r) => r.json()).catch(() => null)
@@ -28,6 +32,8 @@ export async function startBuiltApp(): Promise<{ url: string; databasePath: stri
     url,
     databasePath,
     stop: () => new Promise((done) => {
+      process.off('exit', killOnExit)
+      if (child.exitCode !== null || child.signalCode !== null) return done()
       child.once('exit', () => done())
       child.kill('SIGTERM')
     }),
