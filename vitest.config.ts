@@ -18,7 +18,8 @@ export default defineConfig({
       { test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node' } },
       { test: { name: 'server', include: ['tests/server/**/*.test.ts'], ...builtApp } },
       // One browser at a time: two cores are shared with the servers under test.
-      { test: { name: 'browser', include: ['tests/browser/**/*.test.ts'], ...builtApp, fileParallelism: false } },
+      // A browser test walks a whole flow in real Chromium: minutes, not seconds, on a busy 2-core machine.
+      { test: { name: 'browser', include: ['tests/browser/**/*.test.ts'], ...builtApp, testTimeout: 180_000, fileParallelism: false } },
     ],
   },
 })
