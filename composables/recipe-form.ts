@@ -215,7 +215,9 @@ export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>;
       ...(s.id ? { id: s.id } : {}), text: s.text.trim(), script: s.script.split('\n').map((l) => l.trim()).filter(Boolean), handsOn: s.handsOn,
       durationMin: dMin ?? dMax, durationMax: dMax ?? dMin, station: s.station || null,
       after: s.after.map((u) => form.steps.findIndex((x) => x.uid === u) + 1).filter((p) => p > 0 && p < i + 1).sort((a, b) => a - b),
-      links: s.links.map((l) => ({ step: form.steps.findIndex((x) => x.uid === l.stepUid) + 1, kind: l.kind, lag: l.lag })).filter((l) => l.step > 0 && l.step < i + 1),
+      links: s.links
+        .map((l) => ({ step: form.steps.findIndex((x) => x.uid === l.stepUid) + 1, kind: l.kind, lag: l.lag }))
+        .filter((l) => l.step > 0 && l.step < i + 1),
       cameraShot: s.cameraShot.trim() || null, cameraNote: s.cameraNote.trim() || null, cautions: s.cautions, group: s.group.trim() || null,
     }
   })

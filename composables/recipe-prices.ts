@@ -3,7 +3,15 @@
 import type { UnitId } from '~~/shared/utils/units'
 import type { PriceRow } from '~/types/api'
 
-export interface PriceFormDraft { item: string; packageSize: string; packageUnit: string; price: string; currency: string; shop: string; boughtOn: string }
+export interface PriceFormDraft {
+  item: string
+  packageSize: string
+  packageUnit: string
+  price: string
+  currency: string
+  shop: string
+  boughtOn: string
+}
 
 export function emptyPriceDraft(currency: string): PriceFormDraft {
   return { item: '', packageSize: '', packageUnit: 'g', price: '', currency, shop: '', boughtOn: '' }
@@ -11,7 +19,8 @@ export function emptyPriceDraft(currency: string): PriceFormDraft {
 
 export function priceDraftFrom(p: PriceRow): PriceFormDraft {
   return {
-    item: p.item, packageSize: String(p.packageSize), packageUnit: p.packageUnit, price: String(minorToDecimal(p.priceMinor, p.currency).toFixed(currencyMinorDigits(p.currency))),
+    item: p.item, packageSize: String(p.packageSize), packageUnit: p.packageUnit,
+    price: String(minorToDecimal(p.priceMinor, p.currency).toFixed(currencyMinorDigits(p.currency))),
     currency: p.currency, shop: p.shop ?? '', boughtOn: p.boughtOn ?? '',
   }
 }
@@ -29,7 +38,10 @@ export function priceBodyFrom(d: PriceFormDraft): { body?: Record<string, unknow
     return { field: 'priceMinor', message: `price: ${(e as Error).message}.` }
   }
   return {
-    body: { item: d.item.trim(), packageSize: size, packageUnit: d.packageUnit, priceMinor, currency, shop: d.shop.trim() || null, boughtOn: d.boughtOn || null },
+    body: {
+      item: d.item.trim(), packageSize: size, packageUnit: d.packageUnit, priceMinor, currency,
+      shop: d.shop.trim() || null, boughtOn: d.boughtOn || null,
+    },
   }
 }
 

@@ -9,9 +9,12 @@ export function useShootNow(): Readonly<Ref<number>> {
   return inject(SHOOT_NOW, null) ?? useServerNow()
 }
 
-/** The screen's actions (next, previous, start the step's timer…), the same path as keys and voice. */
-export const SHOOT_ACTIONS: InjectionKey<(action: KeyAction) => boolean | void> = Symbol('shoot-actions')
+/** Runs one of the screen's actions; true when the screen has it and did it (useHandsFree's run). */
+export type ShootActionRunner = (action: KeyAction) => boolean
 
-export function useShootActions(): (action: KeyAction) => boolean | void {
+/** The screen's actions (next, previous, start the step's timer…), the same path as keys and voice. */
+export const SHOOT_ACTIONS: InjectionKey<ShootActionRunner> = Symbol('shoot-actions')
+
+export function useShootActions(): ShootActionRunner {
   return inject(SHOOT_ACTIONS, () => false)
 }

@@ -58,7 +58,10 @@ export function planCriticalTimes(net: PlanNet, floor?: ArrayLike<number>): Plan
       changed = false
       for (const e of inner[c]!) {
         const bound = ls[eTo[e]!]! - eW[e]!
-        if (bound < ls[eFrom[e]!]!) ls[eFrom[e]!] = bound, (changed = true)
+        if (bound < ls[eFrom[e]!]!) {
+          ls[eFrom[e]!] = bound
+          changed = true
+        }
       }
     }
   }
@@ -75,7 +78,11 @@ function relaxEarliest(net: PlanNet, c: number, inner: number[], es: Float64Arra
     for (const e of inner) {
       const to = net.eTo[e]!
       const bound = es[net.eFrom[e]!]! + net.eW[e]!
-      if (bound > es[to]!) es[to] = bound, pred.set(to, e), (last = to)
+      if (bound > es[to]!) {
+        es[to] = bound
+        pred.set(to, e)
+        last = to
+      }
     }
     if (last < 0) return
   }
@@ -94,8 +101,10 @@ function relaxEarliest(net: PlanNet, c: number, inner: number[], es: Float64Arra
     closed = u === v
   }
   // Should the walk not close (in theory it always does), name the whole group.
-  if (!closed || gain <= 0) circle = [...members], (gain = 0)
-  else circle.reverse()
+  if (!closed || gain <= 0) {
+    circle = [...members]
+    gain = 0
+  } else circle.reverse()
   const steps = circle.filter((u) => u < net.stepCount)
   const names = steps.map((u) => `“${net.labels[u]}”`).join(', ')
   const oneRecipe = circle.some((u) => u >= net.stepCount)

@@ -71,7 +71,10 @@ export function planCookExhaustive(input: PlanInput, maxSteps = 9): PlanOptimum 
     if (best <= lower) return
     if (placed.length === n) {
       lists++
-      if (length < best) (best = length), (bestStarts = [...start])
+      if (length < best) {
+        best = length
+        bestStarts = [...start]
+      }
       return
     }
     for (let j = 0; j < n; j++) {

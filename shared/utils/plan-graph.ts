@@ -25,7 +25,11 @@ export function planCsr(n: number, key: Int32Array): [Int32Array, Int32Array] {
 export function planTopoRanks(n: number, from: Int32Array, to: Int32Array, plain: Uint8Array): Int32Array | null {
   const indeg = new Int32Array(n)
   const out: number[][] = Array.from({ length: n }, () => [])
-  for (let e = 0; e < from.length; e++) if (plain[e]) indeg[to[e]!]!++, out[from[e]!]!.push(to[e]!)
+  for (let e = 0; e < from.length; e++) {
+    if (!plain[e]) continue
+    indeg[to[e]!]!++
+    out[from[e]!]!.push(to[e]!)
+  }
   // A binary heap keeps ties in input order, so the order is the same for the same input.
   const heap: number[] = []
   const push = (x: number) => {
@@ -72,7 +76,12 @@ export function planCheckAcyclic(n: number, edges: PlanEdge[], labels: string[],
   const indeg = new Int32Array(n)
   const out: number[][] = Array.from({ length: n }, () => [])
   const preds: number[][] = Array.from({ length: n }, () => [])
-  for (const e of edges) if (e.plain) indeg[e.to]!++, out[e.from]!.push(e.to), preds[e.to]!.push(e.from)
+  for (const e of edges) {
+    if (!e.plain) continue
+    indeg[e.to]!++
+    out[e.from]!.push(e.to)
+    preds[e.to]!.push(e.from)
+  }
   const queue: number[] = []
   for (let i = 0; i < n; i++) if (!indeg[i]) queue.push(i)
   for (let q = 0; q < queue.length; q++) for (const v of out[queue[q]!]!) if (!--indeg[v]!) queue.push(v)
@@ -110,7 +119,10 @@ export function planRecipeOrder(recipes: (string | null)[], edges: PlanEdge[]): 
   for (const e of edges) {
     const a = recipes[e.from]
     const b = recipes[e.to]
-    if (e.plain && a != null && b != null && a !== b && !out[pos.get(a)!]!.has(pos.get(b)!)) out[pos.get(a)!]!.add(pos.get(b)!), indeg[pos.get(b)!]!++
+    if (e.plain && a != null && b != null && a !== b && !out[pos.get(a)!]!.has(pos.get(b)!)) {
+      out[pos.get(a)!]!.add(pos.get(b)!)
+      indeg[pos.get(b)!]!++
+    }
   }
   const order: string[] = []
   const done = new Uint8Array(names.length)
@@ -139,7 +151,8 @@ export function planStronglyConnected(net: PlanNet, rank: Int32Array) {
     if (idx[root] !== -1) continue
     callStack.push([root, outOff[root]!])
     idx[root] = low[root] = counter++
-    stack.push(root), (onStack[root] = 1)
+    stack.push(root)
+    onStack[root] = 1
     while (callStack.length) {
       const frame = callStack[callStack.length - 1]!
       const u = frame[0]
@@ -147,7 +160,8 @@ export function planStronglyConnected(net: PlanNet, rank: Int32Array) {
         const v = eTo[outEdges[frame[1]++]!]!
         if (idx[v] === -1) {
           idx[v] = low[v] = counter++
-          stack.push(v), (onStack[v] = 1)
+          stack.push(v)
+          onStack[v] = 1
           callStack.push([v, outOff[v]!])
         } else if (onStack[v]) low[u] = Math.min(low[u]!, idx[v]!)
         continue

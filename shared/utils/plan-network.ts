@@ -179,7 +179,12 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
         if (r === order[k]) edges.push({ from: i, to: m, w: dur[i]!, plain: true, finish: true })
         if (r === order[k + 1]) edges.push({ from: m, to: i, w: 0, plain: true })
       })
-      ids.push(''), labels.push(''), recipes.push(null), dur.push(0), hands.push(0), station.push(0)
+      ids.push('')
+      labels.push('')
+      recipes.push(null)
+      dur.push(0)
+      hands.push(0)
+      station.push(0)
     }
     planCheckAcyclic(n, edges, labels, ids, stepCount)
   }

@@ -50,7 +50,13 @@ export class PlanProfile {
     const b = this.split(e)
     const { t, u } = this
     for (let k = a; k < b; k++) u[k]! += q
-    if (u[b] === u[b - 1]) t.splice(b, 1), u.splice(b, 1)
-    if (a > 0 && u[a] === u[a - 1]) t.splice(a, 1), u.splice(a, 1)
+    if (u[b] === u[b - 1]) {
+      t.splice(b, 1)
+      u.splice(b, 1)
+    }
+    if (a > 0 && u[a] === u[a - 1]) {
+      t.splice(a, 1)
+      u.splice(a, 1)
+    }
   }
 }

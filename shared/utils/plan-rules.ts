@@ -94,7 +94,9 @@ export function planSampledRules(net: PlanNet, times: PlanTimes, best: () => Flo
       name: `${fromBest ? 'best so far' : 'latest start'}, sample ${s + 1}`,
       prio: () => {
         const base = fromBest ? best() : times.ls
-        return Float64Array.from({ length: n }, (_, v) => (fromBest ? base[v]! + (random() - 0.5) * mix * 0.5 * spread : (1 - mix) * base[v]! + mix * random() * spread))
+        return Float64Array.from({ length: n }, (_, v) => (fromBest
+          ? base[v]! + (random() - 0.5) * mix * 0.5 * spread
+          : (1 - mix) * base[v]! + mix * random() * spread))
       },
       tie: times.ls,
     }

@@ -97,14 +97,20 @@ class SerialRun {
     const d = this.net.dur[v]!
     this.S[v] = t
     this.placed[v] = 1
-    if (d > 0) this.resource(v, PLAN_HANDS)?.add(t, t + d, 1), this.resource(v, 1)?.add(t, t + d, 1)
+    if (d > 0) {
+      this.resource(v, PLAN_HANDS)?.add(t, t + d, 1)
+      this.resource(v, 1)?.add(t, t + d, 1)
+    }
     this.maxEnd = Math.max(this.maxEnd, t + d)
   }
 
   unplace(v: number) {
     const d = this.net.dur[v]!
     const t = this.S[v]!
-    if (d > 0) this.resource(v, PLAN_HANDS)?.add(t, t + d, -1), this.resource(v, 1)?.add(t, t + d, -1)
+    if (d > 0) {
+      this.resource(v, PLAN_HANDS)?.add(t, t + d, -1)
+      this.resource(v, 1)?.add(t, t + d, -1)
+    }
     this.S[v] = NaN
     this.placed[v] = 0
   }
@@ -127,7 +133,10 @@ class SerialRun {
     const size = queue.length
     let head = 0
     let tail = 0
-    for (let i = 0; i < sources.length; i++) (queue[tail++] = sources[i]!), (inQueue[sources[i]!] = 1)
+    for (let i = 0; i < sources.length; i++) {
+      queue[tail++] = sources[i]!
+      inQueue[sources[i]!] = 1
+    }
     while (head !== tail) {
       const u = queue[head]!
       head = (head + 1) % size
@@ -141,7 +150,11 @@ class SerialRun {
         const bound = forward ? value[u]! + eW[e]! : value[u]! - eW[e]!
         if (forward ? bound > value[v]! : bound < value[v]!) {
           value[v] = bound
-          if (!inQueue[v]) (queue[tail] = v), (tail = (tail + 1) % size), (inQueue[v] = 1)
+          if (!inQueue[v]) {
+            queue[tail] = v
+            tail = (tail + 1) % size
+            inQueue[v] = 1
+          }
         }
       }
     }
@@ -161,7 +174,10 @@ class SerialRun {
    */
   attempt(members: Int32Array, anchor: number): number {
     const { es, ls, low } = this
-    for (const v of members) (es[v] = low[v]!), (ls[v] = Infinity)
+    for (const v of members) {
+      es[v] = low[v]!
+      ls[v] = Infinity
+    }
     es[members[0]!] = Math.max(es[members[0]!]!, anchor)
     this.relax(members, true, es, true)
     for (const m of members) {
@@ -238,10 +254,15 @@ class SerialRun {
         if (isPinned(v) && members.length > 1) throw new Error('A fixed step is tied into a group; this is a fault in the re-planner.')
         const p = isPinned(v) ? -Infinity : prio[v]!
         const q = tie[v]!
-        if (p < keyP[c]! || (p === keyP[c] && (q < keyT[c]! || (q === keyT[c] && v < keyI[c]!)))) (keyP[c] = p), (keyT[c] = q), (keyI[c] = v)
+        if (p < keyP[c]! || (p === keyP[c] && (q < keyT[c]! || (q === keyT[c] && v < keyI[c]!)))) {
+          keyP[c] = p
+          keyT[c] = q
+          keyI[c] = v
+        }
       }
     }
-    const before = (a: number, b: number) => keyP[a]! < keyP[b]! || (keyP[a] === keyP[b] && (keyT[a]! < keyT[b]! || (keyT[a] === keyT[b] && keyI[a]! < keyI[b]!)))
+    const before = (a: number, b: number) =>
+      keyP[a]! < keyP[b]! || (keyP[a] === keyP[b] && (keyT[a]! < keyT[b]! || (keyT[a] === keyT[b] && keyI[a]! < keyI[b]!)))
     const heap = this.heap
     let size = 0
     const push = (c: number) => {
@@ -290,7 +311,10 @@ class SerialRun {
     this.emptyKitchen()
     const dist = this.distances(members)
     let anchor = 0
-    for (const v of members) (anchor = Math.max(anchor, -dist[v]!)), (this.low[v] = 0)
+    for (const v of members) {
+      anchor = Math.max(anchor, -dist[v]!)
+      this.low[v] = 0
+    }
     const missed = this.attempt(members, anchor)
     for (const v of members) if (this.placed[v]) this.unplace(v)
     return missed

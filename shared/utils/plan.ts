@@ -51,7 +51,11 @@ function bestSchedule(net: PlanNet, times: PlanTimes): { S: Float64Array; rule: 
   const consider = (S: Float64Array | null, rule: string) => {
     if (!S) return
     const length = lengthOf(net, S)
-    if (length < bestLength) (best = S), (bestLength = length), (bestRule = rule)
+    if (length < bestLength) {
+      best = S
+      bestLength = length
+      bestRule = rule
+    }
   }
   const finish = new Float64Array(n)
   const start = new Float64Array(n)
@@ -63,7 +67,10 @@ function bestSchedule(net: PlanNet, times: PlanTimes): { S: Float64Array; rule: 
     consider(forward, rule.name)
     if (!forward || bestLength <= lower) continue
     // Backwards in time: the step that finishes last goes first.
-    for (let v = 0; v < n; v++) (finish[v] = -(forward[v]! + dur[v]!)), (start[v] = -forward[v]!)
+    for (let v = 0; v < n; v++) {
+      finish[v] = -(forward[v]! + dur[v]!)
+      start[v] = -forward[v]!
+    }
     const back = backwardScheme(finish, start)
     if (!back) continue
     const length = lengthOf(net, back)

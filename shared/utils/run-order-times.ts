@@ -19,7 +19,12 @@ export interface SegmentTimes {
   state: 'done' | 'current' | 'to-come'
 }
 
-type StepTimes = Readonly<Record<string, { plannedStartMs: number | null; plannedEndMs: number | null; durationMin: number | null; durationMax: number | null }>>
+type StepTimes = Readonly<Record<string, {
+  plannedStartMs: number | null
+  plannedEndMs: number | null
+  durationMin: number | null
+  durationMax: number | null
+}>>
 
 function plannedFor(stepIds: readonly string[], steps: StepTimes): number | null {
   const known = stepIds.map((id) => steps[id]).filter((s) => !!s)

@@ -97,7 +97,9 @@ function roundOne(v: number, unit: UnitId | null, style: 'eighths' | 'cups' | 'h
  * Choose the unit and rounding for a measured or counted amount. A range is shown in the unit
  * its smaller end needs, so both ends stay measurable ("3–4½ tbsp", not "⅛–¼ cup").
  */
-function chooseDisplay(min: number, max: number, unit: UnitId | null, options: KitchenDisplayOptions): { unit: UnitId | null; min: number; max: number; render: (v: number, isRange: boolean) => Rounded } {
+function chooseDisplay(
+  min: number, max: number, unit: UnitId | null, options: KitchenDisplayOptions,
+): { unit: UnitId | null; min: number; max: number; render: (v: number, isRange: boolean) => Rounded } {
   const single = (u: UnitId | null, style: Parameters<typeof roundOne>[2], step?: number) => (v: number) => ({ text: roundOne(v, u, style, step), unit: u })
   const kind = unit ? unitKind(unit) : 'count'
   const conv = (to: UnitId) => ({ min: convertAmount(min, unit!, to), max: convertAmount(max, unit!, to) })
@@ -157,7 +159,9 @@ function exactNumber(v: number): string {
 }
 
 /** An amount (as stored, in its own unit) shown the way cooks measure, with the exact value. */
-export function formatKitchenAmount(min: number | null, max: number | null, unit: UnitId | null, options: KitchenDisplayOptions, toTaste = false): KitchenAmount {
+export function formatKitchenAmount(
+  min: number | null, max: number | null, unit: UnitId | null, options: KitchenDisplayOptions, toTaste = false,
+): KitchenAmount {
   if (min === null && max === null) return { text: toTaste ? 'to taste' : '', unit: null, min: null, max: null, exactText: '' }
   const lo = Math.min(min ?? max!, max ?? min!)
   const hi = Math.max(min ?? max!, max ?? min!)

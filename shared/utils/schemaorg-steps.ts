@@ -46,24 +46,41 @@ function timeOf(node: JsonObject, field: string, problems: RecipeImportProblem[]
   return perform === null && prep === null ? null : (perform ?? 0) + (prep ?? 0)
 }
 
-function extensions(node: JsonObject, field: string, problems: RecipeImportProblem[], text: string): Partial<RecipeStepDraft> & { durationMaxOverride?: number | null } {
-  const out: Partial<RecipeStepDraft> & { durationMaxOverride?: number | null } = {}
+type StepExtensions = Partial<RecipeStepDraft> & { durationMaxOverride?: number | null }
+
+function extensions(node: JsonObject, field: string, problems: RecipeImportProblem[], text: string): StepExtensions {
+  const out: StepExtensions = {}
   const bad = (name: string, want: string) => problems.push({ field: `${field}.${HOBLINE_LD_PREFIX}:${name}`, reason: `should be ${want}; ignored` })
   const script = hoblineProperty(node, 'script')
-  if (script !== undefined) Array.isArray(script) && script.every((l) => typeof l === 'string') ? (out.script = script as string[]) : bad('script', 'a list of lines')
+  if (script !== undefined) {
+    if (Array.isArray(script) && script.every((l) => typeof l === 'string')) out.script = script as string[]
+    else bad('script', 'a list of lines')
+  }
   const handsOn = hoblineProperty(node, 'handsOn')
-  if (handsOn !== undefined) typeof handsOn === 'boolean' ? (out.handsOn = handsOn) : bad('handsOn', 'true or false')
+  if (handsOn !== undefined) {
+    if (typeof handsOn === 'boolean') out.handsOn = handsOn
+    else bad('handsOn', 'true or false')
+  }
   const station = hoblineProperty(node, 'station')
-  if (station !== undefined) station === null || station === 'burner' || station === 'oven' || station === 'counter' ? (out.station = station) : bad('station', '"burner", "oven", "counter" or null')
+  if (station !== undefined) {
+    if (station === null || station === 'burner' || station === 'oven' || station === 'counter') out.station = station
+    else bad('station', '"burner", "oven", "counter" or null')
+  }
   const after = hoblineProperty(node, 'after')
-  if (after !== undefined) Array.isArray(after) && after.every((n) => Number.isInteger(n) && n > 0) ? (out.after = after as number[]) : bad('after', 'a list of earlier step positions')
+  if (after !== undefined) {
+    if (Array.isArray(after) && after.every((n) => Number.isInteger(n) && n > 0)) out.after = after as number[]
+    else bad('after', 'a list of earlier step positions')
+  }
   for (const name of ['cameraShot', 'cameraNote'] as const) {
     const v = hoblineProperty(node, name)
-    if (v !== undefined) v === null || typeof v === 'string' ? (out[name] = v) : bad(name, 'text')
+    if (v === undefined) continue
+    if (v === null || typeof v === 'string') out[name] = v
+    else bad(name, 'text')
   }
   const cautions = hoblineProperty(node, 'cautions')
-  if (cautions !== undefined) Array.isArray(cautions) && cautions.every(isCautionId) ? (out.cautions = cautions) : bad('cautions', 'a list of caution ids')
-  else out.cautions = [...new Set(suggestStepCautions(text).map((c) => c.id))]
+  if (cautions === undefined) out.cautions = [...new Set(suggestStepCautions(text).map((c) => c.id))]
+  else if (Array.isArray(cautions) && cautions.every(isCautionId)) out.cautions = cautions
+  else bad('cautions', 'a list of caution ids')
   const max = hoblineProperty(node, 'durationMax')
   if (max !== undefined) {
     try {

@@ -13,7 +13,10 @@ export interface RenderStepTextOptions extends KitchenDisplayOptions {
 }
 
 /** A step's text with its tokens replaced by scaled, kitchen-rounded amounts. */
-export function renderStepText(text: string, options: RenderStepTextOptions): { text: string; segments: StepTextSegment[]; problems: Array<{ token: string; reason: string }> } {
+export function renderStepText(
+  text: string,
+  options: RenderStepTextOptions,
+): { text: string; segments: StepTextSegment[]; problems: Array<{ token: string; reason: string }> } {
   const problems = stepTokenProblems(text, options.ingredients.map((i) => i.key))
   const bad = new Set(problems.map((p) => p.token))
   const segments: StepTextSegment[] = []
