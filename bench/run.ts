@@ -11,7 +11,9 @@ for (const bench of selected) {
   try {
     const result = await bench.run()
     const ratio = result.baseline ? result.figure / result.baseline : undefined
-    const pass = (result.bound === undefined || result.figure <= result.bound) && (result.minimum === undefined || result.figure >= result.minimum) && (result.ratioBound === undefined || ratio === undefined || ratio <= result.ratioBound)
+    const pass = (result.bound === undefined || result.figure <= result.bound)
+      && (result.minimum === undefined || result.figure >= result.minimum)
+      && (result.ratioBound === undefined || ratio === undefined || ratio <= result.ratioBound)
     rows.push({ name: bench.name, result, pass })
   } catch (error) {
     rows.push({ name: bench.name, error: (error as Error).message, pass: false })
