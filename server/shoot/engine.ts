@@ -4,7 +4,7 @@
 // memory for the ticker; the database is what counts (a restart reloads it, and timers that fell
 // due while the server was down fire at once).
 import { randomUUID } from 'node:crypto'
-import type { ShootActor, ShootMode, ShootSegment, ShootState } from '../../shared/types/shoot'
+import type { ShootActor, ShootMode, ShootPlan, ShootSegment, ShootState } from '../../shared/types/shoot'
 import type { ShootEventMessage } from '../../shared/types/socket-events'
 import { DomainError, type DomainErrorBody } from '../../shared/utils/domain-error'
 import { createShootState } from '../../shared/utils/shoot'
@@ -29,6 +29,7 @@ export interface NewShootInput {
   mode: ShootMode
   createdBy: number | null
   runOrder: ShootSegment[]
+  plan?: ShootPlan | null
 }
 
 export type ShootEngine = ReturnType<typeof createShootEngine>
@@ -54,7 +55,8 @@ export function createShootEngine({ store, broadcast, now = Date.now, newId = ()
   return {
     async create(input: NewShootInput): Promise<ShootRow> {
       if (!input.runOrder.length) throw new DomainError('invalid', 'The episode has no segments yet. Add a recipe to it before shooting.')
-      const row = await store.create({ ...input, state: (id) => createShootState({ id: String(id), mode: input.mode, runOrder: input.runOrder }) })
+      const { mode, runOrder, plan } = input
+      const row = await store.create({ ...input, state: (id) => createShootState({ id: String(id), mode, runOrder, plan }) })
       remember(row.id, row.state)
       return row
     },

@@ -1,43 +1,27 @@
 // What the shoot screens read for each step: the step's text with its amounts scaled and shown in
 // the studio's unit system, the ingredients the step uses with their allergens, the cautions, the
-// camera shot, and when the cook plan puts the step (ms on the shoot clock). Built once per shoot
+// camera shot, and when the shoot's first plan put the step (ms on the shoot clock). Built once per shoot
 // and kept until the episode, one of its recipes or the studio's settings change: a join or a
 // resync then costs three small reads, not a cook plan and the scaling of every recipe.
 import { Episode, Recipe, RecipeStep, Studio } from '../db/models'
-import { planEpisode } from '../utils/cook-plan'
-import type { KitchenProfile } from '../../shared/utils/plan-types'
 import { loadRecipe, studioSettings } from '../utils/recipes'
 import { scaleLoadedRecipe } from '../utils/recipe-maths'
 import type { ShootSnapshot } from '../../shared/types/socket-events'
 import { euAllergenLabel, type EuAllergenId } from '../../shared/utils/allergens'
 import { findStepTokens } from '../../shared/utils/step-text'
 import { CAUTIONS, isCautionId } from '../../shared/utils/cautions'
-import { isDomainError } from '../../shared/utils/domain-error'
 import type { ShootRow } from './store'
 
 export type ShootScript = Pick<ShootSnapshot, 'steps' | 'units' | 'makespanMs'>
-
-/** The cook plan's start and end of each step, in ms from the start of the cook; empty when the
- * episode cannot be planned (the plan page says why). */
-async function plannedTimes(episodeId: number | null, kitchen: KitchenProfile) {
-  const times = new Map<string, { start: number; end: number }>()
-  if (episodeId === null) return { times, makespanMs: null as number | null }
-  try {
-    const plan = await planEpisode(episodeId, kitchen)
-    for (const p of plan.steps) times.set(String(p.stepId), { start: p.start * 1000, end: p.end * 1000 })
-    return { times, makespanMs: plan.makespan * 1000 }
-  } catch (error) {
-    if (!isDomainError(error)) throw error
-    return { times, makespanMs: null }
-  }
-}
 
 /** Builds the script of a shoot from the database: the recipes of its steps, scaled, and the plan. */
 export async function buildShootScript(row: ShootRow): Promise<ShootScript> {
   const ids = new Set(stepIdsOf(row))
   const settings = await studioSettings(row.studioId)
   const units = settings.unitSystem as 'metric' | 'us'
-  const { times, makespanMs } = await plannedTimes(row.episodeId, settings.kitchen)
+  // The plan the shoot began with (server/shoot/plan.ts); none on a shoot the planner refused.
+  const first = row.state.plan?.first ?? null
+  const names = new Map((row.state.plan?.steps ?? []).map((p) => [p.id, p.name]))
   const steps: ShootScript['steps'] = {}
   for (const recipeId of await recipeIdsOf(row)) {
     const view = await loadRecipe(recipeId)
@@ -55,7 +39,7 @@ export async function buildShootScript(row: ShootRow): Promise<ShootScript> {
         return sc && v ? [{ scaled: sc, view: v }] : []
       })
       const allergens = [...new Set(used.flatMap((u) => (u.view.allergens?.eu ?? []) as EuAllergenId[]))].map(euAllergenLabel)
-      const plan = times.get(String(s.id))
+      const plan = first?.steps[String(s.id)]
       const cautions = allergens.length && !s.cautions.includes('allergen') ? [...s.cautions, 'allergen'] : s.cautions
       steps[String(s.id)] = {
         recipeId, recipeTitle: view.title, position: s.position, text: s.text, handsOn: s.handsOn,
@@ -66,12 +50,13 @@ export async function buildShootScript(row: ShootRow): Promise<ShootScript> {
         segments: rendered.get(s.id)?.segments ?? [{ text: s.text }],
         ingredients: used.map((u) => ({ key: u.scaled.key, item: u.scaled.item, amount: u.scaled.text })),
         allergens,
-        plannedStartMs: plan?.start ?? null,
-        plannedEndMs: plan?.end ?? null,
+        plannedStartMs: plan?.startMs ?? null,
+        plannedEndMs: plan?.endMs ?? null,
+        name: names.get(String(s.id)) ?? null,
       }
     }
   }
-  return { steps, units, makespanMs }
+  return { steps, units, makespanMs: first?.makespanMs ?? null }
 }
 
 const stepIdsOf = (row: ShootRow) => [...new Set(row.state.runOrder.flatMap((s) => s.stepIds).map(Number))]

@@ -18,13 +18,14 @@ export function plannedDuration(step: { durationMin: number | null; durationMax:
 
 const stepKey = (id: number) => String(id)
 
-export async function planEpisode(episodeId: number, kitchen: KitchenProfile) {
-  const episode = await loadEpisodeRunOrder(episodeId)
-  const recipeSegments = episode.segments.filter((s) => s.recipeId)
+type EpisodeRunOrder = Awaited<ReturnType<typeof loadEpisodeRunOrder>>
+type StepInfo = { recipeId: number; recipeTitle: string; label: string; step: RecipeStep }
 
+/** The planner's input for an episode's recipes, in the episode's order, and what each step is. */
+export function episodePlanSteps(episode: EpisodeRunOrder) {
   const input: PlanStep[] = []
-  const info = new Map<string, { recipeId: number; recipeTitle: string; label: string; step: RecipeStep }>()
-  for (const { recipeId, title: recipeTitle, steps: list } of recipeSegments) {
+  const info = new Map<string, StepInfo>()
+  for (const { recipeId, title: recipeTitle, steps: list } of episode.segments.filter((s) => s.recipeId)) {
     const atPosition = new Map(list.map((s) => [s.position, s]))
     for (const s of list) {
       // Tokens read as the ingredient's name; no closing full stop, since cues quote the label in a sentence.
@@ -46,7 +47,21 @@ export async function planEpisode(episodeId: number, kitchen: KitchenProfile) {
       info.set(stepKey(s.id), { recipeId: recipeId!, recipeTitle, label, step: s })
     }
   }
+  return { input, info }
+}
 
+/** The planner's refusal as a DomainError that names the steps in the cook's words. */
+function planRefusal(error: PlanError, info: Map<string, StepInfo>): DomainError {
+  const named = error.stepIds.map((id) => ({ stepId: Number(id), label: info.get(id)?.label ?? id, recipeTitle: info.get(id)?.recipeTitle ?? '' }))
+  return new DomainError(
+    error.code,
+    `${error.message}${named.length ? ` (steps: ${named.map((n) => `"${n.label}" in ${n.recipeTitle}`).join('; ')})` : ''}`,
+    { data: { stepIds: named.map((n) => n.stepId), steps: named } },
+  )
+}
+
+export async function planEpisode(episodeId: number, kitchen: KitchenProfile) {
+  const { input, info } = episodePlanSteps(await loadEpisodeRunOrder(episodeId))
   try {
     const plan = planCook({ steps: input, kitchen })
     return {
@@ -69,11 +84,6 @@ export async function planEpisode(episodeId: number, kitchen: KitchenProfile) {
     }
   } catch (error) {
     if (!(error instanceof PlanError)) throw error
-    const named = error.stepIds.map((id) => ({ stepId: Number(id), label: info.get(id)?.label ?? id, recipeTitle: info.get(id)?.recipeTitle ?? '' }))
-    throw new DomainError(
-      error.code,
-      `${error.message}${named.length ? ` (steps: ${named.map((n) => `"${n.label}" in ${n.recipeTitle}`).join('; ')})` : ''}`,
-      { data: { stepIds: named.map((n) => n.stepId), steps: named } },
-    )
+    throw planRefusal(error, info)
   }
 }

@@ -4,6 +4,7 @@
 // ("serverMs"); times on the shoot clock are ms from the start of the shoot ("shootMs").
 import type { z } from 'zod'
 import type { shootCommandSchema } from '../utils/shoot-schema'
+import type { PlanKitchen, PlanStep } from '../utils/plan-types'
 
 export type ShootRole = 'producer' | 'host' | 'camera' | 'viewer'
 export type ShootMode = 'rehearsal' | 'take'
@@ -33,7 +34,7 @@ export interface ShootStepRef extends ShootCursor {
 
 /**
  * The shoot clock: shootMs = anchorShootMs + (serverMs − anchorServerMs) × speed while running,
- * anchorShootMs while stopped. Speed is 1 in a take and 1–8 in a rehearsal.
+ * anchorShootMs while stopped. Speed is 1 in a take and 1–32 in a rehearsal.
  */
 export interface ShootClock {
   anchorServerMs: number
@@ -79,6 +80,13 @@ export interface ShootTimer {
   acknowledgedBy: ShootActor | null
   acknowledgedAtServerMs: number | null
   cancelledAtServerMs: number | null
+  /** 'step': started by reaching a wait of the cook plan (one per step); 'free': set by hand. Absent on old shoots: free. */
+  origin?: 'step' | 'free'
+  /** Kitchen time left when the "check it" signal comes (the short end of the step's range); null for none. */
+  checkLeftMs?: number | null
+  /** Shoot clock when it started, and when it was acknowledged or cancelled (for the live plan). */
+  startedAtShootMs?: number
+  closedAtShootMs?: number | null
 }
 
 export const SHOOT_MARKER_KINDS = ['good', 'flub', 'pickup', 'note'] as const
@@ -103,6 +111,75 @@ export interface ShootStepVisit {
   enteredShootMs: number
 }
 
+/** A step of the shoot's cook plan: the planner's input (seconds) and what a timer born from it is called. */
+export interface ShootPlanStep extends PlanStep {
+  recipeTitle: string
+  /** The step's short name ("Pasta water"), or null. */
+  name: string | null
+  /** The step's written range, ms: a wait with a time gets a timer of maxMs, checked at minMs; null without a time. */
+  minMs: number | null
+  maxMs: number | null
+}
+
+/** Where the run order came from: the cook plan, or the recipes in their written order and why. */
+export type ShootPlanSource =
+  | { kind: 'plan'; sideBySide: boolean }
+  | { kind: 'recipe-order'; reason: string; stepIds: string[] }
+
+/** A step of the live plan, ms on the shoot clock. */
+export interface ShootLiveStep {
+  startMs: number
+  endMs: number
+  lane: string
+  handsLane: string | null
+  state: 'done' | 'running' | 'pending'
+  /** How far its start moved since the plan before, ms (positive: later). */
+  movedMs: number | null
+}
+
+/** A hands-on step that will wait because the cook's hands are held when a timer ends. */
+export interface ShootCollision {
+  stepId: string
+  afterId: string
+  heldBy: string
+  dueMs: number
+  startMs: number
+  waitMs: number
+  text: string
+}
+
+/** A wait to start while other work goes on, from the live plan. */
+export interface ShootCue {
+  stepId: string
+  atMs: number
+  endsAtMs: number
+  during: string | null
+  text: string
+}
+
+/** The cook plan as it stands now: computed again from the present after every change. */
+export interface ShootLivePlan {
+  /** The shoot clock when it was computed. */
+  atShootMs: number
+  /** The projected finish. */
+  makespanMs: number
+  steps: Record<string, ShootLiveStep>
+  lanes: string[]
+  cues: ShootCue[]
+  collisions: ShootCollision[]
+  /** Steps past their planned end, taken as ending now. */
+  overdue: string[]
+}
+
+export interface ShootPlan {
+  source: ShootPlanSource
+  kitchen: PlanKitchen
+  steps: ShootPlanStep[]
+  /** The plan the shoot began with (planned vs projected); null when the episode could not be planned. */
+  first: { makespanMs: number; steps: Record<string, { startMs: number; endMs: number; lane: string }> } | null
+  live: ShootLivePlan | null
+}
+
 export interface ShootState {
   id: string
   mode: ShootMode
@@ -120,6 +197,8 @@ export interface ShootState {
   visits: ShootStepVisit[]
   startedAtServerMs: number | null
   endedAtServerMs: number | null
+  /** The cook plan the shoot runs (absent on shoots made before plans were run live). */
+  plan?: ShootPlan | null
 }
 
 // Limits: the zod schema (shared/utils/shoot-schema.ts) checks the shape of a command; the reducer
@@ -133,7 +212,7 @@ export const SHOOT_TIMER_MIN_MS = 1000
 export const SHOOT_TIMER_MAX_MS = 24 * 3600_000
 export const SHOOT_ADD_TIME_MAX_MS = 2 * 3600_000
 export const SHOOT_SPEED_MIN = 1
-export const SHOOT_SPEED_MAX = 8
+export const SHOOT_SPEED_MAX = 32
 
 export type ShootCommand = z.infer<typeof shootCommandSchema>
 export type ShootCommandType = ShootCommand['type']
@@ -143,7 +222,7 @@ export const SHOOT_COMMAND_TYPES: readonly ShootCommandType[] = [
   'shoot.start', 'shoot.pause', 'shoot.resume', 'shoot.end',
   'step.next', 'step.previous', 'step.jump',
   'timer.start', 'timer.pause', 'timer.resume', 'timer.addTime', 'timer.cancel', 'timer.acknowledge',
-  'rolling.set', 'clock.speed', 'marker.add',
+  'rolling.set', 'clock.speed', 'marker.add', 'wait.start',
 ]
 
 export type ShootErrorCode =

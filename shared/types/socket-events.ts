@@ -50,9 +50,11 @@ export interface ShootStepDetails {
   /** The cautions' texts (shared/utils/cautions.ts), so a screen shows them without that table. */
   cautionNotes: Array<{ id: string; label: string; text: string }>
   script: string[]
-  /** Where the cook plan puts the step, in ms on the shoot clock; null when unplanned. */
+  /** Where the shoot's first plan put the step, in ms on the shoot clock; null when unplanned (the live plan is state.plan.live). */
   plannedStartMs: number | null
   plannedEndMs: number | null
+  /** The step's short name ("Pasta water"), for its timer and cues; null when it has none. */
+  name: string | null
 }
 
 export interface ShootPresence {

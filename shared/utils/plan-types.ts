@@ -146,7 +146,7 @@ export interface PlanProgress {
   /** Steps under way: their real start, and the end they are due at (a timer's deadline). */
   running?: Record<string, { start: number; end: number }>
   /** The plan being followed; its start times order the re-plan, so that it stays close. */
-  previous?: PlanResult | null
+  previous?: { steps: Array<Pick<PlannedStep, 'id' | 'start'>> } | null
 }
 
 /** A step of a re-plan: where it is now, as a first plan gives it, and how far along it is. */

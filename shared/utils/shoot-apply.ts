@@ -14,10 +14,13 @@ import {
 } from '../types/shoot'
 import { shootClockAt, shootClockAtSpeed, shootClockStarted, shootClockStopped } from './shoot-clock'
 import {
-  isShootTimerLive, markDueTimers, shootTimerDueAt, shootTimerPausedAt, shootTimerRunningFrom, timerRemainingMs,
+  isShootTimerLive, markDueTimers, newShootTimer, shootTimerDueAt, shootTimerPausedAt, shootTimerRunningFrom, timerChecking,
+  timerRemainingMs,
 } from './shoot-timers'
 import { clockTextMs } from './clock-text'
 import { shootCursorMoved, shootCursorRef, shootSegmentPositions, shootStepRefAt } from './shoot'
+import { isTimedWait, shootPlanStep, startWait, stepTimerOf } from './shoot-waits'
+import { withLivePlan } from './shoot-live-plan'
 
 type Failure = { ok: false; error: ShootCommandError }
 type Change = { state: ShootState; events: ShootEvent[] }
@@ -37,22 +40,26 @@ export function applyKnownShootCommand(state: ShootState, command: ShootCommand,
   const base: ShootState = { ...marked.state, seq: state.seq }
   const outcome = dispatch(base, command, ctx, now)
   if (isFailure(outcome)) return outcome
+  // The rest of the plan follows what just happened (markers and the rolling flag change nothing in it).
+  const next = KEEPS_PLAN.has(command.type) ? outcome.state : withLivePlan(outcome.state, now)
   return {
     ok: true,
-    state: { ...outcome.state, seq: state.seq + 1 },
+    state: { ...next, seq: state.seq + 1 },
     events: [...marked.due.map(dueEvent), ...outcome.events],
   }
 }
 
+const KEEPS_PLAN = new Set<ShootCommand['type']>(['marker.add', 'rolling.set'])
+
 function dispatch(s: ShootState, cmd: ShootCommand, ctx: ShootCommandContext, now: number): Outcome {
   switch (cmd.type) {
-    case 'shoot.start': return startShoot(s, now)
+    case 'shoot.start': return startShoot(s, ctx, now)
     case 'shoot.pause': return pauseShoot(s, now)
     case 'shoot.resume': return resumeShoot(s, now)
     case 'shoot.end': return endShoot(s, cmd, now)
-    case 'step.next': return stepBy(s, 1, now)
-    case 'step.previous': return stepBy(s, -1, now)
-    case 'step.jump': return jumpTo(s, cmd, now)
+    case 'step.next': return stepBy(s, 1, ctx, now)
+    case 'step.previous': return stepBy(s, -1, ctx, now)
+    case 'step.jump': return jumpTo(s, cmd, ctx, now)
     case 'timer.start': return startTimer(s, cmd, ctx, now)
     case 'timer.pause': return pauseTimer(s, cmd, now)
     case 'timer.resume': return resumeTimer(s, cmd, now)
@@ -62,6 +69,7 @@ function dispatch(s: ShootState, cmd: ShootCommand, ctx: ShootCommandContext, no
     case 'rolling.set': return setRolling(s, cmd, now)
     case 'clock.speed': return setSpeed(s, cmd, now)
     case 'marker.add': return addMarker(s, cmd, ctx, now)
+    case 'wait.start': return startWaitNow(s, cmd, ctx, now)
     default: {
       const unknown: never = cmd
       return fail('invalid', `type: "${(unknown as { type: string }).type}" is not a shoot command`, 'type')
@@ -95,7 +103,7 @@ function releaseHeldTimers(s: ShootState, now: number, speed: number): { timers:
   return { timers, events }
 }
 
-function startShoot(s: ShootState, now: number): Outcome {
+function startShoot(s: ShootState, ctx: ShootCommandContext, now: number): Outcome {
   if (s.status !== 'ready') {
     return fail('already-started', s.status === 'paused' ? 'The shoot has started and is paused; resume it instead.' : 'The shoot is already running.')
   }
@@ -111,9 +119,10 @@ function startShoot(s: ShootState, now: number): Outcome {
     rollingSinceShootMs: s.rolling ? 0 : null,
     visits: [...s.visits, { stepRef, enteredServerMs: now, enteredShootMs: 0 }],
   }
+  const waited = startWait(next, stepRef.stepId, actorOf(ctx), now)
   return {
-    state: next,
-    events: [statusEvent(next, now), { type: 'step.entered', stepRef, atServerMs: now, shootMs: 0 }, ...released.events],
+    state: waited.state,
+    events: [statusEvent(next, now), { type: 'step.entered', stepRef, atServerMs: now, shootMs: 0 }, ...released.events, ...waited.events],
   }
 }
 
@@ -144,7 +153,7 @@ function endShoot(s: ShootState, cmd: ShootCommandOf<'shoot.end'>, now: number):
   const timers = s.timers.map((t) => {
     if (!isShootTimerLive(t)) return t
     events.push({ type: 'timer.changed', timerId: t.id, state: 'cancelled' })
-    return cancelled(t, now)
+    return cancelled(s, t, now)
   })
   if (s.rolling) events.push({ type: 'rolling.changed', rolling: false, atServerMs: now })
   const next: ShootState = {
@@ -162,32 +171,58 @@ function endShoot(s: ShootState, cmd: ShootCommandOf<'shoot.end'>, now: number):
 
 // ---- the cursor --------------------------------------------------------------------------------
 
-function moveCursor(s: ShootState, cursor: ShootCursor, now: number): Change {
+/** Moves the cursor; reaching a wait's beat starts its timer. */
+function moveCursor(s: ShootState, cursor: ShootCursor, ctx: ShootCommandContext, now: number): Change {
   const moved: ShootState = { ...s, cursor: { segment: cursor.segment, step: cursor.step } }
   if (s.status === 'ready') return { state: moved, events: [] } // the shoot will start here
   const stepRef = shootCursorRef(moved)
   const shootMs = shootClockAt(s.clock, now)
-  return {
-    state: { ...moved, visits: [...s.visits, { stepRef, enteredServerMs: now, enteredShootMs: shootMs }] },
-    events: [{ type: 'step.entered', stepRef, atServerMs: now, shootMs }],
-  }
+  const waited = startWait({ ...moved, visits: [...s.visits, { stepRef, enteredServerMs: now, enteredShootMs: shootMs }] }, stepRef.stepId, actorOf(ctx), now)
+  return { state: waited.state, events: [{ type: 'step.entered', stepRef, atServerMs: now, shootMs }, ...waited.events] }
 }
 
-function stepBy(s: ShootState, by: 1 | -1, now: number): Outcome {
-  const target = shootCursorMoved(s.runOrder, s.cursor, by)
+/** A wait whose timer the host already started from its cue: Next goes past its beat. */
+function waitStarted(s: ShootState, cursor: ShootCursor): boolean {
+  const step = shootPlanStep(s, shootStepRefAt(s.runOrder, cursor)?.stepId ?? null)
+  return isTimedWait(step) && !!stepTimerOf(s, step.id)
+}
+
+function stepBy(s: ShootState, by: 1 | -1, ctx: ShootCommandContext, now: number): Outcome {
+  let target = shootCursorMoved(s.runOrder, s.cursor, by)
   if (!target) {
     return by === 1
       ? fail('at-last-step', 'This is the last step of the run order; there is no next step.')
       : fail('at-first-step', 'This is the first step of the run order; there is no previous step.')
   }
-  return moveCursor(s, target, now)
+  while (by === 1 && waitStarted(s, target)) {
+    const after = shootCursorMoved(s.runOrder, target, 1)
+    if (!after) break
+    target = after
+  }
+  return moveCursor(s, target, ctx, now)
 }
 
-function jumpTo(s: ShootState, cmd: ShootCommandOf<'step.jump'>, now: number): Outcome {
+function jumpTo(s: ShootState, cmd: ShootCommandOf<'step.jump'>, ctx: ShootCommandContext, now: number): Outcome {
   const ref = shootStepRefAt(s.runOrder, cmd)
   if (!ref) return fail('no-such-step', noSuchStep(s, cmd), s.runOrder[cmd.segment] ? 'step' : 'segment')
   if (ref.segment === s.cursor.segment && ref.step === s.cursor.step) return fail('no-change', 'The cursor is already at that step.')
-  return moveCursor(s, ref, now)
+  return moveCursor(s, ref, ctx, now)
+}
+
+/** "Start it now": the host confirms a wait's cue before reaching its beat. */
+function startWaitNow(s: ShootState, cmd: ShootCommandOf<'wait.start'>, ctx: ShootCommandContext, now: number): Outcome {
+  if (s.status === 'ready') return fail('not-started', 'Start the shoot first; a wait starts on the shoot clock.')
+  const step = shootPlanStep(s, cmd.stepId)
+  if (!isTimedWait(step)) {
+    return fail('no-such-step', `stepId: "${cmd.stepId}" is not a wait with a time in this shoot's cook plan; start a timer by hand instead.`, 'stepId')
+  }
+  const started = stepTimerOf(s, step.id)
+  if (started) return fail('already-started', `"${started.label}" has already been started.`)
+  const waited = startWait(s, step.id, actorOf(ctx), now)
+  if (waited.state === s) {
+    return fail('too-many-timers', `${SHOOT_TIMER_SLOTS} timers are live, the most a shoot runs at once; acknowledge or cancel one first.`)
+  }
+  return waited
 }
 
 function noSuchStep(s: ShootState, at: ShootCursor): string {
@@ -234,16 +269,8 @@ function startTimer(s: ShootState, cmd: ShootCommandOf<'timer.start'>, ctx: Shoo
   const stepRef = cmd.stepRef ? shootStepRefAt(s.runOrder, cmd.stepRef) : shootCursorRef(s)
   if (!stepRef) return fail('no-such-step', `stepRef.${noSuchStep(s, cmd.stepRef!)}`, 'stepRef')
 
-  const base: ShootTimer = {
-    id, slot, label: cmd.label, sound: cmd.sound ?? null, stepRef, durationMs: cmd.durationMs,
-    deadlineServerMs: null, remainingMs: null, speed: s.clock.speed, state: 'running', heldByShoot: false,
-    startedAtServerMs: now, startedBy: actorOf(ctx), dueAtServerMs: null, acknowledgedBy: null,
-    acknowledgedAtServerMs: null, cancelledAtServerMs: null,
-  }
-  const held = s.mode === 'rehearsal' && !s.clock.running
-  const timer = held
-    ? { ...base, state: 'paused' as const, remainingMs: cmd.durationMs, heldByShoot: true }
-    : shootTimerRunningFrom(base, now, cmd.durationMs, s.clock.speed)
+  const spec = { id, slot, label: cmd.label, sound: cmd.sound ?? null, stepRef, durationMs: cmd.durationMs, origin: 'free' as const, checkLeftMs: null }
+  const timer = newShootTimer(s, spec, actorOf(ctx), now)
   return {
     state: { ...s, timers: [...s.timers, timer] },
     events: [{ type: 'timer.changed', timerId: id, state: timer.state }],
@@ -339,10 +366,10 @@ function addTime(s: ShootState, cmd: ShootCommandOf<'timer.addTime'>, now: numbe
   return replaceTimer(s, shootTimerRunningFrom(changed, now, after, t.speed))
 }
 
-function cancelled(t: ShootTimer, now: number): ShootTimer {
+function cancelled(s: ShootState, t: ShootTimer, now: number): ShootTimer {
   return {
     ...t, state: 'cancelled', remainingMs: Math.round(timerRemainingMs(t, now)), deadlineServerMs: null,
-    heldByShoot: false, cancelledAtServerMs: now,
+    heldByShoot: false, cancelledAtServerMs: now, closedAtShootMs: shootClockAt(s.clock, now),
   }
 }
 
@@ -351,7 +378,7 @@ function cancelTimer(s: ShootState, cmd: ShootCommandOf<'timer.cancel'>, now: nu
   if ('ok' in t) return t
   const closed = closedFailure(t)
   if (closed) return closed
-  return replaceTimer(s, cancelled(t, now))
+  return replaceTimer(s, cancelled(s, t, now))
 }
 
 function acknowledgeTimer(s: ShootState, cmd: ShootCommandOf<'timer.acknowledge'>, ctx: ShootCommandContext, now: number): Outcome {
@@ -359,10 +386,15 @@ function acknowledgeTimer(s: ShootState, cmd: ShootCommandOf<'timer.acknowledge'
   if ('ok' in t) return t
   const closed = closedFailure(t)
   if (closed) return closed
-  if (t.state !== 'due') {
+  // A wait may be called done from its "check it" moment on (the short end of its range).
+  if (t.state !== 'due' && !timerChecking(t, now)) {
     return fail('timer-not-due', `"${t.label}" has ${clockTextMs(timerRemainingMs(t, now))} left and is not ringing; cancel it to stop it early.`)
   }
-  return replaceTimer(s, { ...t, state: 'acknowledged', acknowledgedBy: actorOf(ctx), acknowledgedAtServerMs: now })
+  const done: ShootTimer = {
+    ...t, state: 'acknowledged', acknowledgedBy: actorOf(ctx), acknowledgedAtServerMs: now, closedAtShootMs: shootClockAt(s.clock, now),
+    deadlineServerMs: t.state === 'due' ? t.deadlineServerMs : null, remainingMs: null, heldByShoot: false,
+  }
+  return replaceTimer(s, done)
 }
 
 function dueEvent(t: ShootTimer): ShootEvent {

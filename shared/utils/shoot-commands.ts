@@ -28,6 +28,7 @@ export const SHOOT_COMMAND_ROLES: Readonly<Record<ShootCommandType, readonly Sho
   'rolling.set': ['producer', 'camera'],
   'clock.speed': ['producer'],
   'marker.add': ON_SET,
+  'wait.start': DRIVE,
 }
 
 /** What a command does, in words, for messages ("may not start timers"). */
@@ -48,6 +49,7 @@ export const SHOOT_COMMAND_PHRASES: Readonly<Record<ShootCommandType, string>> =
   'rolling.set': 'set the camera rolling flag',
   'clock.speed': 'change the rehearsal speed',
   'marker.add': 'add markers',
+  'wait.start': 'start a wait of the cook plan',
 }
 
 export function isShootCommandType(type: unknown): type is ShootCommandType {

@@ -4,7 +4,11 @@
 // while the sauce is being made. Side by side, the recipes' beats interleave in one cooking
 // segment; one recipe at a time, each recipe's segment holds its own beats (its waits still
 // overlap inside it). A plan that cannot be made leaves the recipes in their written order.
-import type { ShootSegment } from '../types/shoot'
+import type { ShootPlan, ShootPlanStep, ShootSegment } from '../types/shoot'
+import { planCook } from './plan'
+import { replanCook } from './plan-replan'
+import { PlanError, type KitchenProfile } from './plan-types'
+import { firstLivePlan } from './shoot-live-plan'
 
 export interface ScriptRecipe {
   /** The episode segment's id (`segment-12`), its recipe and title, in the episode's order. */
@@ -24,9 +28,7 @@ export interface ScriptPlannedStep {
 }
 
 /** What the shoot's run order came from, for the desk to say. */
-export type ScriptSource =
-  | { kind: 'plan'; sideBySide: boolean }
-  | { kind: 'recipe-order'; reason: string; stepIds: string[] }
+export type ScriptSource = ShootPlan['source']
 
 /** Beats in plan order: by planned start; at the same moment a wait goes first (it takes a moment
  * to start, and then it runs by itself), then the recipes' order, then the written order. */
@@ -75,4 +77,32 @@ export function shootRunOrderFromPlan(
 export function cookTitle(titles: string[]): string {
   if (titles.length <= 1) return titles[0] ?? 'Cooking'
   return `${titles.slice(0, -1).join(', ')} and ${titles.at(-1)}`
+}
+
+/**
+ * A new shoot's run order and cook plan: the first plan of the steps in the kitchen, the host's script
+ * in its order, and the live plan before anything has happened. A plan the planner refuses leaves the
+ * recipes in their written order, with the reason and the steps that keep it from being planned.
+ */
+export function planShootRun(recipes: ScriptRecipe[], steps: ShootPlanStep[], kitchen: KitchenProfile): { runOrder: ShootSegment[]; plan: ShootPlan } {
+  const ms = (seconds: number) => Math.round(seconds * 1000)
+  const input = { steps, kitchen }
+  try {
+    const first = planCook(input)
+    const handsOn = new Map(steps.map((s) => [s.id, s.handsOn]))
+    const { runOrder, source } = shootRunOrderFromPlan(recipes, {
+      sideBySide: kitchen.parallelRecipes,
+      steps: first.steps.map((p) => ({ stepId: p.id, start: p.start, end: p.end, handsOn: handsOn.get(p.id)! })),
+    })
+    const live = firstLivePlan(replanCook(input, { now: 0, previous: first }))
+    const firstSteps = Object.fromEntries(first.steps.map((p) => [p.id, { startMs: ms(p.start), endMs: ms(p.end), lane: p.lane }]))
+    return { runOrder, plan: { source, kitchen, steps, live, first: { makespanMs: ms(first.makespan), steps: firstSteps } } }
+  } catch (error) {
+    if (!(error instanceof PlanError)) throw error
+    const byId = new Map(steps.map((s) => [s.id, s]))
+    const named = error.stepIds.map((id) => byId.get(id)).filter((s): s is ShootPlanStep => !!s)
+    const reason = `${error.message}${named.length ? ` (steps: ${named.map((s) => `"${s.name ?? s.label ?? s.id}" in ${s.recipeTitle}`).join('; ')})` : ''}`
+    const { runOrder, source } = shootRunOrderFromPlan(recipes, null, { reason, stepIds: error.stepIds })
+    return { runOrder, plan: { source, kitchen, steps, first: null, live: null } }
+  }
 }

@@ -66,6 +66,7 @@ export const shootCommandSchema = z.discriminatedUnion('type', [
     text: z.string({ error: 'text must be text' }).trim()
       .max(SHOOT_MARKER_TEXT_MAX, { error: `text: at most ${SHOOT_MARKER_TEXT_MAX} characters` }).optional(),
   }).refine((m) => m.kind !== 'note' || (m.text ?? '').length > 0, { error: 'text: a note needs its text', path: ['text'] }),
+  z.object({ type: z.literal('wait.start'), stepId: shootIdSchema('stepId') }),
 ])
 
 export type ShootCommandParse = { ok: true; command: ShootCommand } | { ok: false; error: ShootCommandError }

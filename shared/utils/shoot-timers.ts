@@ -1,7 +1,8 @@
 // Shoot timers as deadlines. A running timer is a deadline on the server clock and the speed it
 // runs at (kitchen ms per server ms, see shoot-clock.ts); what is left is always drawn from the
 // deadline, never counted down. A paused timer keeps its kitchen time left.
-import type { ShootState, ShootTimer } from '../types/shoot'
+import type { ShootActor, ShootState, ShootStepRef, ShootTimer } from '../types/shoot'
+import { shootClockAt } from './shoot-clock'
 
 /** Running, paused or due: a timer that still holds its slot and needs someone's attention. */
 export function isShootTimerLive(timer: ShootTimer): boolean {
@@ -85,4 +86,34 @@ export function markDueTimers(state: ShootState, nowServerMs: number): { state: 
   })
   if (due.length === 0) return { state, due }
   return { state: { ...state, timers, seq: state.seq + 1 }, due }
+}
+
+export interface NewShootTimer {
+  id: string
+  slot: number
+  label: string
+  sound: string | null
+  stepRef: ShootStepRef
+  durationMs: number
+  origin: 'step' | 'free'
+  checkLeftMs: number | null
+}
+
+/** A timer started now: running, or held when a rehearsal's clock is stopped (it runs when the rehearsal does). */
+export function newShootTimer(s: ShootState, spec: NewShootTimer, startedBy: ShootActor, nowServerMs: number): ShootTimer {
+  const base: ShootTimer = {
+    ...spec, deadlineServerMs: null, remainingMs: null, speed: s.clock.speed, state: 'running', heldByShoot: false,
+    startedAtServerMs: nowServerMs, startedBy, dueAtServerMs: null, acknowledgedBy: null,
+    acknowledgedAtServerMs: null, cancelledAtServerMs: null,
+    startedAtShootMs: shootClockAt(s.clock, nowServerMs), closedAtShootMs: null,
+  }
+  if (s.mode === 'rehearsal' && !s.clock.running) return { ...base, state: 'paused', remainingMs: spec.durationMs, heldByShoot: true }
+  return shootTimerRunningFrom(base, nowServerMs, spec.durationMs, s.clock.speed)
+}
+
+/** Whether a running timer has reached its "check it" moment (the short end of its step's range). */
+export function timerChecking(timer: ShootTimer, nowServerMs: number): boolean {
+  if (timer.state !== 'running' && timer.state !== 'paused') return false
+  if (timer.checkLeftMs === null || timer.checkLeftMs === undefined) return false
+  return timerRemainingMs(timer, nowServerMs) <= timer.checkLeftMs
 }

@@ -3,7 +3,7 @@
 // (shoot-reducer.ts) and markDueTimers (shoot-timers.ts).
 import {
   SHOOT_SPEED_MAX, SHOOT_SPEED_MIN,
-  type ShootCursor, type ShootMode, type ShootSegment, type ShootState, type ShootStepRef,
+  type ShootCursor, type ShootMode, type ShootPlan, type ShootSegment, type ShootState, type ShootStepRef,
 } from '../types/shoot'
 
 export interface ShootInit {
@@ -12,6 +12,8 @@ export interface ShootInit {
   runOrder: ShootSegment[]
   /** Rehearsal speed to begin with (1 by default); a take always runs at 1×. */
   speed?: number
+  /** The cook plan the shoot runs, when the run order came from one (server/shoot/plan.ts). */
+  plan?: ShootPlan | null
 }
 
 /** Steps in a segment as the cursor sees them: a segment without steps is one position. */
@@ -87,5 +89,6 @@ export function createShootState(init: ShootInit): ShootState {
     visits: [],
     startedAtServerMs: null,
     endedAtServerMs: null,
+    plan: init.plan ?? null,
   }
 }

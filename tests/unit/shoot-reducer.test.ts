@@ -75,7 +75,7 @@ describe('createShootState', () => {
     expect(() => createShootState({ id: 's', mode: 'take', runOrder: [] })).toThrow(/no segments/)
     expect(() => createShootState({ id: 's', mode: 'take', runOrder: [{ id: 'a', stepIds: [] }, { id: 'a', stepIds: [] }] })).toThrow(/appears twice/)
     expect(() => createShootState({ id: 's', mode: 'take', runOrder: [{ id: 'a' } as ShootSegment] })).toThrow(/needs stepIds/)
-    expect(() => createShootState({ id: 's', mode: 'rehearsal', runOrder: RUN_ORDER, speed: 9 })).toThrow(/1× to 8×/)
+    expect(() => createShootState({ id: 's', mode: 'rehearsal', runOrder: RUN_ORDER, speed: 33 })).toThrow(/1× to 32×/)
     expect(() => createShootState({ id: 's', mode: 'live' as ShootMode, runOrder: RUN_ORDER })).toThrow(/rehearsal or a take/)
   })
 })
