@@ -221,3 +221,21 @@ describe('stepTimerLabel', () => {
     expect(stepTimerLabel({ id: '5', name: null, label: long, recipeTitle: 'Pasta' })).toBe('Bring a large pot of well salted water to… · Pasta')
   })
 })
+
+describe('what the screens read from the live plan', () => {
+  it('the next waits with their countdown, the step against its planned end, the projected finish', async () => {
+    const { upcomingWaits, currentStepTiming, shootProjection } = await import('../../shared/utils/shoot-cues')
+    let s = run(run(newShoot(), { type: 'shoot.start' }, 0), { type: 'step.next' }, 0)
+    // On the onion (0–5): the lentils are the next wait, due at 5; 0:30 before, the countdown says 30 s.
+    expect(upcomingWaits(s, T0 + 4.5 * MIN)).toEqual([
+      { stepId: 'simmer', label: 'Lentils', recipeTitle: 'Red lentil stew', atMs: 5 * MIN, inMs: 30_000, during: 'herbs' },
+    ])
+    expect(currentStepTiming(s, T0 + 4.5 * MIN)).toEqual({ stepId: 'chop', endMs: 5 * MIN, leftMs: 30_000 })
+    // Past due it waits on the host, counting below zero.
+    expect(upcomingWaits(s, T0 + 6 * MIN)[0]!.inMs).toBe(-MIN)
+    expect(shootProjection(s)).toEqual({ plannedMs: 33 * MIN, projectedMs: 33 * MIN, lateMs: 0 })
+    s = run(s, { type: 'step.next' }, 8 * MIN)
+    expect(upcomingWaits(s, T0 + 8 * MIN)).toEqual([])
+    expect(shootProjection(s)).toEqual({ plannedMs: 33 * MIN, projectedMs: 36 * MIN, lateMs: 3 * MIN })
+  })
+})
