@@ -20,7 +20,6 @@ import {
 import { clockTextMs } from './clock-text'
 import { shootCursorMoved, shootCursorRef, shootSegmentPositions, shootStepRefAt } from './shoot'
 import { isTimedWait, shootPlanStep, startWait, stepTimerOf } from './shoot-waits'
-import { withLivePlan } from './shoot-live-plan'
 
 type Failure = { ok: false; error: ShootCommandError }
 type Change = { state: ShootState; events: ShootEvent[] }
@@ -40,16 +39,12 @@ export function applyKnownShootCommand(state: ShootState, command: ShootCommand,
   const base: ShootState = { ...marked.state, seq: state.seq }
   const outcome = dispatch(base, command, ctx, now)
   if (isFailure(outcome)) return outcome
-  // The rest of the plan follows what just happened (markers and the rolling flag change nothing in it).
-  const next = KEEPS_PLAN.has(command.type) ? outcome.state : withLivePlan(outcome.state, now)
   return {
     ok: true,
-    state: { ...next, seq: state.seq + 1 },
+    state: { ...outcome.state, seq: state.seq + 1 },
     events: [...marked.due.map(dueEvent), ...outcome.events],
   }
 }
-
-const KEEPS_PLAN = new Set<ShootCommand['type']>(['marker.add', 'rolling.set'])
 
 function dispatch(s: ShootState, cmd: ShootCommand, ctx: ShootCommandContext, now: number): Outcome {
   switch (cmd.type) {

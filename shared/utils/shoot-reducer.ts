@@ -1,5 +1,6 @@
 // The shoot reducer: (state, command from anywhere) → new state | error. Pure. The server applies
-// every command with it; the rules themselves are in shoot-apply.ts.
+// every command with it; the rules themselves are in shoot-apply.ts, and after each change the cook
+// plan is computed again from the present (shoot-live-plan.ts).
 //
 // Order of checks: the sender's role (the one permission check of shoot commands), the command's shape (zod, shoot-schema.ts), the shoot having
 // ended, then the command against the state (shoot-apply.ts).
@@ -7,6 +8,10 @@ import type { ShootApplyResult, ShootCommand, ShootCommandContext, ShootState } 
 import { shootCommandRefusal } from './shoot-commands'
 import { parseShootCommand } from './shoot-schema'
 import { applyKnownShootCommand } from './shoot-apply'
+import { withLivePlan } from './shoot-live-plan'
+
+/** Commands after which the plan stays as it was (markers and the rolling flag change nothing in it). */
+const KEEPS_PLAN = new Set(['marker.add', 'rolling.set'])
 
 /** Applies one command; see the file comment for the order of checks. */
 export function applyShootCommand(state: ShootState, command: ShootCommand | unknown, ctx: ShootCommandContext): ShootApplyResult {
@@ -19,5 +24,9 @@ export function applyShootCommand(state: ShootState, command: ShootCommand | unk
   if (forbidden) return { ok: false, error: forbidden }
   const parsed = parseShootCommand(command)
   if (!parsed.ok) return parsed
-  return applyKnownShootCommand(state, parsed.command, ctx)
+  const result = applyKnownShootCommand(state, parsed.command, ctx)
+  // The rest of the plan follows what just happened. Screens applying their own command early skip
+  // this (it keeps the planner out of their bundle) and take the new plan with the server's answer.
+  if (!result.ok || KEEPS_PLAN.has(parsed.command.type)) return result
+  return { ...result, state: withLivePlan(result.state, now) }
 }
