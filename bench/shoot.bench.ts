@@ -51,8 +51,8 @@ async function setup(): Promise<Setup> {
   return { ...app, cookie, shootIds, clients }
 }
 
-/** One round: every shoot gets one command at once; resolves with per-client delivery and round-trip times. */
-async function round(s: Setup, n: number) {
+/** One round: every shoot gets one command at once (a marker unless told); resolves with per-client delivery and round-trip times. */
+async function round(s: Setup, n: number, command: (n: number) => object = (k) => ({ type: 'marker.add', kind: 'note', text: `round ${k}` })) {
   const delivery: number[] = []
   const roundTrip: number[] = []
   let size = 0
@@ -69,7 +69,7 @@ async function round(s: Setup, n: number) {
         if (--left === 0) done()
       })
     }
-    group[0]!.emit('shoot:command', { shootId, type: 'marker.add', kind: 'note', text: `round ${n}` }, (r: { ok: boolean; error?: { message: string } }) => {
+    group[0]!.emit('shoot:command', { shootId, ...command(n) }, (r: { ok: boolean; error?: { message: string } }) => {
       if (!r.ok) throw new Error(`the benchmark's command was refused: ${r.error?.message}`)
     })
   })))
@@ -154,6 +154,29 @@ const commandToAll: Benchmark = {
   },
 }
 
+// A step forward or back makes the server compute the rest of the cook plan again (16 steps of the
+// demo episode, waits running) before it answers; a marker does not. Alternating the two on the same
+// shoots and clients gives the cost of re-planning in the round trip, with the marker as the baseline.
+const replanToAll: Benchmark = {
+  name: 'shoot: command that re-plans → every screen of its shoot, p99',
+  async run(): Promise<BenchResult> {
+    const s = await (shared ??= setup())
+    await measure()
+    const step = (n: number) => ({ type: n % 2 === 0 ? 'step.next' : 'step.previous' })
+    const replans: number[] = []
+    const markers: number[] = []
+    for (let n = 0; n < 4; n++) await round(s, n, step) // warm-up: the first waits start their timers
+    for (let n = 0; n < ROUNDS; n++) {
+      replans.push(...(await round(s, n, step)).roundTrip)
+      markers.push(...(await round(s, 1000 + n)).roundTrip)
+    }
+    return {
+      figure: percentile(replans, 99), baseline: percentile(markers, 99), unit: 'ms',
+      note: `p50 ${percentile(replans, 50).toFixed(2)} ms (marker p50 ${percentile(markers, 50).toFixed(2)} ms); 10 shoots at once, each command re-planning the demo episode (no bound set)`,
+    }
+  },
+}
+
 const JOINERS = 20
 const JOIN_ROUNDS = 10
 
@@ -211,10 +234,10 @@ const throughput: Benchmark = {
     s.clients.flat().forEach((c) => c.disconnect())
     await s.stop()
     const rate = accepted / seconds
-    const expectedMarkers = accepted + (ROUNDS + 5) * SHOOTS
+    const expectedMarkers = accepted + (2 * ROUNDS + 5) * SHOOTS
     if (logged !== expectedMarkers) throw new Error(`${logged} marker commands logged, ${expectedMarkers} accepted`)
     return { figure: rate, unit: 'cmd/s', note: `${accepted} accepted over ${SHOOTS} shoots in ${seconds} s, ${logged} marker commands in the event log (no bound set)` }
   },
 }
 
-export const shootBenchmarks: Benchmark[] = [fanOut, commandToAll, join, throughput]
+export const shootBenchmarks: Benchmark[] = [fanOut, commandToAll, replanToAll, join, throughput]

@@ -8,6 +8,7 @@ import {
 } from '../types/shoot'
 import { isShootTimerLive, newShootTimer } from './shoot-timers'
 import { shootPositions } from './shoot'
+import { stepTimerLabel } from './key-map'
 
 /** The plan's step with this id, or null (a shoot without a plan, or a step the plan does not have). */
 export function shootPlanStep(s: Pick<ShootState, 'plan'>, stepId: string | null): ShootPlanStep | null {
@@ -30,16 +31,10 @@ export function stepTimerOf(s: Pick<ShootState, 'timers'>, stepId: string): Shoo
 }
 
 /** "Pasta water · Weeknight ragù": the step's short name (else its text, cut at a word) and its recipe. */
-export function stepTimerLabel(step: Pick<ShootPlanStep, 'name' | 'label' | 'id' | 'recipeTitle'>): string {
-  const cut = (text: string, max: number) => {
-    if (text.length <= max) return text
-    const head = text.slice(0, max - 1)
-    const space = head.lastIndexOf(' ')
-    return `${(space > max / 2 ? head.slice(0, space) : head).replace(/[\s,;:]+$/, '')}…`
-  }
-  const name = cut((step.name ?? step.label ?? step.id).trim() || step.id, 44)
+export function waitTimerLabel(step: Pick<ShootPlanStep, 'name' | 'label' | 'id' | 'recipeTitle'>): string {
+  const name = step.name?.trim() || stepTimerLabel(step.label ?? step.id, 44) || step.id
   const recipe = step.recipeTitle.trim()
-  return recipe ? cut(`${name} · ${recipe}`, SHOOT_TIMER_LABEL_MAX) : name
+  return recipe ? `${name} · ${stepTimerLabel(recipe, SHOOT_TIMER_LABEL_MAX - name.length - 3)}` : name
 }
 
 /** The timer's length and check signal for a timed wait: the long end, checked at the short end. */
@@ -67,6 +62,6 @@ export function startWait(s: ShootState, stepId: string | null, by: ShootActor, 
   const stepRef = stepRefOf(s, step.id)
   if (slot === undefined || !stepRef) return { state: s, events: [] }
   const id = s.timers.some((t) => t.id === `wait-${step.id}`) ? `wait-${step.id}-${s.timers.length}` : `wait-${step.id}`
-  const timer = newShootTimer(s, { id, slot, label: stepTimerLabel(step), sound: null, stepRef, origin: 'step', ...waitTimerTimes(step) }, by, now)
+  const timer = newShootTimer(s, { id, slot, label: waitTimerLabel(step), sound: null, stepRef, origin: 'step', ...waitTimerTimes(step) }, by, now)
   return { state: { ...s, timers: [...s.timers, timer] }, events: [{ type: 'timer.changed', timerId: id, state: timer.state }] }
 }

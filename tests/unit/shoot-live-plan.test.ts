@@ -12,7 +12,7 @@ import { createShootState } from '../../shared/utils/shoot'
 import { applyShootCommand } from '../../shared/utils/shoot-reducer'
 import { planShootRun, type ScriptRecipe } from '../../shared/utils/shoot-plan'
 import { markDueTimers, timerChecking } from '../../shared/utils/shoot-timers'
-import { stepTimerLabel } from '../../shared/utils/shoot-waits'
+import { waitTimerLabel } from '../../shared/utils/shoot-waits'
 
 const T0 = 1_760_000_000_000
 const MIN = 60_000
@@ -214,11 +214,11 @@ describe('a plan that follows the kitchen', () => {
   })
 })
 
-describe('stepTimerLabel', () => {
+describe('waitTimerLabel', () => {
   it('uses the short name, else the step text cut at a word, and the recipe', () => {
-    expect(stepTimerLabel({ id: '4', name: 'Dough rest', label: 'Cover and leave', recipeTitle: 'Flatbreads' })).toBe('Dough rest · Flatbreads')
+    expect(waitTimerLabel({ id: '4', name: 'Dough rest', label: 'Cover and leave', recipeTitle: 'Flatbreads' })).toBe('Dough rest · Flatbreads')
     const long = 'Bring a large pot of well salted water to a rolling boil over a high heat'
-    expect(stepTimerLabel({ id: '5', name: null, label: long, recipeTitle: 'Pasta' })).toBe('Bring a large pot of well salted water to… · Pasta')
+    expect(waitTimerLabel({ id: '5', name: null, label: long, recipeTitle: 'Pasta' })).toBe('Bring a large pot of well salted water to a… · Pasta')
   })
 })
 
