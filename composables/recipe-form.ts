@@ -5,6 +5,9 @@ import type { EuAllergenId, UsAllergenId } from '~~/shared/utils/allergens'
 import type { RecipeStation } from '~~/shared/types/recipe'
 import type { UnitId } from '~~/shared/utils/units'
 import type { LoadedRecipe } from '~/types/api'
+// Relative, so the unit tests can load this file without Nuxt's aliases.
+import { isStartTogether } from '../shared/utils/step-links'
+import { STEP_NAME_MAX } from '../shared/utils/step-name'
 
 /** A link to an earlier step beyond "waits for" (start with it, or finish together), by position. */
 export interface StepLink { step: number; kind: 'start-start' | 'finish-together'; lag: number }
@@ -32,6 +35,8 @@ export interface IngredientRow {
 export interface StepRow {
   uid: string
   id?: number
+  /** Short name for timers and cues ("Pasta water"); empty for none. */
+  name: string
   text: string
   /** One script line per line of text. */
   script: string
@@ -94,7 +99,7 @@ export function formFromRecipe(r: LoadedRecipe): RecipeForm {
       allergens: { eu: [...i.allergens.eu] as EuAllergenId[], us: [...i.allergens.us] as UsAllergenId[] }, allergenState: 'confirmed', priceId: i.priceId,
     })),
     steps: r.steps.map((s, index) => ({
-      uid: stepUids[index]!, id: s.id, text: s.text, script: s.script.join('\n'), handsOn: s.handsOn,
+      uid: stepUids[index]!, id: s.id, name: s.name ?? '', text: s.text, script: s.script.join('\n'), handsOn: s.handsOn,
       durationMin: minutesText(s.durationMin), durationMax: s.durationMax === s.durationMin ? '' : minutesText(s.durationMax),
       station: (s.station ?? '') as StepRow['station'], after: s.after.map((p) => stepUids[p - 1]).filter((u): u is string => !!u),
       links: (s.links ?? []).map((l) => ({ stepUid: stepUids[l.step - 1]!, kind: l.kind, lag: l.lag })).filter((l) => !!l.stepUid),
@@ -124,7 +129,7 @@ export function ingredientFromLine(line: string, takenKeys: string[], cups: 'us'
 }
 
 export function blankStep(): StepRow {
-  return { uid: rowUid('step'), text: '', script: '', handsOn: true, durationMin: '', durationMax: '', station: '', after: [], links: [], cameraShot: '', cameraNote: '', cautions: [], group: '' }
+  return { uid: rowUid('step'), name: '', text: '', script: '', handsOn: true, durationMin: '', durationMax: '', station: '', after: [], links: [], cameraShot: '', cameraNote: '', cautions: [], group: '' }
 }
 
 /** An amount as typed ("2", "1.5", "1/2", "1 1/2", "1½"): the number, null for blank, NaN when unreadable. */
@@ -174,7 +179,7 @@ export interface FormProblem {
 }
 
 const isBlankIngredient = (r: IngredientRow) => !r.item.trim() && !r.min.trim() && !r.max.trim() && !r.prep.trim()
-const isBlankStep = (s: StepRow) => !s.text.trim() && !s.script.trim() && !s.cameraShot.trim() && !s.cameraNote.trim()
+const isBlankStep = (s: StepRow) => !s.name.trim() && !s.text.trim() && !s.script.trim() && !s.cameraShot.trim() && !s.cameraNote.trim()
 
 /** Rows with nothing typed in them are left out of a save (and then out of the form). */
 export function dropBlankRows(form: RecipeForm): void {
@@ -211,8 +216,12 @@ export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>;
   const steps = form.steps.map((s, i) => {
     const dMin = minutes(`steps.${i}.durationMin`, s.durationMin)
     const dMax = minutes(`steps.${i}.durationMax`, s.durationMax)
+    const name = s.name.replace(/\s+/g, ' ').trim()
+    if (name.length > STEP_NAME_MAX) {
+      problems.push({ field: `steps.${i}.name`, message: `Step ${i + 1}, short name: keep it to ${STEP_NAME_MAX} characters (it has ${name.length}).` })
+    }
     return {
-      ...(s.id ? { id: s.id } : {}), text: s.text.trim(), script: s.script.split('\n').map((l) => l.trim()).filter(Boolean), handsOn: s.handsOn,
+      ...(s.id ? { id: s.id } : {}), name: name || null, text: s.text.trim(), script: s.script.split('\n').map((l) => l.trim()).filter(Boolean), handsOn: s.handsOn,
       durationMin: dMin ?? dMax, durationMax: dMax ?? dMin, station: s.station || null,
       after: s.after.map((u) => form.steps.findIndex((x) => x.uid === u) + 1).filter((p) => p > 0 && p < i + 1).sort((a, b) => a - b),
       links: s.links
@@ -230,9 +239,37 @@ export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>;
   return { body, problems }
 }
 
-/** "steps.2.text" → "Step 3, text" for a person; other fields as they are. */
+/** Request field names that read differently on the form. */
+const FIELD_LABELS: Record<string, string> = { name: 'short name' }
+
+/** "steps.2.text" → "Step 3, text" for a person ("steps.2.name" → "Step 3, short name"); other fields as they are. */
 export function fieldLabel(field: string): string {
   const m = /^(ingredients|steps)\.(\d+)\.?(.*)$/.exec(field)
   if (!m) return field
-  return `${m[1] === 'steps' ? 'Step' : 'Ingredient'} ${Number(m[2]) + 1}${m[3] ? `, ${m[3]}` : ''}`
+  const part = m[1] === 'steps' ? FIELD_LABELS[m[3]!] ?? m[3] : m[3]
+  return `${m[1] === 'steps' ? 'Step' : 'Ingredient'} ${Number(m[2]) + 1}${part ? `, ${part}` : ''}`
+}
+
+/** Whether step `i` starts together with the step before it (a start-start link to it with no lag). */
+export function startsWithStepBefore(steps: StepRow[], i: number): boolean {
+  const before = steps[i - 1]
+  return !!before && steps[i]!.links.some((l) => l.stepUid === before.uid && isStartTogether(l))
+}
+
+/**
+ * "Starts together with the step before", ticked: the step no longer follows the step before but
+ * starts with it. Unticked: it follows the step before again (the default when it names no other
+ * step; named outright when other links would otherwise stop it following, see cook-plan.ts).
+ */
+export function setStartsWithStepBefore(steps: StepRow[], i: number, on: boolean): void {
+  const step = steps[i]
+  const before = steps[i - 1]
+  if (!step || !before) return
+  step.links = step.links.filter((l) => !(l.stepUid === before.uid && isStartTogether(l)))
+  if (on) {
+    step.after = step.after.filter((u) => u !== before.uid)
+    step.links.push({ stepUid: before.uid, kind: 'start-start', lag: 0 })
+  } else if (!step.after.length && step.links.length) {
+    step.after = [before.uid]
+  }
 }
