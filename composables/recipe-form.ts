@@ -5,9 +5,6 @@ import type { EuAllergenId, UsAllergenId } from '~~/shared/utils/allergens'
 import type { RecipeStation } from '~~/shared/types/recipe'
 import type { UnitId } from '~~/shared/utils/units'
 import type { LoadedRecipe } from '~/types/api'
-// Relative, so the unit tests can load this file without Nuxt's aliases.
-import { isStartTogether } from '../shared/utils/step-links'
-import { STEP_NAME_MAX } from '../shared/utils/step-name'
 
 /** A link to an earlier step beyond "waits for" (start with it, or finish together), by position. */
 export interface StepLink { step: number; kind: 'start-start' | 'finish-together'; lag: number }
@@ -216,12 +213,10 @@ export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>;
   const steps = form.steps.map((s, i) => {
     const dMin = minutes(`steps.${i}.durationMin`, s.durationMin)
     const dMax = minutes(`steps.${i}.durationMax`, s.durationMax)
-    const name = s.name.replace(/\s+/g, ' ').trim()
-    if (name.length > STEP_NAME_MAX) {
-      problems.push({ field: `steps.${i}.name`, message: `Step ${i + 1}, short name: keep it to ${STEP_NAME_MAX} characters (it has ${name.length}).` })
-    }
+    const nameProblem = stepNameProblem(s.name, i + 1)
+    if (nameProblem) problems.push({ field: `steps.${i}.name`, message: nameProblem })
     return {
-      ...(s.id ? { id: s.id } : {}), name: name || null, text: s.text.trim(), script: s.script.split('\n').map((l) => l.trim()).filter(Boolean), handsOn: s.handsOn,
+      ...(s.id ? { id: s.id } : {}), name: cleanStepName(s.name), text: s.text.trim(), script: s.script.split('\n').map((l) => l.trim()).filter(Boolean), handsOn: s.handsOn,
       durationMin: dMin ?? dMax, durationMax: dMax ?? dMin, station: s.station || null,
       after: s.after.map((u) => form.steps.findIndex((x) => x.uid === u) + 1).filter((p) => p > 0 && p < i + 1).sort((a, b) => a - b),
       links: s.links
@@ -250,26 +245,3 @@ export function fieldLabel(field: string): string {
   return `${m[1] === 'steps' ? 'Step' : 'Ingredient'} ${Number(m[2]) + 1}${part ? `, ${part}` : ''}`
 }
 
-/** Whether step `i` starts together with the step before it (a start-start link to it with no lag). */
-export function startsWithStepBefore(steps: StepRow[], i: number): boolean {
-  const before = steps[i - 1]
-  return !!before && steps[i]!.links.some((l) => l.stepUid === before.uid && isStartTogether(l))
-}
-
-/**
- * "Starts together with the step before", ticked: the step no longer follows the step before but
- * starts with it. Unticked: it follows the step before again (the default when it names no other
- * step; named outright when other links would otherwise stop it following, see cook-plan.ts).
- */
-export function setStartsWithStepBefore(steps: StepRow[], i: number, on: boolean): void {
-  const step = steps[i]
-  const before = steps[i - 1]
-  if (!step || !before) return
-  step.links = step.links.filter((l) => !(l.stepUid === before.uid && isStartTogether(l)))
-  if (on) {
-    step.after = step.after.filter((u) => u !== before.uid)
-    step.links.push({ stepUid: before.uid, kind: 'start-start', lag: 0 })
-  } else if (!step.after.length && step.links.length) {
-    step.after = [before.uid]
-  }
-}

@@ -23,3 +23,30 @@ export function startTogetherLink(position: number): StepLinkDraft {
 export function isStartTogether(link: { kind: string; lag: number }): boolean {
   return link.kind === 'start-start' && link.lag === 0
 }
+
+/** A step's "waits for" and links as the recipe editor keeps them: other steps named by row id. */
+export interface EditorStepLinks {
+  after: string[]
+  links: Array<{ stepUid: string; kind: StepLinkDraft['kind']; lag: number }>
+}
+
+/** Whether the step starts together with the step before it (row id `before`). */
+export function startsWithStepBefore(step: EditorStepLinks, before: string | undefined): boolean {
+  return before !== undefined && step.links.some((l) => l.stepUid === before && isStartTogether(l))
+}
+
+/**
+ * "Starts together with the step before", ticked: the step no longer follows the step before but
+ * starts with it. Unticked: it follows the step before again (the default when it names no other
+ * step; named outright when other links would otherwise stop it following it).
+ */
+export function setStartsWithStepBefore(step: EditorStepLinks, before: string | undefined, on: boolean): void {
+  if (before === undefined) return
+  step.links = step.links.filter((l) => !(l.stepUid === before && isStartTogether(l)))
+  if (on) {
+    step.after = step.after.filter((u) => u !== before)
+    step.links.push({ stepUid: before, kind: 'start-start', lag: 0 })
+  } else if (!step.after.length && step.links.length) {
+    step.after = [before]
+  }
+}

@@ -20,3 +20,14 @@ export function importedStepName(name: string | null | undefined, text: string):
   const copiesText = n.length <= t.length && n.every((w, i) => w === t[i] || (cut && i === n.length - 1 && t[i]!.startsWith(w)))
   return copiesText ? null : trimmed
 }
+
+/** A short name as typed: spaces collapsed and trimmed; empty is none (null). */
+export function cleanStepName(name: string | null | undefined): string | null {
+  return name?.replace(/\s+/g, ' ').trim() || null
+}
+
+/** What to fix in a short name as typed, in the editor's words ("Step 3, short name: …"), or null when it is fine. */
+export function stepNameProblem(name: string | null | undefined, position: number): string | null {
+  const n = cleanStepName(name)?.length ?? 0
+  return n > STEP_NAME_MAX ? `Step ${position}, short name: keep it to ${STEP_NAME_MAX} characters (it has ${n}).` : null
+}
