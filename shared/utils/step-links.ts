@@ -37,8 +37,8 @@ export function startsWithStepBefore(step: EditorStepLinks, before: string | und
 
 /**
  * "Starts together with the step before", ticked: the step no longer follows the step before but
- * starts with it. Unticked: it follows the step before again (the default when it names no other
- * step; named outright when other links would otherwise stop it following it).
+ * starts with it. Unticked: it follows the step before again, named in "waits for" as a new step
+ * in the editor names it (unless it already waits for other steps the cook chose).
  */
 export function setStartsWithStepBefore(step: EditorStepLinks, before: string | undefined, on: boolean): void {
   if (before === undefined) return
@@ -46,7 +46,7 @@ export function setStartsWithStepBefore(step: EditorStepLinks, before: string | 
   if (on) {
     step.after = step.after.filter((u) => u !== before)
     step.links.push({ stepUid: before, kind: 'start-start', lag: 0 })
-  } else if (!step.after.length && step.links.length) {
+  } else if (!step.after.length) {
     step.after = [before]
   }
 }

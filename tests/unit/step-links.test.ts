@@ -130,10 +130,15 @@ describe('the editor\'s "Starts together with the step before"', () => {
     expect(onion.links).toHaveLength(1)
     setStartsWithStepBefore(onion, 'water', false)
     expect(startsWithStepBefore(onion, 'water')).toBe(false)
-    // No step named and no link: the plan has it follow the step before (server/utils/cook-plan.ts).
-    expect(onion).toEqual({ after: [], links: [] })
+    // Waits for the step before again, as the editor makes a new step (server/utils/cook-plan.ts plans it after it).
+    expect(onion).toEqual({ after: ['water'], links: [] })
+    // A step that waits for steps the cook chose keeps just those.
+    const drain = row(['pasta'])
+    setStartsWithStepBefore(drain, 'sauce', true)
+    setStartsWithStepBefore(drain, 'sauce', false)
+    expect(drain).toEqual({ after: ['pasta'], links: [] })
   })
-  it('keeps the step\'s other links, and unticked names the step before outright so the step still follows it', () => {
+  it('keeps the step\'s other links; unticked, the step waits for the step before again', () => {
     const sauce = row([], [{ stepUid: 'roast', kind: 'finish-together', lag: 300 }])
     setStartsWithStepBefore(sauce, 'lentils', true)
     expect(sauce.links).toEqual([{ stepUid: 'roast', kind: 'finish-together', lag: 300 }, { stepUid: 'lentils', kind: 'start-start', lag: 0 }])
