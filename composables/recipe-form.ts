@@ -32,6 +32,8 @@ export interface IngredientRow {
 export interface StepRow {
   uid: string
   id?: number
+  /** Short name for timers and cues ("Pasta water"); empty for none. */
+  name: string
   text: string
   /** One script line per line of text. */
   script: string
@@ -94,7 +96,7 @@ export function formFromRecipe(r: LoadedRecipe): RecipeForm {
       allergens: { eu: [...i.allergens.eu] as EuAllergenId[], us: [...i.allergens.us] as UsAllergenId[] }, allergenState: 'confirmed', priceId: i.priceId,
     })),
     steps: r.steps.map((s, index) => ({
-      uid: stepUids[index]!, id: s.id, text: s.text, script: s.script.join('\n'), handsOn: s.handsOn,
+      uid: stepUids[index]!, id: s.id, name: s.name ?? '', text: s.text, script: s.script.join('\n'), handsOn: s.handsOn,
       durationMin: minutesText(s.durationMin), durationMax: s.durationMax === s.durationMin ? '' : minutesText(s.durationMax),
       station: (s.station ?? '') as StepRow['station'], after: s.after.map((p) => stepUids[p - 1]).filter((u): u is string => !!u),
       links: (s.links ?? []).map((l) => ({ stepUid: stepUids[l.step - 1]!, kind: l.kind, lag: l.lag })).filter((l) => !!l.stepUid),
@@ -124,7 +126,7 @@ export function ingredientFromLine(line: string, takenKeys: string[], cups: 'us'
 }
 
 export function blankStep(): StepRow {
-  return { uid: rowUid('step'), text: '', script: '', handsOn: true, durationMin: '', durationMax: '', station: '', after: [], links: [], cameraShot: '', cameraNote: '', cautions: [], group: '' }
+  return { uid: rowUid('step'), name: '', text: '', script: '', handsOn: true, durationMin: '', durationMax: '', station: '', after: [], links: [], cameraShot: '', cameraNote: '', cautions: [], group: '' }
 }
 
 /** An amount as typed ("2", "1.5", "1/2", "1 1/2", "1½"): the number, null for blank, NaN when unreadable. */
@@ -174,7 +176,7 @@ export interface FormProblem {
 }
 
 const isBlankIngredient = (r: IngredientRow) => !r.item.trim() && !r.min.trim() && !r.max.trim() && !r.prep.trim()
-const isBlankStep = (s: StepRow) => !s.text.trim() && !s.script.trim() && !s.cameraShot.trim() && !s.cameraNote.trim()
+const isBlankStep = (s: StepRow) => !s.name.trim() && !s.text.trim() && !s.script.trim() && !s.cameraShot.trim() && !s.cameraNote.trim()
 
 /** Rows with nothing typed in them are left out of a save (and then out of the form). */
 export function dropBlankRows(form: RecipeForm): void {
@@ -211,8 +213,10 @@ export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>;
   const steps = form.steps.map((s, i) => {
     const dMin = minutes(`steps.${i}.durationMin`, s.durationMin)
     const dMax = minutes(`steps.${i}.durationMax`, s.durationMax)
+    const nameProblem = stepNameProblem(s.name, i + 1)
+    if (nameProblem) problems.push({ field: `steps.${i}.name`, message: nameProblem })
     return {
-      ...(s.id ? { id: s.id } : {}), text: s.text.trim(), script: s.script.split('\n').map((l) => l.trim()).filter(Boolean), handsOn: s.handsOn,
+      ...(s.id ? { id: s.id } : {}), name: cleanStepName(s.name), text: s.text.trim(), script: s.script.split('\n').map((l) => l.trim()).filter(Boolean), handsOn: s.handsOn,
       durationMin: dMin ?? dMax, durationMax: dMax ?? dMin, station: s.station || null,
       after: s.after.map((u) => form.steps.findIndex((x) => x.uid === u) + 1).filter((p) => p > 0 && p < i + 1).sort((a, b) => a - b),
       links: s.links
@@ -230,9 +234,14 @@ export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>;
   return { body, problems }
 }
 
-/** "steps.2.text" → "Step 3, text" for a person; other fields as they are. */
+/** Request field names that read differently on the form. */
+const FIELD_LABELS: Record<string, string> = { name: 'short name' }
+
+/** "steps.2.text" → "Step 3, text" for a person ("steps.2.name" → "Step 3, short name"); other fields as they are. */
 export function fieldLabel(field: string): string {
   const m = /^(ingredients|steps)\.(\d+)\.?(.*)$/.exec(field)
   if (!m) return field
-  return `${m[1] === 'steps' ? 'Step' : 'Ingredient'} ${Number(m[2]) + 1}${m[3] ? `, ${m[3]}` : ''}`
+  const part = m[1] === 'steps' ? FIELD_LABELS[m[3]!] ?? m[3] : m[3]
+  return `${m[1] === 'steps' ? 'Step' : 'Ingredient'} ${Number(m[2]) + 1}${part ? `, ${part}` : ''}`
 }
+

@@ -4,6 +4,8 @@ import type { CautionId } from '../../shared/utils/cautions'
 import type { RecipeStation } from '../../shared/types/recipe'
 
 export interface DemoStep {
+  /** Short name for the step's timer and cues. */
+  name?: string
   text: string
   script?: string[]
   handsOn: boolean
@@ -69,7 +71,7 @@ export const demoRecipes: DemoRecipe[] = [
       { text: 'Warm {{olive-oil|item}} in a wide pan and soften the onion.', script: ['Low and slow here — we want it sweet, not brown.'], handsOn: true, minutes: [8, 10], station: 'burner', after: [1], shot: 'Side angle on the pan', cautions: ['hot-oil'] },
       { text: 'Stir in the garlic and {{smoked-paprika|item}} for a minute.', handsOn: true, minutes: [1, 2], station: 'burner', after: [2], shot: 'Close on the pan', note: 'Catch the colour change' },
       { text: 'Add the tomatoes, beans and {{vegetable-stock|item}}; bring to a simmer.', script: ['Everything else goes in now, and the pot does the work.'], handsOn: true, minutes: [3, 4], station: 'burner', after: [3], shot: 'Wide on the hob', cautions: ['boiling'] },
-      { text: 'Simmer, stirring now and then, until thick.', handsOn: false, minutes: [20, 25], station: 'burner', after: [4], shot: 'Locked-off on the pot' },
+      { name: 'Stew simmer', text: 'Simmer, stirring now and then, until thick.', handsOn: false, minutes: [20, 25], station: 'burner', after: [4], shot: 'Locked-off on the pot' },
       { text: 'Season with salt and scatter the parsley.', script: ['Taste first, then salt. Parsley if you have it — it costs a little extra.'], handsOn: true, minutes: [2, 2], after: [5], shot: 'Hero shot of the bowl' },
     ],
   },
@@ -87,8 +89,10 @@ export const demoRecipes: DemoRecipe[] = [
     ],
     steps: [
       { text: 'Mix {{self-raising-flour|item}} with {{plain-yoghurt*5/7|item}} and the salt into a soft dough.', script: ['Just two things in the bowl: flour and yoghurt.'], handsOn: true, minutes: [4, 5], station: 'counter', shot: 'Overhead on the bowl' },
-      { text: 'Cover and rest the dough.', handsOn: false, minutes: [15, 20], after: [1], shot: 'Quick insert of the covered bowl' },
-      { text: 'Chop the mint and stir it into the rest of the yoghurt.', script: ['While the dough rests, the dip.'], handsOn: true, minutes: [3, 4], station: 'counter', shot: 'Close on the knife', cautions: ['knife', 'allergen'] },
+      { name: 'Dough rest', text: 'Cover and rest the dough.', handsOn: false, minutes: [15, 20], after: [1], shot: 'Quick insert of the covered bowl' },
+      // Made while the dough rests: starts together with the rest instead of after it.
+      { text: 'Chop the mint and stir it into the rest of the yoghurt.', script: ['While the dough rests, the dip.'], handsOn: true, minutes: [3, 4], station: 'counter',
+        links: [{ step: 2, kind: 'start-start', lag: 0 }], shot: 'Close on the knife', cautions: ['knife', 'allergen'] },
       { text: 'Divide and roll the dough into six rounds.', handsOn: true, minutes: [5, 6], station: 'counter', after: [2], shot: 'Hands on the board' },
       { text: 'Cook each round in a hot dry pan until puffed and spotted.', script: ['Watch for the bubbles — that is when you flip.'], handsOn: true, minutes: [10, 12], station: 'burner', after: [4], shot: 'Side angle on the pan', cautions: ['hot-holding'] },
     ],
@@ -109,8 +113,8 @@ export const demoRecipes: DemoRecipe[] = [
     ],
     steps: [
       { text: 'Heat the oven to 200 °C. Peel and cut the squash into chunks.', script: ['A heavy knife and a flat side down — squash likes to roll.'], handsOn: true, minutes: [8, 10], station: 'counter', shot: 'Overhead on the board', cautions: ['knife'] },
-      { text: 'Toss the squash with {{olive-oil*2/3|item}} and roast until soft and browned.', handsOn: false, minutes: [35, 40], station: 'oven', after: [1], shot: 'Tray into the oven', cautions: ['oven'] },
-      { text: 'Simmer {{green-lentils|item}} in plenty of water until just tender.', handsOn: false, minutes: [20, 25], station: 'burner', after: [1], shot: 'Locked-off on the pot', cautions: ['boiling'] },
+      { name: 'Squash roast', text: 'Toss the squash with {{olive-oil*2/3|item}} and roast until soft and browned.', handsOn: false, minutes: [35, 40], station: 'oven', after: [1], shot: 'Tray into the oven', cautions: ['oven'] },
+      { name: 'Lentil simmer', text: 'Simmer {{green-lentils|item}} in plenty of water until just tender.', handsOn: false, minutes: [20, 25], station: 'burner', after: [1], shot: 'Locked-off on the pot', cautions: ['boiling'] },
       // Whisked in the last five minutes of the roast, so sauce and squash are ready together.
       { text: 'Whisk {{tahini|item}} with the lemon juice and cold water to a pourable sauce.', script: ['It seizes first, then loosens — keep whisking.'], handsOn: true, minutes: [3, 4], station: 'counter', links: [{ step: 2, kind: 'finish-together', lag: 300 }], shot: 'Close on the whisk', cautions: ['allergen'] },
       { text: 'Drain the lentils, dress with the rest of the oil and salt, and top with squash and sauce.', script: ['Lentils down, squash on top, sauce over everything.'], handsOn: true, minutes: [3, 4], after: [2, 3, 4], shot: 'Hero shot of the plate', cautions: ['oven'] },

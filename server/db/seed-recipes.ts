@@ -33,7 +33,7 @@ export async function seedDemoRecipes(studioId: number, currency: string) {
       const problems = stepTokenProblems(step.text, keys)
       if (problems.length) throw new Error(`Demo recipe "${demo.title}", step ${position + 1}: ${problems.map((p) => p.reason).join('; ')}`)
       await RecipeStep.create({
-        recipeId: recipe.id, position: position + 1, text: step.text, script: step.script ?? [], handsOn: step.handsOn,
+        recipeId: recipe.id, position: position + 1, name: step.name ?? null, text: step.text, script: step.script ?? [], handsOn: step.handsOn,
         durationMin: step.minutes ? step.minutes[0] * 60 : null, durationMax: step.minutes ? step.minutes[1] * 60 : null,
         station: step.station ?? null, after: step.after ?? [], links: step.links ?? [],
         cameraShot: step.shot ?? null, cameraNote: step.note ?? null, cautions: step.cautions ?? [], group: null,

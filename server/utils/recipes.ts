@@ -20,9 +20,9 @@ export function recipeView(r: Loaded) {
     optional: i.optional, toTaste: i.toTaste, group: i.group, allergens: i.allergens, priceId: i.priceId,
   }))
   const steps = [...r.steps].sort((a, b) => a.position - b.position).map((s) => ({
-    id: s.id, position: s.position, text: s.text, script: s.script, handsOn: s.handsOn, durationMin: s.durationMin, durationMax: s.durationMax,
-    station: s.station, after: s.after, links: s.links, cameraShot: s.cameraShot, cameraNote: s.cameraNote,
-    cautions: s.cautions, group: s.group, photo: photoUrl(s.photo),
+    id: s.id, position: s.position, name: s.name ?? null, text: s.text, script: s.script, handsOn: s.handsOn,
+    durationMin: s.durationMin, durationMax: s.durationMax, station: s.station, after: s.after, links: s.links,
+    cameraShot: s.cameraShot, cameraNote: s.cameraNote, cautions: s.cautions, group: s.group, photo: photoUrl(s.photo),
   }))
   return {
     id: r.id, studioId: r.studioId, version: r.version, title: r.title, summary: r.summary, servings: r.servings, yieldText: r.yieldText,
@@ -38,7 +38,7 @@ export function recipeDraft(view: RecipeView): RecipeDraft {
   return {
     title: view.title, summary: view.summary, servings: view.servings, yieldText: view.yieldText, tags: view.tags, notes: view.notes, times: view.times,
     ingredients: view.ingredients.map(({ id: _id, priceId, ...i }) => ({ ...i, priceId: priceId === null ? null : String(priceId) })) as RecipeDraft['ingredients'],
-    steps: view.steps.map(({ id: _id, photo: _photo, links: _links, ...s }) => s) as RecipeDraft['steps'],
+    steps: view.steps.map(({ id: _id, photo: _photo, ...s }) => s) as RecipeDraft['steps'],
   }
 }
 

@@ -29,9 +29,17 @@ export interface RecipeIngredientDraft {
   priceId?: string | number | null
 }
 
+export interface StepLinkDraft {
+  step: number
+  kind: 'start-start' | 'finish-together'
+  lag: number
+}
+
 export interface RecipeStepDraft {
   /** 1-based order in the recipe. */
   position: number
+  /** A short name for the step's timer and cues ("Pasta water"), at most 40 characters; null for none. */
+  name: string | null
   /** What to do. May name ingredients as {{key}} tokens, which follow the scale. */
   text: string
   /** What to say on camera, one line each. */
@@ -44,6 +52,13 @@ export interface RecipeStepDraft {
   station: RecipeStation | null
   /** Positions of earlier steps this one waits for. */
   after: number[]
+  /**
+   * Links to earlier steps beyond "after", by position: start with it (after a lag in seconds) or
+   * finish together with it (going in a lead before it ends). A step that names neither "after"
+   * nor a link follows the step before it; "starts together with the step before" is a start-start
+   * link to it with no lag (see step-links.ts).
+   */
+  links?: StepLinkDraft[]
   cameraShot: string | null
   cameraNote: string | null
   cautions: CautionId[]

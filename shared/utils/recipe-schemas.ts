@@ -4,6 +4,7 @@ import { z } from 'zod'
 import { EU_ALLERGENS, US_ALLERGENS } from './allergens'
 import { CAUTION_IDS } from './cautions'
 import { INGREDIENT_KEY } from './step-text'
+import { STEP_NAME_MAX } from './step-name'
 import { UNIT_IDS, type UnitId } from './units'
 
 const text = (field: string, max: number) => z.string({ error: `${field} must be text.` }).trim().max(max, `Use at most ${max} characters for ${field}.`)
@@ -30,8 +31,14 @@ export const recipeIngredientSchema = z.object({
   priceId: z.number().int().positive().nullable().optional(),
 }).refine((i) => i.min === null || i.max === null || i.min <= i.max, { message: 'The lower amount (min) must not be above the upper one (max).', path: ['min'] })
 
+/** A step's short name, for its timer and cues: trimmed, at most STEP_NAME_MAX characters, empty is none. */
+const stepName = z.string({ error: 'The short name must be text (or null for none).' }).trim()
+  .max(STEP_NAME_MAX, `Keep the short name to ${STEP_NAME_MAX} characters, such as "Pasta water".`)
+  .nullable().optional().transform((v) => (v ? v : null))
+
 export const recipeStepSchema = z.object({
   id: z.number().int().positive().optional(),
+  name: stepName,
   text: text('text', 4000).min(1, 'Say what to do in this step (text).'),
   script: z.array(text('script line', 1000)).max(50, 'At most 50 script lines per step.').default([]),
   handsOn: z.boolean({ error: 'handsOn must be true or false.' }).default(true),

@@ -6,7 +6,8 @@
 // "hobline:" prefix of HOBLINE_LD_NAMESPACE, declared in the @context so JSON-LD processors read
 // them as full IRIs and other consumers can ignore them:
 //   recipe:     hobline:notes, hobline:ingredients (key, group, allergens, aligned with recipeIngredient)
-//   HowToStep:  hobline:script, hobline:handsOn, hobline:station, hobline:after, hobline:cameraShot,
+//   HowToStep:  name (the step's short name, when it has one), hobline:script, hobline:handsOn,
+//               hobline:station, hobline:after, hobline:links (when there are any), hobline:cameraShot,
 //               hobline:cameraNote, hobline:cautions, hobline:durationMax (the top of a duration range)
 // Studio price links are not exported: prices belong to the studio, not to the recipe.
 import type { RecipeDraft, RecipeStepDraft } from '../types/recipe'
@@ -21,6 +22,7 @@ function stepNode(step: RecipeStepDraft): Json {
   const lo = step.durationMin ?? step.durationMax
   const hi = step.durationMax ?? step.durationMin
   const node: Json = { '@type': 'HowToStep', position: step.position, text: step.text }
+  if (step.name) node.name = step.name
   if (lo !== null) {
     node.itemListElement = [{ '@type': 'HowToDirection', text: step.text, performTime: toIsoDuration(lo) }]
     if (hi !== null && hi !== lo) node[h('durationMax')] = toIsoDuration(hi)
@@ -29,6 +31,7 @@ function stepNode(step: RecipeStepDraft): Json {
   node[h('handsOn')] = step.handsOn
   node[h('station')] = step.station
   node[h('after')] = step.after
+  if (step.links?.length) node[h('links')] = step.links.map(({ step: at, kind, lag }) => ({ step: at, kind, lag }))
   node[h('cameraShot')] = step.cameraShot
   node[h('cameraNote')] = step.cameraNote
   node[h('cautions')] = step.cautions

@@ -4,10 +4,16 @@
 // (ISO 8601), which become the step's duration; HowToStep itself has no times, but one that
 // carries them anyway is read too. ListItem and ItemList wrappers are unwrapped.
 // Hobline's own step fields travel in "hobline:"-prefixed properties (see schemaorg-export.ts).
-import type { RecipeImportProblem, RecipeStepDraft } from '../types/recipe'
+// A HowToStep's `name` becomes the step's short name unless it only repeats the text (step-name.ts).
+// A step from elsewhere whose text opens with "While …", "Meanwhile", "In the meantime" or "At the
+// same time" starts together with the step before it (step-links.ts); a Hobline export says its
+// links itself, so there the text is not read for them.
+import type { RecipeImportProblem, RecipeStepDraft, StepLinkDraft } from '../types/recipe'
 import { isCautionId, suggestStepCautions } from './cautions'
 import { parseIsoDuration } from './duration'
 import { cleanSchemaText, hasSchemaType, isJsonObject, schemaText, type JsonObject } from './schemaorg-read'
+import { readsAsAlongside, startTogetherLink } from './step-links'
+import { importedStepName } from './step-name'
 
 /** Hobline's JSON-LD vocabulary for what schema.org has no property for. */
 export const HOBLINE_LD_PREFIX = 'hobline'
@@ -46,6 +52,9 @@ function timeOf(node: JsonObject, field: string, problems: RecipeImportProblem[]
   return perform === null && prep === null ? null : (perform ?? 0) + (prep ?? 0)
 }
 
+const isStepLink = (l: unknown): l is StepLinkDraft => isJsonObject(l) && Number.isInteger(l.step) && (l.step as number) > 0
+  && (l.kind === 'start-start' || l.kind === 'finish-together') && Number.isInteger(l.lag) && (l.lag as number) >= 0
+
 type StepExtensions = Partial<RecipeStepDraft> & { durationMaxOverride?: number | null }
 
 function extensions(node: JsonObject, field: string, problems: RecipeImportProblem[], text: string): StepExtensions {
@@ -71,6 +80,11 @@ function extensions(node: JsonObject, field: string, problems: RecipeImportProbl
     if (Array.isArray(after) && after.every((n) => Number.isInteger(n) && n > 0)) out.after = after as number[]
     else bad('after', 'a list of earlier step positions')
   }
+  const links = hoblineProperty(node, 'links')
+  if (links !== undefined) {
+    if (Array.isArray(links) && links.every(isStepLink)) out.links = links.map(({ step, kind, lag }) => ({ step, kind, lag }))
+    else bad('links', 'a list of links to earlier steps ({ step, kind: "start-start" or "finish-together", lag })')
+  }
   for (const name of ['cameraShot', 'cameraNote'] as const) {
     const v = hoblineProperty(node, name)
     if (v === undefined) continue
@@ -95,9 +109,15 @@ function extensions(node: JsonObject, field: string, problems: RecipeImportProbl
 function addStep(ctx: StepContext, node: JsonObject | null, text: string, group: string | null, field: string, seconds: number | null): void {
   const ext = node ? extensions(node, field, ctx.problems, text) : { cautions: [...new Set(suggestStepCautions(text).map((c) => c.id))] }
   const { durationMaxOverride, ...fields } = ext as typeof ext & { durationMaxOverride?: number | null }
+  const position = ctx.steps.length + 1
+  // Only for steps from elsewhere: a Hobline export names what each step waits for.
+  const fromElsewhere = !node || hoblineProperty(node, 'after') === undefined
+  const alongside = fromElsewhere && position > 1 && !fields.links && readsAsAlongside(text)
   ctx.steps.push({
-    position: ctx.steps.length + 1, text, script: [], handsOn: true, durationMin: seconds, durationMax: durationMaxOverride ?? seconds,
+    position, name: node ? importedStepName(schemaText(node.name), text) : null, text, script: [], handsOn: true,
+    durationMin: seconds, durationMax: durationMaxOverride ?? seconds,
     station: null, after: [], cameraShot: null, cameraNote: null, cautions: [], group, ...fields,
+    ...(alongside ? { links: [startTogetherLink(position - 1)] } : {}),
   })
 }
 

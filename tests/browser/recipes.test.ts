@@ -97,6 +97,9 @@ describe.skipIf(!chromiumAvailable())('recipes in the browser', async () => {
     expect(await page.getByTestId('step-card-2').getByLabel('What to do').inputValue()).toBe('Rest the batter.')
     expect(await page.getByTestId('step-card-3').getByLabel('What to do').inputValue()).toBe('Melt {{butter}} in a frying pan over a medium heat.')
     await page.getByText('Step 2 no longer waits for step 3, which now comes after it.').waitFor({ state: 'attached' })
+    // The rest gets a short name for its timer, and the butter melts while the batter rests.
+    await page.getByTestId('step-card-2').getByLabel('Short name').fill('Batter rest')
+    await page.getByTestId('step-card-3').getByLabel('Starts together with the step before').check()
     expect(await axeViolations(page)).toEqual([])
     await screenshot(page, 'recipe-editor')
 
@@ -112,6 +115,8 @@ describe.skipIf(!chromiumAvailable())('recipes in the browser', async () => {
     await page.getByRole('heading', { level: 1, name: TITLE }).waitFor()
     // The hot-oil caution is on its step, with the wording the cautions module gives.
     await expect(page.getByTestId('step-3').getByTestId('caution').textContent()).resolves.toContain('Hot oil. Dry the food')
+    await expect(page.getByTestId('step-name-2').textContent()).resolves.toBe('Batter rest')
+    await expect(page.getByTestId('step-3').textContent()).resolves.toContain('starts together with the step before')
 
     // Scale to 6 servings in US units; the address keeps both.
     await page.getByText('US customary').click()

@@ -69,6 +69,43 @@ describe('cook plan', async () => {
     expect(res.body.data).toMatchObject({ code: 'missing-station', steps: [expect.objectContaining({ label: expect.stringMatching(/^Toss the squash/), recipeTitle: 'Roast squash with lentils and tahini' })] })
   })
 
+  it('a step saved as "starts together with the step before" is planned to start with it; unticked it follows it', async () => {
+    // What the editor's checkbox sends: no "after", a start-start link from the step before with no lag.
+    const steps = (together: boolean) => [
+      { name: 'Pasta water', text: 'Bring a large pot of salted water to the boil.', handsOn: false, durationMin: 600, durationMax: 600, station: 'burner' },
+      { text: 'Meanwhile, peel and finely chop the onion.', handsOn: true, durationMin: 300, durationMax: 300, station: 'counter',
+        links: together ? [{ step: 1, kind: 'start-start', lag: 0 }] : [] },
+      // Needs the water and the onion: it names both (a step that names none follows only the step before).
+      { text: 'Cook the rigatoni in the boiling water.', handsOn: false, durationMin: 660, durationMax: 660, station: 'burner', after: [1, 2] },
+    ]
+    const recipe = await producer.post('/api/studios/1/recipes', { title: 'Weeknight rigatoni', servings: 2, steps: steps(true) })
+    expect(recipe.status).toBe(201)
+    expect(recipe.body.steps.map((s: { name: string | null }) => s.name)).toEqual(['Pasta water', null, null])
+    const episode = await producer.post('/api/studios/1/episodes', { title: 'Rigatoni night', recipeIds: [recipe.body.id] })
+    const planned = async (saved: { steps: { id: number }[] }) => {
+      const res = await producer.get(`/api/episodes/${episode.body.id}/plan`)
+      expect(res.status).toBe(200)
+      return saved.steps.map((s) => res.body.steps.find((p: { stepId: number }) => p.stepId === s.id))
+    }
+    const [water, onion, pasta] = await planned(recipe.body)
+    expect(onion.start).toBe(water.start)
+    expect(onion.end).toBeLessThan(water.end)
+    expect(pasta.start).toBe(water.end)
+
+    const unticked = await producer.patch(`/api/recipes/${recipe.body.id}`, { version: 1, title: 'Weeknight rigatoni', servings: 2, steps: steps(false) })
+    expect(unticked.status).toBe(200)
+    const [water2, onion2] = await planned(unticked.body)
+    expect(onion2.start).toBe(water2.end)
+  })
+
+  it('the demo flatbreads: the mint yoghurt starts with the dough\'s rest, not after it', async () => {
+    const { body } = await producer.get(`/api/episodes/${episodeId}/plan`)
+    const rest = body.steps.find((s: { label: string }) => s.label === 'Cover and rest the dough')
+    const dip = body.steps.find((s: { label: string }) => s.label.startsWith('Chop the mint'))
+    expect(dip.start).toBeGreaterThanOrEqual(rest.start)
+    expect(dip.start).toBeLessThan(rest.end)
+  })
+
   it('refuses a lead that cannot be met: 422 naming both steps', async () => {
     const recipe = await producer.post('/api/studios/1/recipes', {
       title: 'Eggs in sauce', servings: 2,

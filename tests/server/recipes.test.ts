@@ -38,7 +38,7 @@ describe('recipes', async () => {
       { key: 'salt', min: null, max: null, unit: null, item: 'salt', toTaste: true },
     ],
     steps: [
-      { text: 'Boil {{spaghetti}} in salted water.', handsOn: false, durationMin: 540, durationMax: 600, station: 'burner', cautions: ['boiling'] },
+      { name: ' Pasta water ', text: 'Boil {{spaghetti}} in salted water.', handsOn: false, durationMin: 540, durationMax: 600, station: 'burner', cautions: ['boiling'] },
       { text: 'Warm {{milk}} and toss it through.', handsOn: true, after: [1], script: ['Now the milk goes in.'] },
     ],
   })
@@ -48,6 +48,8 @@ describe('recipes', async () => {
     expect(created.status).toBe(201)
     expect(created.body).toMatchObject({ version: 1, title: 'Weeknight spaghetti', servings: 4 })
     expect(created.body.steps.map((s: { position: number }) => s.position)).toEqual([1, 2])
+    // The short name is kept trimmed; a step without one has null.
+    expect(created.body.steps.map((s: { name: string | null }) => s.name)).toEqual(['Pasta water', null])
     expect(created.body.allergens.eu).toEqual([expect.objectContaining({ id: 'milk', items: ['whole milk'] })])
     const stepIds = created.body.steps.map((s: { id: number }) => s.id)
 
@@ -171,6 +173,7 @@ describe('recipes', async () => {
       [{ ...pasta(), ingredients: [{ ...pasta().ingredients[0], unit: 'bucket' }] }, 'ingredients.0.unit'],
       [{ ...pasta(), steps: [{ text: 'First', after: [2] }, { text: 'Second' }] }, 'steps.0.after'],
       [{ ...pasta(), steps: [{ text: 'x', station: 'grill' }] }, 'steps.0.station'],
+      [{ ...pasta(), steps: [{ text: 'x', name: 'The big pot of salted water for the pasta' }] }, 'steps.0.name'],
       [{ ...pasta(), ingredients: [pasta().ingredients[0], pasta().ingredients[0]] }, 'ingredients.1.key'],
     ]
     for (const [body, field] of cases) {

@@ -249,6 +249,8 @@ describe('export → import round trip (property)', () => {
     us: fc.subarray(US_ALLERGENS.map((a) => a.id)),
   })
   const step = fc.record({
+    name: fc.constantFrom(null, 'Pasta water', 'Dough rest', 'Sauce simmer'),
+    together: fc.boolean(),
     text: words(1, 8).map((t) => `${t}.`),
     script: fc.array(fc.string(), { maxLength: 3 }),
     handsOn: fc.boolean(),
@@ -286,7 +288,8 @@ describe('export → import round trip (property)', () => {
       }
     }),
     steps: d.steps.map((s, n) => ({
-      position: n + 1, text: s.text, script: s.script, handsOn: s.handsOn,
+      position: n + 1, name: s.name, text: s.text,
+      ...(s.together && n > 0 ? { links: [{ step: n, kind: 'start-start' as const, lag: 0 }] } : {}), script: s.script, handsOn: s.handsOn,
       durationMin: s.duration ? s.duration[0] : null, durationMax: s.duration ? s.duration[0] + s.duration[1] : null,
       station: s.station, after: n === 0 ? [] : [...new Set(s.afterSeed.map((x) => (x % n) + 1))].sort((x, y) => x - y),
       cameraShot: s.cameraShot, cameraNote: s.cameraNote, cautions: s.cautions, group: s.group,

@@ -65,6 +65,8 @@ export class RecipeStep extends Model<InferAttributes<RecipeStep>, InferCreation
   declare id: CreationOptional<number>
   declare recipeId: number
   declare position: number
+  /** A short name for timers and cues ("Pasta water"), at most 40 characters; null for none. */
+  declare name: string | null
   declare text: string
   declare script: string[]
   declare handsOn: boolean
@@ -113,7 +115,7 @@ export function initRecipeModels(sequelize: Sequelize) {
   )
   RecipeStep.init(
     {
-      id, recipeId: DataTypes.INTEGER, position: DataTypes.INTEGER, text: DataTypes.TEXT, script: json('script', []), handsOn: DataTypes.BOOLEAN,
+      id, recipeId: DataTypes.INTEGER, position: DataTypes.INTEGER, name: DataTypes.STRING(40), text: DataTypes.TEXT, script: json('script', []), handsOn: DataTypes.BOOLEAN,
       durationMin: DataTypes.INTEGER, durationMax: DataTypes.INTEGER, station: DataTypes.STRING(12), after: json('after', []), links: json('links', []),
       cameraShot: DataTypes.STRING(200), cameraNote: DataTypes.STRING(500), cautions: json('cautions', []), group: DataTypes.STRING(120), photo: DataTypes.STRING(200), ...stamps,
     },
