@@ -16,8 +16,7 @@ export function planShoot(episode: EpisodeRunOrder, kitchen: KitchenProfile): { 
   const { input, info } = episodePlanSteps(episode)
   const steps: ShootPlanStep[] = input.map((p) => {
     const { recipeTitle, step } = info.get(p.id)!
-    const name = (step as { name?: string | null }).name ?? null
-    return { ...p, recipeTitle, name, minMs: ms(step.durationMin), maxMs: ms(step.durationMax) }
+    return { ...p, recipeTitle, name: step.name ?? null, minMs: ms(step.durationMin), maxMs: ms(step.durationMax) }
   })
   const recipes: ScriptRecipe[] = episode.segments.map((s) => ({
     segmentId: `segment-${s.id}`, recipeId: String(s.recipeId ?? ''), title: s.title, stepIds: s.steps.map((st) => String(st.id)),

@@ -19,6 +19,18 @@ export function plannedDuration(step: { durationMin: number | null; durationMax:
 const stepKey = (id: number) => String(id)
 
 type EpisodeRunOrder = Awaited<ReturnType<typeof loadEpisodeRunOrder>>
+
+/** The step at `position` and, back through every step that starts together with the one before it, those. */
+function followsBlock(atPosition: Map<number, RecipeStep>, position: number): number[] {
+  const out = [position]
+  for (let p = position; p > 1; p--) {
+    const step = atPosition.get(p)
+    const together = step && !step.after.length && step.links.length === 1 && step.links[0]!.kind === 'start-start' && step.links[0]!.step === p - 1
+    if (!together) break
+    out.push(p - 1)
+  }
+  return out
+}
 type StepInfo = { recipeId: number; recipeTitle: string; label: string; step: RecipeStep }
 
 /** The planner's input for an episode's recipes, in the episode's order, and what each step is. */
@@ -30,8 +42,10 @@ export function episodePlanSteps(episode: EpisodeRunOrder) {
     for (const s of list) {
       // Tokens read as the ingredient's name; no closing full stop, since cues quote the label in a sentence.
       const label = plainStepText(s.text).replace(/[.。]+\s*$/, '')
-      // "Waits for" names earlier steps; a step that names none follows the one before it.
-      const after = s.after.length ? s.after : s.position > 1 && !s.links.length ? [s.position - 1] : []
+      // "Waits for" names earlier steps; a step that names none follows the one before it, and when that
+      // one started together with the step before it ("meanwhile, chop the onion"), those too: the pasta
+      // goes in once the water has boiled, not as soon as the onion is chopped.
+      const after = s.after.length ? s.after : s.position > 1 && !s.links.length ? followsBlock(atPosition, s.position - 1) : []
       input.push({
         id: stepKey(s.id),
         duration: plannedDuration(s),

@@ -75,8 +75,8 @@ describe('cook plan', async () => {
       { name: 'Pasta water', text: 'Bring a large pot of salted water to the boil.', handsOn: false, durationMin: 600, durationMax: 600, station: 'burner' },
       { text: 'Meanwhile, peel and finely chop the onion.', handsOn: true, durationMin: 300, durationMax: 300, station: 'counter',
         links: together ? [{ step: 1, kind: 'start-start', lag: 0 }] : [] },
-      // Needs the water and the onion: it names both (a step that names none follows only the step before).
-      { text: 'Cook the rigatoni in the boiling water.', handsOn: false, durationMin: 660, durationMax: 660, station: 'burner', after: [1, 2] },
+      // Names no step: it follows the onion and, since the onion started together with the water, the water too.
+      { text: 'Cook the rigatoni in the boiling water.', handsOn: false, durationMin: 660, durationMax: 660, station: 'burner' },
     ]
     const recipe = await producer.post('/api/studios/1/recipes', { title: 'Weeknight rigatoni', servings: 2, steps: steps(true) })
     expect(recipe.status).toBe(201)
@@ -94,8 +94,9 @@ describe('cook plan', async () => {
 
     const unticked = await producer.patch(`/api/recipes/${recipe.body.id}`, { version: 1, title: 'Weeknight rigatoni', servings: 2, steps: steps(false) })
     expect(unticked.status).toBe(200)
-    const [water2, onion2] = await planned(unticked.body)
+    const [water2, onion2, pasta2] = await planned(unticked.body)
     expect(onion2.start).toBe(water2.end)
+    expect(pasta2.start).toBe(onion2.end)
   })
 
   it('the demo flatbreads: the mint yoghurt starts with the dough\'s rest, not after it', async () => {

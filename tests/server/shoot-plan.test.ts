@@ -8,10 +8,13 @@ import type { ShootSnapshot } from '../../shared/types/socket-events'
 import type { ShootState } from '../../shared/types/shoot'
 import { shootClockAt } from '../../shared/utils/shoot-clock'
 import { useBuiltApp } from '../support/app'
-import { Client, demo, signedIn } from '../support/client'
+import { demo, signedIn, type Client } from '../support/client'
 import { connect, emitAck, waitFor, type TestSocket } from '../support/sockets'
 
-type PlanRoute = { makespan: number; steps: Array<{ stepId: number; start: number; end: number; handsOn: boolean; recipeId: number; durationMin: number | null; durationMax: number | null }> }
+type PlanRoute = {
+  makespan: number
+  steps: Array<{ stepId: number; start: number; end: number; handsOn: boolean; recipeId: number; durationMin: number | null; durationMax: number | null }>
+}
 
 /** The plan's order of starts, as the host meets them: by start; a wait first at the same moment; then the episode's written order. */
 function planOrder(plan: PlanRoute, written: number[]): string[] {
