@@ -15,16 +15,22 @@ import { artifactsDir, consoleErrorsOf, screenshot, signInOnPage } from '../supp
 const MIN = 60_000
 const num = async (page: Page, testId: string, name: string) => Number(await page.getByTestId(testId).first().getAttribute(name))
 
+/** The producer signed in on a laptop, with a new rehearsal of the demo episode (its id). */
+async function producerWithRehearsal(viewport: { width: number; height: number }, beforeCreating?: (page: Page) => Promise<void>) {
+  const page = await createPage(undefined, { viewport })
+  const errors = consoleErrorsOf(page)
+  await signInOnPage(page, 'producer@brackenford.test')
+  await beforeCreating?.(page)
+  const created = await page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' } })
+  expect(created.status()).toBe(201)
+  return { page, errors, shootId: (await created.json()).shoot.id as number }
+}
+
 describe.skipIf(!chromiumAvailable())('the control desk\'s live cook plan', async () => {
   await useBuiltApp({ browser: true })
 
   it('draws the lanes and a moving now-line, and moves the projected finish when the host runs 3 minutes late', async () => {
-    const page = await createPage(undefined, { viewport: { width: 1440, height: 900 } })
-    const errors = consoleErrorsOf(page)
-    await signInOnPage(page, 'producer@brackenford.test')
-    const created = await page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' } })
-    expect(created.status()).toBe(201)
-    const shootId: number = (await created.json()).shoot.id
+    const { page, errors, shootId } = await producerWithRehearsal({ width: 1440, height: 900 })
     const command = async (data: object) => {
       const r = await page.request.post(url(`/api/shoots/${shootId}/commands`), { data })
       expect(r.status(), JSON.stringify(data)).toBe(200)
@@ -120,14 +126,11 @@ describe.skipIf(!chromiumAvailable())('the control desk\'s live cook plan', asyn
   })
 
   it('names the steps of an episode the plan refuses, and says the recipes run in their written order', async () => {
-    const page = await createPage(undefined, { viewport: { width: 1280, height: 800 } })
-    const errors = consoleErrorsOf(page)
-    await signInOnPage(page, 'producer@brackenford.test')
     // A kitchen without an oven cannot roast the squash (missing-station, tests/server/plan.test.ts).
     const kitchen = { hands: 1, burners: 4, ovens: 0, racksPerOven: 1, parallelRecipes: true }
-    expect((await page.request.patch(url('/api/studios/1'), { data: { kitchen } })).status()).toBe(200)
-    const created = await page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' } })
-    const shootId: number = (await created.json()).shoot.id
+    const { page, errors, shootId } = await producerWithRehearsal({ width: 1280, height: 800 }, async (p) => {
+      expect((await p.request.patch(url('/api/studios/1'), { data: { kitchen } })).status()).toBe(200)
+    })
     await page.request.patch(url('/api/studios/1'), { data: { kitchen: { ...kitchen, ovens: 1 } } })
 
     await page.goto(url(`/shoots/${shootId}/desk`), { waitUntil: 'networkidle' })
