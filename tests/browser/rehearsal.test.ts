@@ -1,0 +1,255 @@
+// A rehearsal of the demo episode at 32× with the three screens open, run from the cook plan: the
+// host only presses Next when a hands-on beat's planned end comes, starts a wait when its cue says
+// "now" and calls each timer done when it rings. The prompter records, with a MutationObserver and
+// its own server clock, the moment each "start it" cue turns due; the test checks it against the
+// live plan's start for that wait (within 1 s of shoot clock), that the cue screen's stand-by names
+// the next timer, and that the shoot ends within 5 % of the plan's makespan. A second rehearsal
+// overruns one hands-on step by 3 minutes: the later cues and the projected finish move on all
+// three screens.
+import { createPage, url } from '@nuxt/test-utils/e2e'
+import type { Page } from 'playwright-core'
+import { describe, expect, it } from 'vitest'
+import type { ShootState } from '../../shared/types/shoot'
+import { dueTimersAt } from '../../shared/utils/alarm-policy'
+import { shootPositions, shootCursorRef } from '../../shared/utils/shoot'
+import { shootClockAt } from '../../shared/utils/shoot-clock'
+import { upcomingWaits } from '../../shared/utils/shoot-cues'
+import { isShootTimerLive } from '../../shared/utils/shoot-timers'
+import { shootPlanStep, stepTimerOf } from '../../shared/utils/shoot-waits'
+import { useBuiltApp } from '../support/app'
+import { axeViolations } from '../support/axe'
+import { chromiumAvailable } from '../support/chromium'
+import { consoleErrorsOf, screenshot, signInOnPage } from '../support/page'
+
+const SPEED = 32
+const MIN = 60_000
+
+interface Screen { page: Page; errors: string[] }
+interface CueFlip { id: string; atMs: number; serverMs: number }
+
+/** A signed-in screen at `path`, online with its clock sampled. */
+async function signedIn(email: string, path: string | null, viewport: { width: number; height: number }): Promise<Screen> {
+  const page = await createPage(undefined, { viewport })
+  const errors = consoleErrorsOf(page)
+  if (path) await signInOnPage(page, email, { path: `/signin?next=${encodeURIComponent(path)}`, landing: (u) => u.pathname === path })
+  else await signInOnPage(page, email)
+  return { page, errors }
+}
+
+async function ready(page: Page) {
+  await page.locator('[data-testid="connection"][data-online="true"]').waitFor()
+  await page.waitForFunction(() => (document.querySelector('[data-testid="shoot-screen"]') as HTMLElement | null)?.dataset.delayMs !== '')
+}
+
+/** The producer's rehearsal of the demo episode at 32×, with the desk, the prompter and the cue screen open. */
+async function rehearsal() {
+  const producer = await signedIn('producer@brackenford.test', null, { width: 1280, height: 800 })
+  const created = await producer.page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' } })
+  expect(created.status()).toBe(201)
+  const shootId: number = (await created.json()).shoot.id
+  const base = `/shoots/${shootId}`
+  await producer.page.goto(url(`${base}/desk`), { waitUntil: 'networkidle' })
+  const host = await signedIn('host@brackenford.test', `${base}/prompter`, { width: 1280, height: 800 })
+  const camera = await signedIn('camera@brackenford.test', `${base}/cue`, { width: 900, height: 1000 })
+  for (const x of [producer, host, camera]) await ready(x.page)
+  const command = async (data: Record<string, unknown>) => {
+    const r = await producer.page.request.post(url(`/api/shoots/${shootId}/commands`), { data })
+    expect(r.status(), JSON.stringify(data)).toBe(200)
+  }
+  const state = async (): Promise<ShootState> => (await (await host.page.request.get(url(`/api/shoots/${shootId}`))).json()).state
+  await command({ type: 'clock.speed', speed: SPEED })
+  // The prompter notes each cue turning due, with its own server clock at that moment.
+  await host.page.evaluate(() => {
+    const w = window as unknown as { cueFlips: CueFlip[] }
+    w.cueFlips = []
+    const due = new Set<string>()
+    const look = () => {
+      const shell = document.querySelector('[data-testid="shoot-screen"]') as HTMLElement
+      const serverMs = Date.now() + Number(shell.dataset.offsetMs)
+      const now = new Set<string>()
+      for (const el of document.querySelectorAll<HTMLElement>('[data-testid="prompter-cue"][data-due="true"]')) {
+        const id = el.dataset.stepId!
+        now.add(id)
+        if (!due.has(id)) w.cueFlips.push({ id, atMs: Number(el.dataset.atMs), serverMs })
+      }
+      due.clear()
+      for (const id of now) due.add(id)
+    }
+    new MutationObserver(look).observe(document.body, { subtree: true, childList: true, attributes: true, attributeFilter: ['data-due'] })
+  })
+  return { shootId, desk: producer, host, camera, command, state }
+
+}
+
+type Rehearsal = Awaited<ReturnType<typeof rehearsal>>
+
+/**
+ * One look at the shoot and what the host does about it: call a ringing timer done ("a"), start a
+ * wait whose cue is due ("s"), press Next when the beat's planned end (and the next beat's planned
+ * start) has come. Returns what was pressed, or null.
+ */
+async function hostActs(r: Rehearsal, s: ShootState, hold = 0): Promise<string | null> {
+  const now = Date.now()
+  const shootNow = shootClockAt(s.clock, now)
+  if (dueTimersAt(s.timers, now).length) return 'a'
+  const dueCue = await r.host.page.locator('[data-testid="prompter-cue"][data-due="true"]').count()
+  if (dueCue) return 's'
+  const live = s.plan!.live!
+  const positions = shootPositions(s.runOrder)
+  const here = shootCursorRef(s)
+  const at = positions.findIndex((p) => p.segment === here.segment && p.step === here.step)
+  // The beat Next goes to: a wait already started from its cue is gone past.
+  const next = positions.slice(at + 1).find((p) => !(p.stepId && stepTimerOf(s, p.stepId)))
+  const step = shootPlanStep(s, here.stepId)
+  const end = step?.handsOn ? live.steps[step.id]!.endMs + hold : 0
+  if (!next) return shootNow >= Math.max(end, live.makespanMs) && !s.timers.some(isShootTimerLive) ? 'end' : null
+  const nextStart = next.stepId ? live.steps[next.stepId]?.startMs ?? 0 : 0
+  return shootNow >= Math.max(end, nextStart) ? 'PageDown' : null
+}
+
+/** Runs the host until `stop` says so (or the shoot ends); `hold` keeps the host on a step longer. */
+interface DriveOptions { hold?: (s: ShootState) => number; onLook?: (s: ShootState) => Promise<void> }
+async function drive(r: Rehearsal, stop: (s: ShootState) => boolean, opts: DriveOptions = {}) {
+  let s = await r.state()
+  let sent: { seq: number; at: number } | null = null
+  const shell = r.host.page.getByTestId('shoot-screen')
+  for (;;) {
+    const seq = Number(await shell.getAttribute('data-seq'))
+    if (seq !== s.seq) s = await r.state()
+    if (s.status === 'ended' || stop(s)) return s
+    await opts.onLook?.(s)
+    // After a key, wait for its change (or a moment, if it was refused) before the next.
+    if (sent && s.seq === sent.seq && Date.now() - sent.at < 250) continue
+    const act = await hostActs(r, s, opts.hold?.(s) ?? 0)
+    if (!act) {
+      await new Promise((done) => setTimeout(done, 5))
+      continue
+    }
+    sent = { seq: s.seq, at: Date.now() }
+    if (act === 'end') await r.command({ type: 'shoot.end' })
+    else await r.host.page.keyboard.press(act)
+  }
+}
+
+describe.skipIf(!chromiumAvailable())('a rehearsal run from the cook plan, on three screens', async () => {
+  await useBuiltApp({ browser: true })
+
+  it('cues each wait on time, names the next timer on the cue screen and ends within 5 % of the plan', async () => {
+    const r = await rehearsal()
+    const first = (await r.state()).plan!.first!
+    expect(first.makespanMs).toBeGreaterThan(30 * MIN)
+    await r.host.page.getByRole('button', { name: 'Start', exact: true }).click()
+    await r.desk.page.locator('[data-testid="shoot-status"][data-status="running"]').waitFor()
+    // The clock as it runs from the start: nobody pauses or changes the speed, so it holds throughout.
+    const clock = (await r.state()).clock
+    expect(clock).toMatchObject({ running: true, speed: SPEED })
+
+    let standByChecked = false
+    let cueShot = false
+    let deskShot = false
+    const ended = await drive(r, () => false, {
+      onLook: async (s) => {
+        const now = Date.now()
+        // The cue screen's stand-by names the timer that ends next, once one runs.
+        const running = s.timers.filter((t) => t.state === 'running').toSorted((a, b) => a.deadlineServerMs! - b.deadlineServerMs!)
+        if (!standByChecked && running.length && running[0]!.deadlineServerMs! - now > 3000) {
+          const item = r.camera.page.locator(`[data-testid="stand-by"] li[data-kind="timer"][data-id="${running[0]!.id}"]`)
+          await expect(item.getByTestId('stand-by-label').textContent()).resolves.toBe(running[0]!.label)
+          const timersListed = await r.camera.page.locator('[data-testid="stand-by"] li[data-kind="timer"]').first().getAttribute('data-id')
+          expect(timersListed).toBe(running[0]!.id)
+          standByChecked = true
+        }
+        if (!cueShot && upcomingWaits(s, now).some((w) => w.inMs > 0)) {
+          await r.host.page.getByTestId('prompter-cue').first().waitFor()
+          await screenshot(r.host.page, 'rehearsal-prompter-cue')
+          cueShot = true
+        }
+        if (!deskShot && shootClockAt(s.clock, now) > first.makespanMs / 2) {
+          await screenshot(r.desk.page, 'rehearsal-desk')
+          deskShot = true
+        }
+      },
+    })
+    expect(ended.status).toBe('ended')
+    expect(standByChecked && cueShot && deskShot).toBe(true)
+
+    // Every cue turned due within 1 s of shoot clock of its planned start (the live plan's, which the
+    // prompter showed beside it): the page's own server clock at the flip, on the shoot's clock.
+    const flips = await r.host.page.evaluate(() => (window as unknown as { cueFlips: CueFlip[] }).cueFlips)
+    const waits = ended.plan!.steps.filter((p) => !p.handsOn && p.maxMs !== null)
+    expect(flips.length).toBeGreaterThan(0)
+    for (const f of flips) {
+      const late = shootClockAt(clock, f.serverMs) - f.atMs
+      expect(late, `${f.id} turned due ${late} ms after ${f.atMs}`).toBeGreaterThanOrEqual(-50)
+      expect(late, `${f.id} turned due ${late} ms after ${f.atMs}`).toBeLessThanOrEqual(1000)
+    }
+    // Every wait got its timer, started from its cue or by reaching its beat, and was called done.
+    for (const w of waits) expect(stepTimerOf(ended, w.id)?.state, w.id).toBe('acknowledged')
+    // The shoot ends within 5 % of the first plan's makespan (the clock stopped when it ended).
+    const endMs = ended.clock.anchorShootMs
+    console.log(`[rehearsal] ended at ${Math.round(endMs / 1000)} s of ${Math.round(first.makespanMs / 1000)} s planned; ${flips.length} cues`)
+    expect(Math.abs(endMs - first.makespanMs)).toBeLessThanOrEqual(0.05 * first.makespanMs)
+    for (const s of [r.desk, r.host, r.camera]) expect(s.errors).toEqual([])
+    for (const s of [r.desk, r.host, r.camera]) await s.page.close()
+  }, 180_000)
+
+  it('moves the later cues and the projected finish on every screen when a step runs 3 minutes over', async () => {
+    const r = await rehearsal()
+    await r.command({ type: 'shoot.start' })
+    // The host runs to plan up to the first hands-on step with a wait still to start after it.
+    const onIt = (s: ShootState) => {
+      const step = shootPlanStep(s, shootCursorRef(s).stepId)
+      return !!step?.handsOn && upcomingWaits(s, Date.now()).length > 0 && !s.timers.some((t) => t.state === 'due')
+    }
+    let s = await drive(r, onIt)
+    const overrun = shootCursorRef(s).stepId!
+    const screens = [r.desk, r.host, r.camera]
+    const finishOn = (page: Page) => page.getByTestId('projected-finish').getAttribute('data-projected-ms').then(Number)
+    const before = { finish: await finishOn(r.host.page), cues: await cueTimes(r.host.page), standBy: await standByTimes(r.camera.page, s.clock) }
+    expect(Object.keys(before.cues).length).toBeGreaterThan(0)
+    for (const x of screens) await expect(finishOn(x.page)).resolves.toBe(before.finish)
+    await screenshot(r.host.page, 'rehearsal-prompter-before-overrun')
+
+    // Three kitchen minutes over on this step, then Next.
+    s = await drive(r, (x) => shootCursorRef(x).stepId !== overrun, { hold: () => 3 * MIN })
+    const live = s.plan!.live!
+    expect(live.steps[overrun]!.endMs - s.plan!.first!.steps[overrun]!.endMs).toBeGreaterThanOrEqual(3 * MIN)
+    // The projected finish moved later by the overrun (the step is on the cook's one pair of hands), on all three screens.
+    await r.host.page.locator(`[data-testid="projected-finish"][data-projected-ms="${live.makespanMs}"]`).waitFor()
+    expect(live.makespanMs - before.finish).toBeGreaterThanOrEqual(2.5 * MIN)
+    for (const x of screens) await x.page.locator(`[data-testid="projected-finish"][data-projected-ms="${live.makespanMs}"]`).waitFor()
+    await r.host.page.getByTestId('prompter-projection').waitFor()
+    // The later cues moved on the prompter, to the live plan's new starts.
+    const after = await cueTimes(r.host.page)
+    const moved = Object.keys(before.cues).filter((id) => after[id] !== undefined)
+    expect(moved.length).toBeGreaterThan(0)
+    for (const id of moved) expect(after[id]).toBe(live.steps[id]!.startMs)
+    expect(moved.some((id) => after[id]! - before.cues[id]! >= 2.5 * MIN), JSON.stringify({ before: before.cues, after })).toBe(true)
+    // And on the cue screen's stand-by: each wait now stands at the new start (to a kitchen second).
+    const standBy = await standByTimes(r.camera.page, s.clock)
+    const waitsThere = Object.keys(standBy).filter((id) => before.standBy[id] !== undefined && live.steps[id])
+    expect(waitsThere.length).toBeGreaterThan(0)
+    // (A row is drawn at most 50 ms before it is read: 1.6 kitchen s at 32×.)
+    for (const id of waitsThere) expect(Math.abs(standBy[id]! - live.steps[id]!.startMs), id).toBeLessThan(2000)
+    expect(waitsThere.some((id) => standBy[id]! - before.standBy[id]! >= 2.5 * MIN), JSON.stringify({ before: before.standBy, standBy })).toBe(true)
+    await screenshot(r.host.page, 'rehearsal-prompter-after-overrun')
+    await screenshot(r.desk.page, 'rehearsal-desk-after-overrun')
+    for (const x of screens) expect(await axeViolations(x.page, { aaa: true })).toEqual([])
+    for (const x of screens) expect(x.errors).toEqual([])
+    for (const x of screens) await x.page.close()
+  }, 180_000)
+})
+
+/** The planned start of each cue on the prompter (shoot ms), by step id. */
+function cueTimes(page: Page): Promise<Record<string, number>> {
+  return page.evaluate(() => Object.fromEntries([...document.querySelectorAll<HTMLElement>('[data-testid="prompter-cue"]')]
+    .map((el) => [el.dataset.stepId!, Number(el.dataset.atMs)])))
+}
+
+/** When each wait on the cue screen's stand-by will start, on the shoot clock: the page's server clock
+ * when it drew the row, on the shoot's clock, plus the row's real countdown × the speed. */
+async function standByTimes(page: Page, clock: ShootState['clock']): Promise<Record<string, number>> {
+  const seen = await page.evaluate(() => [...document.querySelectorAll<HTMLElement>('[data-testid="stand-by"] li[data-kind="wait"]')]
+    .map((el) => ({ id: el.dataset.id!, inMs: Number(el.dataset.inMs), serverNow: Number(el.dataset.serverNow) })))
+  return Object.fromEntries(seen.filter((e) => e.inMs > 0).map((e) => [e.id, shootClockAt(clock, e.serverNow) + e.inMs * clock.speed]))
+}
