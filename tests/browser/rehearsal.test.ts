@@ -199,7 +199,8 @@ describe.skipIf(!chromiumAvailable())('a rehearsal run from the cook plan, on th
     // The host runs to plan up to the first hands-on step with a wait still to start after it.
     const onIt = (s: ShootState) => {
       const step = shootPlanStep(s, shootCursorRef(s).stepId)
-      return !!step?.handsOn && upcomingWaits(s, Date.now()).length > 0 && !s.timers.some((t) => t.state === 'due')
+      const waits = upcomingWaits(s, Date.now())
+      return !!step?.handsOn && waits.length > 0 && waits.every((w) => w.inMs > 10_000) && !dueTimersAt(s.timers, Date.now()).length
     }
     let s = await drive(r, onIt)
     const overrun = shootCursorRef(s).stepId!
@@ -213,6 +214,7 @@ describe.skipIf(!chromiumAvailable())('a rehearsal run from the cook plan, on th
     // Three kitchen minutes over on this step, then Next.
     s = await drive(r, (x) => shootCursorRef(x).stepId !== overrun, { hold: () => 3 * MIN })
     const live = s.plan!.live!
+    console.log(`[overrun] ${overrun}: finish ${before.finish} → ${live.makespanMs}; cues ${JSON.stringify(before.cues)}`)
     expect(live.steps[overrun]!.endMs - s.plan!.first!.steps[overrun]!.endMs).toBeGreaterThanOrEqual(3 * MIN)
     // The projected finish moved later by the overrun (the step is on the cook's one pair of hands), on all three screens.
     await r.host.page.locator(`[data-testid="projected-finish"][data-projected-ms="${live.makespanMs}"]`).waitFor()

@@ -48,6 +48,11 @@ describe('standByEvents', () => {
     // Resumed at shoot time 2 min: simmer (15 min) is 13 minutes away.
     expect(standByEvents(s, steps, T0 + 30 * MIN)).toEqual([{ kind: 'step', id: 'simmer', label: 'Simmer the beans', inMs: 13 * MIN }])
   })
+  it('lists the next two step starts only, so timers and waits are not crowded out', () => {
+    const many = { ...steps, rest: { plannedStartMs: 20 * MIN, text: 'Rest the dough' }, plate: { plannedStartMs: 25 * MIN, text: 'Plate up' } }
+    const s = run(createShootState({ id: 's', mode: 'rehearsal', runOrder: [{ id: 'a', stepIds: ['chop', 'soften', 'simmer', 'rest', 'plate'] }] }), { type: 'shoot.start' }, T0)
+    expect(standByEvents(s, many, T0, 6).map((e) => e.id)).toEqual(['soften', 'simmer'])
+  })
   it('keeps to the limit and names ten seconds as the urgent warning (common practice)', () => {
     const s = run(shoot(), { type: 'shoot.start' }, T0)
     expect(standByEvents(s, steps, T0, 1)).toHaveLength(1)
