@@ -98,17 +98,19 @@ export function defaultShootHandlers() {
     startWait: {
       type: 'wait.start',
       run: () => {
-        // The cue that is due (its planned start has come); one not yet due starts from its own button.
+        // Every cue that is due (its planned start has come; two pots may go on together); one not
+        // yet due starts from its own button.
         const s = shoot.state
-        const waits = s ? upcomingWaits(s, shoot.serverNowMs()) : []
-        const due = waits.find((w) => w.inMs <= 0)
-        if (!due) {
+        const waits = s ? upcomingWaits(s, shoot.serverNowMs(), Number.POSITIVE_INFINITY) : []
+        const due = waits.filter((w) => w.inMs <= 0)
+        if (!due.length) {
           message.value = waits.length
             ? `No wait is due yet: ${waits[0]!.label} starts in ${countdownText(waits[0]!.inMs)}. Press its Start now to start it early.`
             : 'No wait of the cook plan is waiting to start.'
           return
         }
-        send({ type: 'wait.start', stepId: due.stepId })
+        message.value = null
+        for (const w of due) void shoot.command({ type: 'wait.start', stepId: w.stepId })
       },
     },
     acknowledge: {
