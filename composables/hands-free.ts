@@ -3,7 +3,8 @@
 // Voice commands (useVoiceCommands) call `run` too, so both paths behave alike.
 import type { ShootCommand, ShootCommandType } from '~~/shared/types/shoot'
 import { actionForKey, keyName, stepTimer, type KeyAction } from '~~/shared/utils/key-map'
-import { dueTimersAt } from '~~/shared/utils/alarm-policy'
+import { upcomingWaits } from '~~/shared/utils/shoot-cues'
+import { timerForMoreTime, timersToCallDone } from '~~/shared/utils/timer-attention'
 
 export type HandsFreeHandlers = Partial<Record<KeyAction, () => void>>
 
@@ -94,18 +95,48 @@ export function defaultShootHandlers() {
         send({ type: 'timer.start', label: timer.label, durationMs: timer.durationMs })
       },
     },
+    startWait: {
+      type: 'wait.start',
+      run: () => {
+        // Every cue that is due (its planned start has come; two pots may go on together); one not
+        // yet due starts from its own button.
+        const s = shoot.state
+        const waits = s ? upcomingWaits(s, shoot.serverNowMs(), Number.POSITIVE_INFINITY) : []
+        const due = waits.filter((w) => w.inMs <= 0)
+        if (!due.length) {
+          message.value = waits.length
+            ? `No wait is due yet: ${waits[0]!.label} starts in ${countdownText(waits[0]!.inMs)}. Press its Start now to start it early.`
+            : 'No wait of the cook plan is waiting to start.'
+          return
+        }
+        message.value = null
+        for (const w of due) void shoot.command({ type: 'wait.start', stepId: w.stepId })
+      },
+    },
     acknowledge: {
       type: 'timer.acknowledge',
       run: () => {
         // Due on this screen's clock, as the alarm is: a timer past its deadline that the server's
-        // tick has not marked yet is acknowledged too (the reducer marks it due first).
-        const due = dueTimersAt(shoot.state?.timers ?? [], shoot.serverNowMs())
-        if (!due.length) {
-          message.value = 'No alarm is ringing, so there is nothing to acknowledge.'
+        // tick has not marked yet is acknowledged too (the reducer marks it due first). With none
+        // ringing, a timer at its "check it" moment is called done.
+        const done = timersToCallDone(shoot.state?.timers ?? [], shoot.serverNowMs())
+        if (!done.length) {
+          message.value = 'No alarm is ringing and no timer is at its check, so there is nothing to call done.'
           return
         }
         message.value = null
-        for (const t of due) void shoot.command({ type: 'timer.acknowledge', timerId: t.id })
+        for (const t of done) void shoot.command({ type: 'timer.acknowledge', timerId: t.id })
+      },
+    },
+    addMinute: {
+      type: 'timer.addTime',
+      run: () => {
+        const t = timerForMoreTime(shoot.state?.timers ?? [], shoot.serverNowMs())
+        if (!t) {
+          message.value = 'No timer is live, so there is none to add a minute to.'
+          return
+        }
+        send({ type: 'timer.addTime', timerId: t.id, deltaMs: 60_000 })
       },
     },
     flub: { type: 'marker.add', run: () => send({ type: 'marker.add', kind: 'flub' }) },

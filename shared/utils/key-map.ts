@@ -6,7 +6,7 @@
 import { SHOOT_TIMER_LABEL_MAX, SHOOT_TIMER_MAX_MS, SHOOT_TIMER_MIN_MS } from '../types/shoot'
 import { plainStepText } from './step-text'
 
-export const KEY_ACTIONS = ['next', 'previous', 'startTimer', 'acknowledge', 'flub'] as const
+export const KEY_ACTIONS = ['next', 'previous', 'startTimer', 'startWait', 'acknowledge', 'addMinute', 'flub'] as const
 export type KeyAction = (typeof KEY_ACTIONS)[number]
 export type KeyMap = Record<KeyAction, string[]>
 
@@ -17,7 +17,9 @@ export const KEY_ACTION_LABELS: Record<KeyAction, string> = {
   next: 'Next step',
   previous: 'Previous step',
   startTimer: "Start this step's timer",
-  acknowledge: 'Acknowledge the alarm',
+  startWait: 'Start the wait that is due now',
+  acknowledge: 'Acknowledge the alarm, or call a timer done at its check',
+  addMinute: 'One more minute on the ringing (or soonest) timer',
   flub: 'Mark a flub',
 }
 
@@ -25,7 +27,9 @@ export const DEFAULT_KEY_MAP: KeyMap = {
   next: ['PageDown', 'ArrowRight'],
   previous: ['PageUp', 'ArrowLeft'],
   startTimer: ['t'],
+  startWait: ['s'],
   acknowledge: ['a', 'Enter'],
+  addMinute: ['m', '+'],
   flub: ['f'],
 }
 

@@ -15,7 +15,9 @@ export const VOICE_PHRASES: Record<KeyAction, string[]> = {
   next: ['next', 'next step'],
   previous: ['go back', 'back', 'previous', 'previous step'],
   startTimer: ['start timer', 'start the timer'],
-  acknowledge: ['stop alarm', 'stop the alarm', 'got it', 'acknowledge'],
+  startWait: ['start it', 'start the wait', 'start it now'],
+  acknowledge: ['stop alarm', 'stop the alarm', 'got it', 'acknowledge', 'done', 'it is done', "it's done"],
+  addMinute: ['one more minute', 'add a minute', 'add one minute', 'plus one minute'],
   flub: ['flub', 'mark flub', 'mark a flub'],
 }
 
