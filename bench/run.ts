@@ -1,10 +1,11 @@
 // npm run bench — run every benchmark, print a table of figures, baselines and ratios, and exit
-// non-zero if any figure is over its bound. `npm run bench -- NAME` runs those whose name contains NAME.
+// non-zero if any figure is over its bound. `npm run bench -- NAME` runs those whose name contains NAME
+// or whose group is NAME (database, plan, shoot, screens).
 import { benchmarks } from './index'
 import type { BenchResult } from './types'
 
 const filter = process.argv[2]
-const selected = benchmarks.filter((b) => !filter || b.name.includes(filter))
+const selected = benchmarks.filter((b) => !filter || b.name.includes(filter) || b.group === filter)
 const rows: { name: string; result?: BenchResult; error?: string; pass: boolean }[] = []
 
 for (const bench of selected) {

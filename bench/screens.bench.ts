@@ -11,7 +11,7 @@ import { chromium, type Browser, type Page } from 'playwright-core'
 import { DEMO_PASSWORD } from '../server/db/demo'
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../tests/support/chromium'
 import { signIn, startBuiltApp } from './server'
-import { percentile, type Benchmark } from './types'
+import { percentile, type Benchmark, type BenchResult } from './types'
 
 interface Setup { url: string; cookie: string; shootId: number; browser: Browser; stop: () => Promise<void> }
 let shared: Promise<Setup> | undefined
@@ -52,19 +52,22 @@ async function shippedBytes(s: Setup, path: string): Promise<number> {
 
 async function lcpMs(s: Setup, path: string): Promise<number> {
   const page = await pageWithSession(s)
-  const cdp = await page.context().newCDPSession(page)
-  await cdp.send('Emulation.setCPUThrottlingRate', { rate: 4 })
-  await page.goto(`${s.url}${path}`, { waitUntil: 'load' })
-  const lcp = await page.evaluate(() => new Promise<number>((resolve) => {
-    let last = 0
-    new PerformanceObserver((list) => {
-      for (const e of list.getEntries()) last = e.startTime
-    }).observe({ type: 'largest-contentful-paint', buffered: true })
-    setTimeout(() => resolve(last), 1500)
-  }))
-  await page.context().close()
-  if (!(lcp > 0)) throw new Error(`no largest-contentful-paint entry on ${path}`)
-  return lcp
+  try {
+    const cdp = await page.context().newCDPSession(page)
+    await cdp.send('Emulation.setCPUThrottlingRate', { rate: 4 })
+    await page.goto(`${s.url}${path}`, { waitUntil: 'load' })
+    const lcp = await page.evaluate(() => new Promise<number>((resolve) => {
+      let last = 0
+      new PerformanceObserver((list) => {
+        for (const e of list.getEntries()) last = e.startTime
+      }).observe({ type: 'largest-contentful-paint', buffered: true })
+      setTimeout(() => resolve(last), 1500)
+    }))
+    if (!(lcp > 0)) throw new Error(`no largest-contentful-paint entry on ${path}`)
+    return lcp
+  } finally {
+    await page.context().close()
+  }
 }
 
 /** ms from a keydown to the frame that shows what it changed: the change is seen by a
@@ -121,9 +124,31 @@ async function keyToPaint(page: Page, target: string, attr: string, rounds: numb
 const ROUNDS = 10
 const LCP_RUNS = 5
 
+async function keyToPaintRun(s: Setup): Promise<BenchResult> {
+  const page = await pageWithSession(s)
+  page.on('crash', () => console.warn('key press to paint: the prompter page crashed'))
+  const bare = await s.browser.newPage()
+  try {
+    await page.goto(`${s.url}/shoots/${s.shootId}/prompter`, { waitUntil: 'networkidle' })
+    // A command is refused while the socket is down, so each press waits for the screen to be online.
+    const online = () => page.locator('[data-testid="connection"][data-online="true"]').waitFor({ timeout: 15_000 })
+    // Forward then back, so the shoot ends where it started.
+    const forward = await keyToPaint(page, '[data-testid="prompter"]', 'data-step', ROUNDS / 2, 'PageDown', online)
+    const back = await keyToPaint(page, '[data-testid="prompter"]', 'data-step', ROUNDS / 2, 'PageUp', online)
+    await bare.goto(`${s.url}/robots.txt`)
+    await bare.setContent('<p id="x" data-step="0">step</p><script>addEventListener("keydown", () => { const x = document.getElementById("x"); x.dataset.step = String(Number(x.dataset.step) + 1) })</script>')
+    const baseline = await keyToPaint(bare, '#x', 'data-step', ROUNDS, 'PageDown')
+    return { figure: percentile([...forward, ...back], 95), unit: 'ms', baseline: percentile(baseline, 95), bound: 50, note: `${ROUNDS} presses; baseline: a bare page changing one attribute` }
+  } finally {
+    await bare.close().catch(() => {})
+    await page.context().close().catch(() => {})
+  }
+}
+
 export const screenBenchmarks: Benchmark[] = [
   {
     name: 'prompter route JS+CSS (gzip)',
+    group: 'screens',
     async run() {
       const s = await ready()
       const prompter = await shippedBytes(s, `/shoots/${s.shootId}/prompter`)
@@ -133,6 +158,7 @@ export const screenBenchmarks: Benchmark[] = [
   },
   {
     name: 'prompter LCP, CPU 4× slower',
+    group: 'screens',
     async run() {
       const s = await ready()
       const prompter = `/shoots/${s.shootId}/prompter`
@@ -150,23 +176,19 @@ export const screenBenchmarks: Benchmark[] = [
   },
   {
     name: 'prompter key press to paint (p95)',
+    group: 'screens',
     async run() {
       const s = await ready()
       try {
-        const page = await pageWithSession(s)
-        await page.goto(`${s.url}/shoots/${s.shootId}/prompter`, { waitUntil: 'networkidle' })
-        // A command is refused while the socket is down, so each press waits for the screen to be online.
-        const online = () => page.locator('[data-testid="connection"][data-online="true"]').waitFor({ timeout: 15_000 })
-        // Forward then back, so the shoot ends where it started.
-        const forward = await keyToPaint(page, '[data-testid="prompter"]', 'data-step', ROUNDS / 2, 'PageDown', online)
-        const back = await keyToPaint(page, '[data-testid="prompter"]', 'data-step', ROUNDS / 2, 'PageUp', online)
-        const bare = await s.browser.newPage()
-        await bare.goto(`${s.url}/robots.txt`)
-        await bare.setContent('<p id="x" data-step="0">step</p><script>addEventListener("keydown", () => { const x = document.getElementById("x"); x.dataset.step = String(Number(x.dataset.step) + 1) })</script>')
-        const baseline = await keyToPaint(bare, '#x', 'data-step', ROUNDS, 'PageDown')
-        await bare.close()
-        await page.context().close()
-        return { figure: percentile([...forward, ...back], 95), unit: 'ms', baseline: percentile(baseline, 95), bound: 50, note: `${ROUNDS} presses; baseline: a bare page changing one attribute` }
+        // A renderer that dies under load (the page or its browser "has been closed") is named and
+        // measured once more on a fresh page; any other failure ends the benchmark at once.
+        try {
+          return await keyToPaintRun(s)
+        } catch (error) {
+          if (!/has been closed|crash/i.test((error as Error).message)) throw error
+          console.warn(`key press to paint: ${(error as Error).message.split('\n')[0]}; measuring again on a fresh page`)
+          return await keyToPaintRun(s)
+        }
       } finally {
         await s.stop()
         shared = undefined

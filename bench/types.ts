@@ -15,6 +15,8 @@ export interface BenchResult {
 
 export interface Benchmark {
   name: string
+  /** The file it comes from (`npm run bench -- screens`). */
+  group?: string
   run: () => Promise<BenchResult>
 }
 
