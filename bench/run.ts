@@ -5,7 +5,8 @@ import { benchmarks } from './index'
 import type { BenchResult } from './types'
 
 const filter = process.argv[2]
-const selected = benchmarks.filter((b) => !filter || b.name.includes(filter) || b.group === filter)
+const inGroup = benchmarks.filter((b) => b.group === filter)
+const selected = inGroup.length ? inGroup : benchmarks.filter((b) => !filter || b.name.includes(filter))
 const rows: { name: string; result?: BenchResult; error?: string; pass: boolean }[] = []
 
 for (const bench of selected) {
