@@ -91,12 +91,77 @@ function splitPrep(rest: string): [string, string] {
   return [rest, '']
 }
 
-const tidy = (s: string) => s.replace(/\(\s*[,;]?\s*\)/g, '').replace(/\s*,\s*(,\s*)+/g, ', ').replace(/\s+/g, ' ').replace(/^[\s,;:.-]+|[\s,;:]+$/g, '').trim()
+/** The longest ingredient line read for an amount; a longer one is kept whole as the item. */
+export const QUANTITY_LINE_MAX = 1000
+
+// Tidying the leftovers of a line. Each helper walks the text once: a regular expression such as
+// /[\s,;:]+$/ retries from every position of a long run and takes time growing with its square.
+const isSpace = (ch: string | undefined) => ch !== undefined && /\s/.test(ch)
+const skipSpaces = (s: string, i: number) => {
+  while (isSpace(s[i])) i++
+  return i
+}
+
+/** Empty parentheses left by a removed word ("( )", "(, )") are dropped. */
+function dropEmptyParens(s: string): string {
+  let out = ''
+  for (let i = 0; i < s.length; i++) {
+    if (s[i] === '(') {
+      let j = skipSpaces(s, i + 1)
+      if (s[j] === ',' || s[j] === ';') j = skipSpaces(s, j + 1)
+      if (s[j] === ')') {
+        i = j
+        continue
+      }
+    }
+    out += s[i]
+  }
+  return out
+}
+
+/** Runs of space become one space, and a run of two or more commas (with space between) one ", ". */
+function squeezeSpaceAndCommas(s: string): string {
+  let out = ''
+  for (let i = 0; i < s.length;) {
+    if (!isSpace(s[i]) && s[i] !== ',') {
+      out += s[i++]
+      continue
+    }
+    let commas = 0
+    let spaceBefore = false
+    let spaceAfter = false
+    for (; isSpace(s[i]) || s[i] === ','; i++) {
+      if (s[i] === ',') {
+        commas++
+        spaceAfter = false
+      } else if (commas) spaceAfter = true
+      else spaceBefore = true
+    }
+    out += commas >= 2 ? ', ' : commas === 1 ? `${spaceBefore ? ' ' : ''},${spaceAfter ? ' ' : ''}` : ' '
+  }
+  return out
+}
+
+/** `s` without the leading characters in `lead` and trailing ones in `trail` (white space always). */
+function trimChars(s: string, lead: string, trail: string): string {
+  let a = 0
+  let b = s.length
+  while (a < b && (isSpace(s[a]) || lead.includes(s[a]!))) a++
+  while (b > a && (isSpace(s[b - 1]) || trail.includes(s[b - 1]!))) b--
+  return s.slice(a, b)
+}
+
+const tidy = (s: string) => trimChars(squeezeSpaceAndCommas(dropEmptyParens(s)), ',;:.-', ',;:')
 
 /** Read one ingredient line. Never throws on text; doubtful readings are listed in `warnings`. */
 export function parseQuantity(text: string, options: QuantityParseOptions = {}): ParsedQuantity {
   const warnings: string[] = []
-  let s = normaliseAmountText(String(text ?? ''))
+  const line = String(text ?? '')
+  if (line.length > QUANTITY_LINE_MAX) {
+    warnings.push(`An ingredient line of ${line.length} characters is longer than ${QUANTITY_LINE_MAX}; kept whole as the item, not read for an amount`)
+    return { text: line, min: null, max: null, unit: null, item: line.trim(), prep: null, optional: false, toTaste: false, parts: [], warnings }
+  }
+  let s = normaliseAmountText(line)
   let optional = false
   let toTaste = false
   if (/\boptional\b/i.test(s)) {
@@ -108,7 +173,7 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
     toTaste = true
     s = s.replace(taste[0], '')
   }
-  s = s.replace(/\(\s*[,;]?\s*\)/g, '').replace(/\s*,\s*(,\s*)+/g, ', ').replace(/\s+/g, ' ').replace(/^[\s,;:]+|[\s,;:]+$/g, '')
+  s = trimChars(squeezeSpaceAndCommas(dropEmptyParens(s)), ',;:', ',;:')
 
   const qualifiers: string[] = []
   let pos = 0
