@@ -92,66 +92,28 @@ function splitPrep(rest: string): [string, string] {
 }
 
 /** The longest ingredient line read for an amount; a longer one is kept whole as the item. */
-export const QUANTITY_LINE_MAX = 1000
+export const QUANTITY_LINE_MAX = 500
 
-// Tidying the leftovers of a line. Each helper walks the text once: a regular expression such as
-// /[\s,;:]+$/ retries from every position of a long run and takes time growing with its square.
-const isSpace = (ch: string | undefined) => ch !== undefined && /\s/.test(ch)
-const skipSpaces = (s: string, i: number) => {
-  while (isSpace(s[i])) i++
-  return i
-}
-
-/** Empty parentheses left by a removed word ("( )", "(, )") are dropped. */
-function dropEmptyParens(s: string): string {
-  let out = ''
-  for (let i = 0; i < s.length; i++) {
-    if (s[i] === '(') {
-      let j = skipSpaces(s, i + 1)
-      if (s[j] === ',' || s[j] === ';') j = skipSpaces(s, j + 1)
-      if (s[j] === ')') {
-        i = j
-        continue
-      }
-    }
-    out += s[i]
-  }
-  return out
-}
-
-/** Runs of space become one space, and a run of two or more commas (with space between) one ", ". */
-function squeezeSpaceAndCommas(s: string): string {
-  let out = ''
-  for (let i = 0; i < s.length;) {
-    if (!isSpace(s[i]) && s[i] !== ',') {
-      out += s[i++]
-      continue
-    }
-    let commas = 0
-    let spaceBefore = false
-    let spaceAfter = false
-    for (; isSpace(s[i]) || s[i] === ','; i++) {
-      if (s[i] === ',') {
-        commas++
-        spaceAfter = false
-      } else if (commas) spaceAfter = true
-      else spaceBefore = true
-    }
-    out += commas >= 2 ? ', ' : commas === 1 ? `${spaceBefore ? ' ' : ''},${spaceAfter ? ' ' : ''}` : ' '
-  }
-  return out
-}
+// Tidying the leftovers of a line. The old patterns (/\s*,\s*(,\s*)+/, /[\s,;:]+$/) retried from every
+// position of a long run of spaces or commas, in time growing with the square of the run. Here
+// space is collapsed first, so each pattern below looks at most one space ahead of where it
+// starts and fails or succeeds there: every pass is linear, and the ends are trimmed by a loop.
+const collapse = (s: string) => s.replace(/\s+/g, ' ')
 
 /** `s` without the leading characters in `lead` and trailing ones in `trail` (white space always). */
 function trimChars(s: string, lead: string, trail: string): string {
+  const isSpace = (ch: string) => ch.trim() === ''
   let a = 0
   let b = s.length
-  while (a < b && (isSpace(s[a]) || lead.includes(s[a]!))) a++
-  while (b > a && (isSpace(s[b - 1]) || trail.includes(s[b - 1]!))) b--
+  while (a < b && (isSpace(s[a]!) || lead.includes(s[a]!))) a++
+  while (b > a && (isSpace(s[b - 1]!) || trail.includes(s[b - 1]!))) b--
   return s.slice(a, b)
 }
 
-const tidy = (s: string) => trimChars(squeezeSpaceAndCommas(dropEmptyParens(s)), ',;:.-', ',;:')
+/** Empty parentheses left by a removed word ("( )", "(, )") dropped, and a run of commas made one ", ". */
+const squeeze = (s: string) => collapse(collapse(s).replace(/\( ?[,;]? ?\)/g, '')).replace(/ ?,[ ,]*, ?/g, ', ')
+
+const tidy = (s: string) => trimChars(squeeze(s), ',;:.-', ',;:')
 
 /** Read one ingredient line. Never throws on text; doubtful readings are listed in `warnings`. */
 export function parseQuantity(text: string, options: QuantityParseOptions = {}): ParsedQuantity {
@@ -173,7 +135,7 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
     toTaste = true
     s = s.replace(taste[0], '')
   }
-  s = trimChars(squeezeSpaceAndCommas(dropEmptyParens(s)), ',;:', ',;:')
+  s = trimChars(squeeze(s), ',;:', ',;:')
 
   const qualifiers: string[] = []
   let pos = 0

@@ -6,9 +6,9 @@
 //
 // Everything here sees what a user pastes, so every step takes time in proportion to the input:
 // the input is capped before it is read (IMPORT_MAX_CHARS, TEXT_MAX_CHARS), HTML and its character
-// references are read by htmlparser2 (a streaming tokenizer, one pass; it decodes references with
-// the `entities` package), and no regular expression here can backtrack over the input.
-import { Parser } from 'htmlparser2'
+// references are read in one pass by htmlparser2's tokenizer (html-read.ts), and no regular
+// expression here can backtrack over the input.
+import { readHtml } from './html-read'
 import type { RecipeImportProblem } from '../types/recipe'
 
 /** The most text an import reads (512 KB): a recipe's JSON-LD is a few KB, a whole page rarely more. */
@@ -20,6 +20,28 @@ export const IMPORT_TOO_LARGE = 'The import is larger than 512 KB. Paste only th
 export const TEXT_MAX_CHARS = 16 * 1024
 /** The most JSON-LD blocks read from one page. */
 export const MAX_JSONLD_BLOCKS = 100
+/** The most ingredients and steps read (recipe-schemas.ts keeps at most 200 of each). */
+export const MAX_RECIPE_ITEMS = 200
+/** The most entries of any other list read (tags, yields, images, tips). */
+export const MAX_LIST_READ = 50
+/** The most problems listed for one import; the rest are counted. */
+export const MAX_PROBLEMS = 50
+/** How deep lists and nodes are followed. */
+export const MAX_DEPTH = 12
+/** The most characters of a value quoted in a problem. */
+export const QUOTE_MAX = 80
+
+/** A value as JSON, for a problem's text, cut to QUOTE_MAX characters. */
+export function quoteValue(value: unknown): string {
+  const json = JSON.stringify(value) ?? String(value)
+  return json.length > QUOTE_MAX ? `${json.slice(0, QUOTE_MAX)}…` : json
+}
+
+/** At most MAX_PROBLEMS problems, and a last one that counts the rest. */
+export function capProblems(problems: RecipeImportProblem[]): RecipeImportProblem[] {
+  if (problems.length <= MAX_PROBLEMS) return problems
+  return [...problems.slice(0, MAX_PROBLEMS), { field: '@graph', reason: `and ${problems.length - MAX_PROBLEMS} more problems like these` }]
+}
 
 export class RecipeImportError extends Error {
   constructor(message: string) {
@@ -68,26 +90,26 @@ export function extractJsonLdFromHtml(html: string): { blocks: unknown[]; proble
   const problems: RecipeImportProblem[] = []
   let n = 0
   let body: string[] | null = null
-  const parser = new Parser({
-    onopentag(name, attribs) {
-      if (name === 'script' && isJsonLdType(attribs.type)) body = []
+  const close = () => {
+    const text = body!.join('')
+    body = null
+    if (++n > MAX_JSONLD_BLOCKS) return
+    try {
+      blocks.push(JSON.parse(unwrapScriptText(text)))
+    } catch (e) {
+      problems.push({ field: `script[${n}]`, reason: `the JSON-LD block is not valid JSON (${(e as Error).message})` })
+    }
+  }
+  readHtml(html, {
+    open: (name, attribs) => {
+      if (name === 'script' && isJsonLdType(attribs.get('type'))) body = []
     },
-    ontext(text) {
-      body?.push(text)
-    },
-    onclosetag(name) {
-      if (name !== 'script' || !body) return
-      const text = body.join('')
-      body = null
-      if (++n > MAX_JSONLD_BLOCKS) return
-      try {
-        blocks.push(JSON.parse(unwrapScriptText(text)))
-      } catch (e) {
-        problems.push({ field: `script[${n}]`, reason: `the JSON-LD block is not valid JSON (${(e as Error).message})` })
-      }
+    text: (text) => void body?.push(text),
+    close: (name) => {
+      if (name === 'script' && body) close()
     },
   })
-  parser.end(html)
+  if (body) close()
   if (n > MAX_JSONLD_BLOCKS) problems.push({ field: `script[${MAX_JSONLD_BLOCKS + 1}]`, reason: `the page has ${n} JSON-LD blocks; read the first ${MAX_JSONLD_BLOCKS}` })
   return { blocks, problems }
 }
@@ -97,7 +119,7 @@ export function findRecipeNodes(data: unknown): JsonObject[] {
   const found: JsonObject[] = []
   const seen = new Set<unknown>()
   const walk = (v: unknown, depth: number) => {
-    if (depth > 12 || v === null || typeof v !== 'object' || seen.has(v)) return
+    if (depth > MAX_DEPTH || v === null || typeof v !== 'object' || seen.has(v)) return
     seen.add(v)
     if (Array.isArray(v)) return v.forEach((x) => walk(x, depth + 1))
     if (hasSchemaType(v, 'Recipe')) return void found.push(v as JsonObject)
@@ -153,12 +175,11 @@ export function cleanSchemaText(value: string, keepLines = false): string {
   const src = value.length > TEXT_MAX_CHARS ? value.slice(0, TEXT_MAX_CHARS) : value
   if (!src.includes('<') && !src.includes('&')) return collapseSpace(src, keepLines)
   const out: string[] = []
-  const parser = new Parser({
-    ontext: (text) => void out.push(text),
-    onopentag: (name) => void out.push(keepLines && name === 'br' ? '\n' : ' '),
-    onclosetag: (name) => void out.push(keepLines && LINE_TAGS.has(name) ? '\n' : ' '),
+  readHtml(src, {
+    text: (text) => void out.push(text),
+    open: (name) => void out.push(keepLines && name === 'br' ? '\n' : ' '),
+    close: (name) => void out.push(keepLines && LINE_TAGS.has(name) ? '\n' : ' '),
   })
-  parser.end(src)
   return collapseSpace(out.join(''), keepLines)
 }
 
