@@ -11,14 +11,18 @@ export interface HtmlReader {
   close?(name: string): void
   /** Text, with character references decoded (a script's text is raw: none are decoded there). */
   text?(text: string): void
+  /** The tags whose attributes `open` needs; others get an empty map (saves work on tag soup). */
+  attributesOf?: ReadonlySet<string>
 }
+
+const NONE: ReadonlyMap<string, string> = new Map()
 
 const VOID = new Set(['area', 'base', 'br', 'col', 'embed', 'hr', 'img', 'input', 'link', 'meta', 'source', 'track', 'wbr'])
 
 /** Reads `html` from start to end, calling `reader` for each start tag, end tag and piece of text. */
 export function readHtml(html: string, reader: HtmlReader): void {
   let tag = ''
-  let attribs = new Map<string, string>()
+  let attribs: Map<string, string> | null = null
   let name = ''
   let value = ''
   const ignore = () => {}
@@ -27,21 +31,22 @@ export function readHtml(html: string, reader: HtmlReader): void {
     ontextentity: (codepoint) => reader.text?.(String.fromCodePoint(codepoint)),
     onopentagname: (start, end) => {
       tag = html.slice(start, end).toLowerCase()
-      attribs = new Map()
+      attribs = reader.attributesOf?.has(tag) ? new Map() : null
     },
     onattribname: (start, end) => {
+      if (!attribs) return
       name = html.slice(start, end).toLowerCase()
       value = ''
     },
-    onattribdata: (start, end) => void (value += html.slice(start, end)),
-    onattribentity: (codepoint) => void (value += String.fromCodePoint(codepoint)),
-    onattribend: () => void (attribs.has(name) || attribs.set(name, value)),
+    onattribdata: (start, end) => void (attribs && (value += html.slice(start, end))),
+    onattribentity: (codepoint) => void (attribs && (value += String.fromCodePoint(codepoint))),
+    onattribend: () => void (attribs && !attribs.has(name) && attribs.set(name, value)),
     onopentagend: () => {
-      reader.open?.(tag, attribs)
+      reader.open?.(tag, attribs ?? NONE)
       if (VOID.has(tag)) reader.close?.(tag)
     },
     onselfclosingtag: () => {
-      reader.open?.(tag, attribs)
+      reader.open?.(tag, attribs ?? NONE)
       reader.close?.(tag)
     },
     onclosetag: (start, end) => reader.close?.(html.slice(start, end).toLowerCase()),

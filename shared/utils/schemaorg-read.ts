@@ -78,6 +78,7 @@ function unwrapScriptText(raw: string): string {
   return s.trim()
 }
 
+const SCRIPT_TAG: ReadonlySet<string> = new Set(['script'])
 const isJsonLdType = (type: string | undefined) => (type ?? '').split(';')[0]!.trim().toLowerCase() === 'application/ld+json'
 
 /**
@@ -101,6 +102,7 @@ export function extractJsonLdFromHtml(html: string): { blocks: unknown[]; proble
     }
   }
   readHtml(html, {
+    attributesOf: SCRIPT_TAG,
     open: (name, attribs) => {
       if (name === 'script' && isJsonLdType(attribs.get('type'))) body = []
     },
@@ -145,7 +147,8 @@ export function readRecipeInput(input: unknown): { recipes: JsonObject[]; proble
       return readRecipeInput(data)
     }
     if (!/<[a-z!]/i.test(text)) throw new RecipeImportError('This is neither JSON-LD nor HTML: paste a schema.org Recipe as JSON-LD, or an HTML page that embeds one')
-    const { blocks, problems } = extractJsonLdFromHtml(text)
+    // A page that never names the type has no block to find: no need to read its tags.
+    const { blocks, problems } = text.toLowerCase().includes('application/ld+json') ? extractJsonLdFromHtml(text) : { blocks: [], problems: [] }
     if (!blocks.length && !problems.length) throw new RecipeImportError('The HTML page has no <script type="application/ld+json"> block, so it holds no schema.org Recipe to import')
     const recipes = blocks.flatMap(findRecipeNodes)
     if (!recipes.length) throw new RecipeImportError(`No schema.org Recipe was found in the page's JSON-LD${problems.length ? ` (${problems.map((p) => p.reason).join('; ')})` : ''}`)
