@@ -18,8 +18,8 @@ const unclosedScripts = (bytes: number) => '<script type=application/ld+json>'.r
 
 /** A recipe of 200 ingredient lines and 200 steps, each of the longest and slowest kind the readers admit. */
 function worstRecipe(bytes: number): string {
-  const line = `1 1/2 ${'1'.repeat(200)} ${'( ,'.repeat(50)}${' ,;:'.repeat(40)}` // digits, open parentheses, commas: under 500
-  const step = `<p>${'Stir &amp; <b>fold</b><br>'.repeat(40)}`
+  const line = `1 1/2 ${'1'.repeat(200)} ${'( ,'.repeat(50)}${' ,;:'.repeat(30)} x` // digits, open parentheses, commas: under 500
+  const step = `<p>${'Stir &amp; <b>fold</b>, '.repeat(40)}`
   const node = { '@context': 'https://schema.org', '@type': 'Recipe', name: '<a'.repeat(4000), recipeYield: '4', keywords: ','.repeat(10_000) }
   const text = (n: number) => JSON.stringify({ ...node, recipeIngredient: Array(200).fill(line), recipeInstructions: Array(200).fill(step), description: '&amp;<i>'.repeat(n) })
   const room = bytes - text(0).length
