@@ -93,10 +93,11 @@ describe('caps', () => {
   })
 })
 
-describe('time in proportion to the input (ratio of 2n to n under 3; quadratic would be about 4)', () => {
+describe('time in proportion to the input (ratio of 2n to n under 3; quadratic would be about 4)', { timeout: 60_000 }, () => {
   const unclosed = (kb: number) => '<script type=application/ld+json>'.repeat(Math.floor((kb * 1024) / 33))
-  it('repeated unclosed <script type=application/ld+json>: 125 KB and 250 KB', () => {
-    const t = doublingRatio(unclosed, (page) => expect(() => importSchemaOrgRecipe(page)).toThrow(/No schema.org Recipe/), 125, { reps: 4, rounds: 7 })
+  // Both sizes above V8's 128 KB limit for a string in the regular heap, so both are allocated alike.
+  it('repeated unclosed <script type=application/ld+json>: 200 KB and 400 KB', () => {
+    const t = doublingRatio(unclosed, (page) => expect(() => importSchemaOrgRecipe(page)).toThrow(/No schema.org Recipe/), 200, { reps: 2, rounds: 9 })
     expect(t.ratio, JSON.stringify(t)).toBeLessThan(3)
   })
   it('deeply nested unclosed tags, the case an element stack is quadratic in: 120 KB and 240 KB', () => {
@@ -104,22 +105,22 @@ describe('time in proportion to the input (ratio of 2n to n under 3; quadratic w
     expect(t.ratio, JSON.stringify(t)).toBeLessThan(3)
   })
   it('a text value of unclosed "<a" and one of entities, within the 16 KB cap: 6 KB and 12 KB', () => {
-    const tags = doublingRatio((kb) => '<a'.repeat(kb * 512), (v) => cleanSchemaText(v), 6, { reps: 100, rounds: 7 })
+    const tags = doublingRatio((kb) => '<a'.repeat(kb * 512), (v) => cleanSchemaText(v), 6, { reps: 50, rounds: 9 })
     expect(tags.ratio, JSON.stringify(tags)).toBeLessThan(3)
-    const refs = doublingRatio((kb) => '&amp;<br>&#8211;'.repeat(kb * 64), (v) => cleanSchemaText(v, true), 6, { reps: 100, rounds: 7 })
+    const refs = doublingRatio((kb) => '&amp;<br>&#8211;'.repeat(kb * 64), (v) => cleanSchemaText(v, true), 6, { reps: 50, rounds: 9 })
     expect(refs.ratio, JSON.stringify(refs)).toBeLessThan(3)
   })
   it('a whole recipe of 200 ingredient lines and 200 steps, each as long as read: 100 and 200 of each', () => {
     const make = (n: number) => recipe({
-      recipeIngredient: Array.from({ length: n }, () => `1 1/2 ${'1'.repeat(240)} ${',  '.repeat(80)}`),
+      recipeIngredient: Array.from({ length: n }, (_, i) => `1 1/2 item${i} ${'1'.repeat(240)} ${',  '.repeat(80)}`),
       recipeInstructions: Array.from({ length: n }, () => `<p>${'Stir, '.repeat(300)}`),
     })
-    const t = doublingRatio(make, (text) => importSchemaOrgRecipe(text), 100, { rounds: 7 })
+    const t = doublingRatio(make, (text) => importSchemaOrgRecipe(text), 100, { rounds: 11 })
     expect(t.ratio, JSON.stringify(t)).toBeLessThan(3)
   })
 })
 
-describe('ingredient lines in time in proportion to their length (up to the 500-character cap)', () => {
+describe('ingredient lines in time in proportion to their length (up to the 500-character cap)', { timeout: 60_000 }, () => {
   const lines: Record<string, (n: number) => string> = {
     'digits': (n) => '1'.repeat(n),
     'spaces after an amount': (n) => `2 ${' '.repeat(n)}x`,
