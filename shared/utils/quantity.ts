@@ -91,12 +91,39 @@ function splitPrep(rest: string): [string, string] {
   return [rest, '']
 }
 
-const tidy = (s: string) => s.replace(/\(\s*[,;]?\s*\)/g, '').replace(/\s*,\s*(,\s*)+/g, ', ').replace(/\s+/g, ' ').replace(/^[\s,;:.-]+|[\s,;:]+$/g, '').trim()
+/** The longest ingredient line read for an amount; a longer one is kept whole as the item. */
+export const QUANTITY_LINE_MAX = 500
+
+// Tidying the leftovers of a line. The old patterns (/\s*,\s*(,\s*)+/, /[\s,;:]+$/) retried from every
+// position of a long run of spaces or commas, in time growing with the square of the run. Here
+// space is collapsed first, so each pattern below looks at most one space ahead of where it
+// starts and fails or succeeds there: every pass is linear, and the ends are trimmed by a loop.
+const collapse = (s: string) => s.replace(/\s+/g, ' ')
+
+/** `s` without the leading characters in `lead` and trailing ones in `trail` (white space always). */
+function trimChars(s: string, lead: string, trail: string): string {
+  const isSpace = (ch: string) => ch.trim() === ''
+  let a = 0
+  let b = s.length
+  while (a < b && (isSpace(s[a]!) || lead.includes(s[a]!))) a++
+  while (b > a && (isSpace(s[b - 1]!) || trail.includes(s[b - 1]!))) b--
+  return s.slice(a, b)
+}
+
+/** Empty parentheses left by a removed word ("( )", "(, )") dropped, and a run of commas made one ", ". */
+const squeeze = (s: string) => collapse(collapse(s).replace(/\( ?[,;]? ?\)/g, '')).replace(/ ?,[ ,]*, ?/g, ', ')
+
+const tidy = (s: string) => trimChars(squeeze(s), ',;:.-', ',;:')
 
 /** Read one ingredient line. Never throws on text; doubtful readings are listed in `warnings`. */
 export function parseQuantity(text: string, options: QuantityParseOptions = {}): ParsedQuantity {
   const warnings: string[] = []
-  let s = normaliseAmountText(String(text ?? ''))
+  const line = String(text ?? '')
+  if (line.length > QUANTITY_LINE_MAX) {
+    warnings.push(`An ingredient line of ${line.length} characters is longer than ${QUANTITY_LINE_MAX}; kept whole as the item, not read for an amount`)
+    return { text: line, min: null, max: null, unit: null, item: line.trim(), prep: null, optional: false, toTaste: false, parts: [], warnings }
+  }
+  let s = normaliseAmountText(line)
   let optional = false
   let toTaste = false
   if (/\boptional\b/i.test(s)) {
@@ -108,7 +135,7 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
     toTaste = true
     s = s.replace(taste[0], '')
   }
-  s = s.replace(/\(\s*[,;]?\s*\)/g, '').replace(/\s*,\s*(,\s*)+/g, ', ').replace(/\s+/g, ' ').replace(/^[\s,;:]+|[\s,;:]+$/g, '')
+  s = trimChars(squeeze(s), ',;:', ',;:')
 
   const qualifiers: string[] = []
   let pos = 0

@@ -10,7 +10,9 @@ import type { RecipeDraft, RecipeImportProblem, RecipeIngredientDraft } from '..
 import { isEuAllergenId, isUsAllergenId, suggestAllergens, type IngredientAllergens } from './allergens'
 import { parseIsoDuration } from './duration'
 import { parseQuantity, type QuantityParseOptions } from './quantity'
-import { isJsonObject, readRecipeInput, schemaText, cleanSchemaText, type JsonObject } from './schemaorg-read'
+import {
+  MAX_LIST_READ, MAX_RECIPE_ITEMS, capProblems, cleanSchemaText, isJsonObject, quoteValue, readRecipeInput, schemaText, type JsonObject,
+} from './schemaorg-read'
 import { hoblineProperty, readSchemaOrgInstructions } from './schemaorg-steps'
 import { INGREDIENT_KEY, makeIngredientKey } from './step-text'
 
@@ -24,7 +26,7 @@ export interface SchemaOrgImport {
 const DEFAULT_SERVINGS = 4
 
 function readYield(value: unknown, problems: RecipeImportProblem[]): { servings: number; yieldText: string | null } {
-  const entries = (Array.isArray(value) ? value : [value]).map((v) => (isJsonObject(v) && v.value !== undefined ? v.value : v))
+  const entries = (Array.isArray(value) ? value.slice(0, MAX_LIST_READ) : [value]).map((v) => (isJsonObject(v) && v.value !== undefined ? v.value : v))
   let servings: number | null = null
   let yieldText: string | null = null
   for (const v of entries) {
@@ -38,7 +40,7 @@ function readYield(value: unknown, problems: RecipeImportProblem[]): { servings:
     if (!plain && yieldText === null) yieldText = text
   }
   if (servings === null) {
-    problems.push({ field: 'recipeYield', reason: value === undefined ? `missing; assumed ${DEFAULT_SERVINGS} servings, check it` : `"${JSON.stringify(value)}" gives no number of servings; assumed ${DEFAULT_SERVINGS}, check it` })
+    problems.push({ field: 'recipeYield', reason: value === undefined ? `missing; assumed ${DEFAULT_SERVINGS} servings, check it` : `${quoteValue(value)} gives no number of servings; assumed ${DEFAULT_SERVINGS}, check it` })
     servings = DEFAULT_SERVINGS
   }
   return { servings, yieldText }
@@ -47,6 +49,10 @@ function readYield(value: unknown, problems: RecipeImportProblem[]): { servings:
 function readTime(node: JsonObject, key: string, problems: RecipeImportProblem[]): number | null {
   const v = node[key]
   if (v === undefined || v === null || v === '') return null
+  if (String(v).length > 64) {
+    problems.push({ field: key, reason: `${quoteValue(v)} is too long for an ISO 8601 duration such as PT1H30M` })
+    return null
+  }
   try {
     return parseIsoDuration(String(v))
   } catch (e) {
@@ -59,8 +65,9 @@ function readTags(node: JsonObject): string[] {
   const out: string[] = []
   for (const key of ['keywords', 'recipeCategory', 'recipeCuisine']) {
     const v = node[key]
-    const list = Array.isArray(v) ? v : typeof v === 'string' ? (key === 'keywords' ? v.split(',') : [v]) : []
-    for (const t of list) {
+    const list = Array.isArray(v) ? v : typeof v === 'string' ? (key === 'keywords' ? v.split(',', MAX_LIST_READ) : [v]) : []
+    for (const t of list.slice(0, MAX_LIST_READ)) {
+      if (out.length >= 30) break // recipe-schemas.ts: at most 30 tags
       const tag = typeof t === 'string' ? cleanSchemaText(t) : ''
       if (tag && !out.some((x) => x.toLowerCase() === tag.toLowerCase())) out.push(tag)
     }
@@ -83,7 +90,11 @@ function readIngredients(node: JsonObject, problems: RecipeImportProblem[], opti
   const extras = Array.isArray(extra) ? extra : []
   const out: RecipeIngredientDraft[] = []
   let group: string | null = null
-  lines.forEach((line, i) => {
+  // Group headings are lines too: read up to twice as many lines as ingredients are kept.
+  let read = 0
+  lines.slice(0, 2 * MAX_RECIPE_ITEMS).forEach((line, i) => {
+    if (out.length >= MAX_RECIPE_ITEMS) return
+    read = i + 1
     const at = `${field}[${i}]`
     if (typeof line !== 'string') return void problems.push({ field: at, reason: 'not a line of text; skipped' })
     const text = cleanSchemaText(line)
@@ -102,6 +113,7 @@ function readIngredients(node: JsonObject, problems: RecipeImportProblem[], opti
       toTaste: p.toTaste, group: x && (typeof x.group === 'string' || x.group === null) ? (x.group as string | null) : group, allergens,
     })
   })
+  if (lines.length > read) problems.push({ field, reason: `lists ${lines.length} lines; Hobline keeps at most ${MAX_RECIPE_ITEMS} ingredients, so the lines after the first ${read} were not read` })
   if (extra !== undefined && extras.length !== out.length) {
     problems.push({ field: 'hobline:ingredients', reason: `lists ${extras.length} ingredients but recipeIngredient has ${out.length}; matched them in order as far as they go` })
   }
@@ -109,7 +121,7 @@ function readIngredients(node: JsonObject, problems: RecipeImportProblem[], opti
 }
 
 function readImages(v: unknown): string[] {
-  return (Array.isArray(v) ? v : [v]).flatMap((x) => (typeof x === 'string' ? [x] : isJsonObject(x) && typeof x.url === 'string' ? [x.url] : []))
+  return (Array.isArray(v) ? v.slice(0, MAX_LIST_READ) : [v]).flatMap((x) => (typeof x === 'string' ? [x] : isJsonObject(x) && typeof x.url === 'string' ? [x.url] : []))
 }
 
 /**
@@ -143,5 +155,5 @@ export function importSchemaOrgRecipe(input: unknown, options: QuantityParseOpti
     ingredients,
     steps: instructions.steps,
   }
-  return { recipe, problems, images: readImages(node.image) }
+  return { recipe, problems: capProblems(problems), images: readImages(node.image) }
 }

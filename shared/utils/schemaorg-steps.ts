@@ -11,7 +11,7 @@
 import type { RecipeImportProblem, RecipeStepDraft, StepLinkDraft } from '../types/recipe'
 import { isCautionId, suggestStepCautions } from './cautions'
 import { parseIsoDuration } from './duration'
-import { cleanSchemaText, hasSchemaType, isJsonObject, schemaText, type JsonObject } from './schemaorg-read'
+import { MAX_DEPTH, MAX_LIST_READ, MAX_RECIPE_ITEMS, cleanSchemaText, hasSchemaType, isJsonObject, schemaText, type JsonObject } from './schemaorg-read'
 import { readsAsAlongside, startTogetherLink } from './step-links'
 import { importedStepName } from './step-name'
 
@@ -28,6 +28,8 @@ interface StepContext {
   steps: RecipeStepDraft[]
   problems: RecipeImportProblem[]
   tips: string[]
+  /** Set once the steps reach MAX_RECIPE_ITEMS: the rest is not read. */
+  full?: boolean
 }
 
 const asList = (v: unknown): unknown[] => (v === undefined || v === null ? [] : Array.isArray(v) ? v : [v])
@@ -122,11 +124,11 @@ function addStep(ctx: StepContext, node: JsonObject | null, text: string, group:
 }
 
 function stepFromNode(node: JsonObject, group: string | null, field: string, ctx: StepContext): void {
-  const parts = asList(node.itemListElement).map(unwrap)
+  const parts = asList(node.itemListElement).slice(0, MAX_LIST_READ).map(unwrap)
   const directions = parts.filter((p): p is JsonObject => hasSchemaType(p, 'HowToDirection'))
   for (const tip of parts.filter((p) => hasSchemaType(p, 'HowToTip'))) {
     const t = schemaText((tip as JsonObject).text)
-    if (t) ctx.tips.push(t)
+    if (t && ctx.tips.length < MAX_LIST_READ) ctx.tips.push(t)
   }
   const text = schemaText(node.text) ?? (directions.map((d) => schemaText(d.text)).filter(Boolean).join(' ') || schemaText(node.name))
   if (!text) return void ctx.problems.push({ field, reason: 'the step has no text; skipped' })
@@ -134,25 +136,32 @@ function stepFromNode(node: JsonObject, group: string | null, field: string, ctx
   addStep(ctx, node, text, group, field, times.length ? times.reduce((a, b) => a + b, 0) : null)
 }
 
-function walk(v: unknown, group: string | null, field: string, ctx: StepContext): void {
+function walk(v: unknown, group: string | null, field: string, ctx: StepContext, depth = 0): void {
+  if (ctx.full) return
+  if (ctx.steps.length >= MAX_RECIPE_ITEMS) {
+    ctx.full = true
+    return void ctx.problems.push({ field, reason: `Hobline keeps at most ${MAX_RECIPE_ITEMS} steps; this and the instructions after it were not read` })
+  }
+  if (depth > MAX_DEPTH) return void ctx.problems.push({ field, reason: `nested more than ${MAX_DEPTH} levels deep; skipped` })
   v = unwrap(v)
   if (typeof v === 'string') {
+    // "Step 2." and "3)" numbering is dropped; the pattern is anchored, so it reads each line once.
     const lines = cleanSchemaText(v, true).split('\n').map((l) => l.replace(/^(?:step\s*)?\d+\s*[.):]\s+/i, '').trim()).filter(Boolean)
-    lines.forEach((line) => addStep(ctx, null, line, group, field, null))
+    lines.slice(0, MAX_RECIPE_ITEMS - ctx.steps.length).forEach((line) => addStep(ctx, null, line, group, field, null))
     return
   }
-  if (Array.isArray(v)) return v.forEach((x, i) => walk(x, group, `${field}[${i}]`, ctx))
+  if (Array.isArray(v)) return v.forEach((x, i) => walk(x, group, `${field}[${i}]`, ctx, depth + 1))
   if (!isJsonObject(v)) return void ctx.problems.push({ field, reason: 'not text or a HowToStep; skipped' })
   if (hasSchemaType(v, 'HowToSection')) {
     const name = schemaText(v.name)
-    return walk(v.itemListElement ?? [], name ?? group, `${field}.itemListElement`, ctx)
+    return walk(v.itemListElement ?? [], name ?? group, `${field}.itemListElement`, ctx, depth + 1)
   }
   if (hasSchemaType(v, 'HowToTip')) {
     const t = schemaText(v.text)
-    if (t) ctx.tips.push(t)
+    if (t && ctx.tips.length < MAX_LIST_READ) ctx.tips.push(t)
     return
   }
-  if (hasSchemaType(v, 'ItemList')) return walk(v.itemListElement ?? [], group, `${field}.itemListElement`, ctx)
+  if (hasSchemaType(v, 'ItemList')) return walk(v.itemListElement ?? [], group, `${field}.itemListElement`, ctx, depth + 1)
   if (hasSchemaType(v, 'HowToStep') || hasSchemaType(v, 'HowToDirection') || typeof v.text === 'string') return stepFromNode(v, group, field, ctx)
   ctx.problems.push({ field, reason: `a ${String(v['@type'] ?? 'node without @type')} is not a step; skipped` })
 }

@@ -1,14 +1,19 @@
 // Import a schema.org Recipe: JSON-LD, an HTML page that embeds it (also inside @graph), or an
 // uploaded file of either (multipart field "file"). `?preview=1` only reads it and says what could
-// not be understood; without it the recipe is saved (201).
+// not be understood; without it the recipe is saved (201). Over 512 KB is refused before it is
+// read, with a 413 that says to paste only the recipe's JSON-LD (DEVELOPERS.md, "Recipe import").
 import { z } from 'zod'
+import { DomainError } from '../../../../../shared/utils/domain-error'
+import { IMPORT_MAX_CHARS, IMPORT_TOO_LARGE } from '../../../../../shared/utils/schemaorg-read'
 
 const query = z.object({ preview: z.enum(['0', '1', 'true', 'false'], { error: 'preview must be 1 or 0.' }).optional() })
 
 export default defineEventHandler(async (event) => {
   const { studioId } = await requireStudio(event, 'recipe.edit')
   const { preview } = validateQuery(event, query)
-  const text = await readUploadText(event, 'file', 2 * 1024 * 1024)
+  const text = await readUploadText(event, 'file', IMPORT_MAX_CHARS).catch((error) => {
+    throw error instanceof DomainError && error.code === 'too-large' ? new DomainError('too-large', IMPORT_TOO_LARGE) : error
+  })
   const result = await readRecipeImport(studioId, text)
   if (preview === '1' || preview === 'true') return result
   setResponseStatus(event, 201)
