@@ -6,6 +6,7 @@
 import { url } from '@nuxt/test-utils/e2e'
 import { io } from 'socket.io-client'
 import { beforeAll, describe, expect, it } from 'vitest'
+import { DEMO_PASSWORD } from '../../server/db/demo'
 import { useBuiltApp } from '../support/app'
 import { appOrigin, Client, demo, signedIn } from '../support/client'
 import { insertShoot } from '../support/shoot-row'
@@ -68,10 +69,13 @@ describe('same-origin checks', async () => {
     })
 
     it('refuses what a browser marks as from elsewhere even without a cookie (signing a visitor in as someone else)', async () => {
-      const signIn = await new Client().call('POST', '/api/auth/login', `email=${encodeURIComponent(demo.producer)}&password=x`, crossSiteForm)
+      const visitor = new Client()
+      const signIn = await visitor.call('POST', '/api/auth/login', JSON.stringify({ email: demo.producer, password: DEMO_PASSWORD }), {
+        ...crossSiteForm, 'content-type': 'text/plain',
+      })
       expect(signIn.status).toBe(403)
       expect(signIn.body.data.code).toBe('cross-site')
-      expect(signIn.headers.get('set-cookie')).toBeNull()
+      expect((await visitor.get('/api/me')).status).toBe(401)
       // Sec-Fetch-Site alone (a browser that sent no Origin) and an opaque origin are refused alike.
       expect((await new Client().call('POST', '/api/auth/logout', '', { 'origin': '', 'sec-fetch-site': 'same-site' })).status).toBe(403)
       expect((await new Client().call('POST', '/api/auth/logout', '', { origin: 'null' })).status).toBe(403)
