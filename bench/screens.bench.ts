@@ -20,9 +20,9 @@ async function setup(): Promise<Setup> {
   const app = await startBuiltApp()
   const cookie = await signIn(app.url, 'host@brackenford.test', DEMO_PASSWORD)
   const producer = await signIn(app.url, 'producer@brackenford.test', DEMO_PASSWORD)
-  const res = await fetch(`${app.url}/api/episodes/1/shoots`, { method: 'POST', headers: { cookie: producer, 'content-type': 'application/json' }, body: JSON.stringify({ mode: 'rehearsal' }) })
+  const res = await fetch(`${app.url}/api/episodes/1/shoots`, { method: 'POST', headers: { cookie: producer, origin: app.url, 'content-type': 'application/json' }, body: JSON.stringify({ mode: 'rehearsal' }) })
   const shootId = ((await res.json()) as { shoot: { id: number } }).shoot.id
-  await fetch(`${app.url}/api/shoots/${shootId}/commands`, { method: 'POST', headers: { cookie: producer, 'content-type': 'application/json' }, body: JSON.stringify({ type: 'shoot.start' }) })
+  await fetch(`${app.url}/api/shoots/${shootId}/commands`, { method: 'POST', headers: { cookie: producer, origin: app.url, 'content-type': 'application/json' }, body: JSON.stringify({ type: 'shoot.start' }) })
   const browser = await chromium.launch({ executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS })
   return { ...app, cookie, shootId, browser, stop: async () => { await browser.close(); await app.stop() } }
 }

@@ -35,7 +35,7 @@ async function setup(): Promise<Setup> {
   const cookie = await signIn(app.url, 'producer@brackenford.test', DEMO_PASSWORD)
   const shootIds: number[] = []
   for (let i = 0; i < SHOOTS; i++) {
-    const res = await fetch(`${app.url}/api/episodes/1/shoots`, { method: 'POST', headers: { cookie, 'content-type': 'application/json' }, body: JSON.stringify({ mode: 'rehearsal' }) })
+    const res = await fetch(`${app.url}/api/episodes/1/shoots`, { method: 'POST', headers: { cookie, origin: app.url, 'content-type': 'application/json' }, body: JSON.stringify({ mode: 'rehearsal' }) })
     shootIds.push(((await res.json()) as { shoot: { id: number } }).shoot.id)
   }
   log(`shoots ${shootIds.join(',')}`)

@@ -13,13 +13,34 @@ export default defineNitroPlugin((nitroApp) => {
   const engine = new Engine({ pingInterval: 10_000, pingTimeout: 8_000, maxHttpBufferSize: 64 * 1024 })
   io.bind(engine)
 
+  // A handshake from another site's page is refused (the rule of the HTTP middleware,
+  // server/utils/same-origin.ts): the client's connect_error carries the refusal as `data`.
+  io.use((socket, next) => {
+    const siteUrl = String(useRuntimeConfig().public.siteUrl || '')
+    const reason = crossSiteReason(requestOrigin(socket.request.headers), siteUrl, 'handshake')
+    if (!reason) return next()
+    const refused = crossSiteError(reason, 'connection')
+    next(Object.assign(new Error(refused.message), { data: refused.body() }))
+  })
+
   // The handshake reads the session once; every event is checked again through the guard.
   io.use(async (socket, next) => {
     socket.data.session = await sessionFromCookieHeader(socket.request.headers.cookie)
     next()
   })
 
+  const limit = socketCommandLimit()
+
   io.on('connection', (socket) => {
+    // Every message spends from the socket's bucket; over the limit an acknowledged event is
+    // answered with the 'too-many' refusal and nothing runs, an unacknowledged one is dropped.
+    const bucket = createCommandBucket(limit)
+    socket.use((packet, next) => {
+      const refused = bucket.take(Date.now())
+      if (!refused) return next()
+      const ack = packet.at(-1)
+      if (typeof ack === 'function') ack(refused)
+    })
     const conn: ShootConnection = {
       id: socket.id,
       session: socket.data.session,

@@ -9,6 +9,7 @@ const STATUS: Partial<Record<DomainErrorCode, number>> = {
   'invalid': 400,
   'signed-out': 401,
   'forbidden': 403,
+  'cross-site': 403,
   'not-found': 404,
   'conflict': 409,
   'gone': 410,

@@ -1,8 +1,10 @@
 // The session behind a socket.io connection: the same sealed nuxt-auth-utils cookie the HTTP routes
-// read, unsealed from the handshake's Cookie header with h3's own session unsealer.
+// read, unsealed from the handshake's Cookie header with h3's own session unsealer; and the limit on
+// how fast one socket may send.
 import { parse as parseCookies } from 'cookie-es'
 import { unsealSession } from 'h3'
 import type { UserSession } from '#auth-utils'
+import type { DomainErrorBody } from '../../shared/utils/domain-error'
 
 export async function sessionFromCookieHeader(header: string | undefined): Promise<UserSession> {
   const config = useRuntimeConfig()
@@ -16,5 +18,50 @@ export async function sessionFromCookieHeader(header: string | undefined): Promi
   } catch {
     // A cookie that is forged, from another secret or expired counts as signed out.
     return { id: '' }
+  }
+}
+
+/**
+ * How many messages one socket may send: a token bucket of `burst` refilled at `perSecond`
+ * (HOBLINE_SOCKET_COMMANDS_PER_SECOND and HOBLINE_SOCKET_COMMAND_BURST; the benchmarks raise them
+ * to measure the server rather than the limit). A screen's heaviest moment is a clock round of 8
+ * pings with its join and snapshot; a producer tapping a control sends a few a second.
+ */
+export function socketCommandLimit(env: Record<string, string | undefined> = process.env) {
+  const read = (value: string | undefined, fallback: number) => {
+    const n = Number(value)
+    return Number.isFinite(n) && n > 0 ? n : fallback
+  }
+  return { perSecond: read(env.HOBLINE_SOCKET_COMMANDS_PER_SECOND, 20), burst: read(env.HOBLINE_SOCKET_COMMAND_BURST, 40) }
+}
+
+/** A refusal from the limit: the one error shape, with when to try again (as HTTP's Retry-After). */
+export interface TooManyRefusal {
+  ok: false
+  error: DomainErrorBody & { code: 'too-many'; retryAfterSeconds: number }
+}
+
+/** One socket's bucket: `take(now)` is null while a message may go on, else the refusal to answer with. */
+export function createCommandBucket(limit: { perSecond: number; burst: number }) {
+  let tokens = limit.burst
+  let last = -Infinity
+  return {
+    take(nowMs: number): TooManyRefusal | null {
+      tokens = Math.min(limit.burst, tokens + (Number.isFinite(last) ? ((nowMs - last) / 1000) * limit.perSecond : limit.burst))
+      last = nowMs
+      if (tokens >= 1) {
+        tokens -= 1
+        return null
+      }
+      const retryAfterSeconds = Math.ceil(((1 - tokens) / limit.perSecond) * 10) / 10
+      return {
+        ok: false,
+        error: {
+          code: 'too-many',
+          message: `Too many messages from this screen: at most ${limit.perSecond} a second (${limit.burst} at once). This one was not applied; send it again in ${retryAfterSeconds} s.`,
+          retryAfterSeconds,
+        },
+      }
+    },
   }
 }

@@ -9,6 +9,7 @@ export type DomainErrorCode =
   | 'signed-out' // nobody is signed in, or the device's join code was revoked
   | 'not-found' // no such thing (or not yours to see: ids cannot be probed)
   | 'forbidden' // the role may not do this
+  | 'cross-site' // a change sent from another site's page (server/utils/same-origin.ts)
   | 'conflict' // the thing changed meanwhile, or is in a state that refuses this
   | 'gone' // a link that has expired or was used
   | 'too-large' // an upload or body over its limit

@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { CHROMIUM_ARGS, CHROMIUM_PATH, chromiumAvailable } from '../support/chromium'
-import { DEMO_PASSWORD, screenshot, signInOnPage, startTimerOnPage } from '../support/page'
+import { DEMO_PASSWORD, sameOrigin, screenshot, signInOnPage, startTimerOnPage } from '../support/page'
 
 const LAPTOP = { width: 1280, height: 800 }
 const TABLET = { width: 1024, height: 768 }
@@ -67,7 +67,7 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     // The producer signs in on the laptop and starts a rehearsal of the demo episode.
     const desk = await screen(LAPTOP)
     await signInOnPage(desk.page, 'producer@brackenford.test')
-    const created = await desk.page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' } })
+    const created = await desk.page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' }, headers: sameOrigin() })
     const shootId: number = (await created.json()).shoot.id
     await desk.page.goto(url(`/shoots/${shootId}/desk`), { waitUntil: 'networkidle' })
     await ready(desk.page)
@@ -237,7 +237,7 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     // host's tablet rings after all, and says why.
     expect(desk.errors).toEqual([])
     await desk.page.close()
-    const started = await host.page.request.post(url(`/api/shoots/${shootId}/commands`), { data: { type: 'timer.start', label: 'Lentils check', durationMs: 2000 } })
+    const started = await host.page.request.post(url(`/api/shoots/${shootId}/commands`), { data: { type: 'timer.start', label: 'Lentils check', durationMs: 2000 }, headers: sameOrigin() })
     expect(started.status()).toBe(200)
     await expect.poll(() => howlerPlaying(host.page), { timeout: 8000 }).not.toEqual([])
     await expect.poll(() => alarmMode(host.page)).toBe('sound+flash')
@@ -270,8 +270,8 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
       const page = await browser.newPage({ viewport: LAPTOP })
       const errors: string[] = []
       page.on('console', (m) => m.type() === 'error' && errors.push(m.text()))
-      expect((await page.request.post(url('/api/auth/login'), { data: { email: 'producer@brackenford.test', password: DEMO_PASSWORD } })).status()).toBe(200)
-      const shootId: number = (await (await page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'take' } })).json()).shoot.id
+      expect((await page.request.post(url('/api/auth/login'), { data: { email: 'producer@brackenford.test', password: DEMO_PASSWORD }, headers: sameOrigin() })).status()).toBe(200)
+      const shootId: number = (await (await page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'take' }, headers: sameOrigin() })).json()).shoot.id
       await page.goto(url(`/shoots/${shootId}/desk`), { waitUntil: 'networkidle' })
       await page.getByTestId('sound-blocked').waitFor({ timeout: 5000 })
       await expect(page.evaluate(() => (window as unknown as { Howler: { ctx: AudioContext } }).Howler.ctx.state)).resolves.toBe('suspended')

@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
-import { consoleErrorsOf, screenshot, signInOnPage, startTimerOnPage } from '../support/page'
+import { consoleErrorsOf, sameOrigin, screenshot, signInOnPage, startTimerOnPage } from '../support/page'
 
 const SKEW_MS = 10 * 60_000
 const OFFLINE_MESSAGE = 'Offline: this was not sent. Wait for the connection to come back.'
@@ -66,7 +66,7 @@ describe.skipIf(!chromiumAvailable())('the live shoot in two browsers', async ()
   it('drives a rehearsal from one screen, follows it on another, and survives a dropped network', async () => {
     const producer = await signedInScreen('producer@brackenford.test', '/studio', { width: 1280, height: 900 })
     const episodes = await (await producer.page.request.get(url('/api/studios/1/episodes'))).json()
-    const created = await producer.page.request.post(url(`/api/episodes/${episodes.episodes[0].id}/shoots`), { data: { mode: 'rehearsal' } })
+    const created = await producer.page.request.post(url(`/api/episodes/${episodes.episodes[0].id}/shoots`), { data: { mode: 'rehearsal' }, headers: sameOrigin() })
     expect(created.status()).toBe(201)
     const shootId: number = (await created.json()).shoot.id
     const path = `/shoots/${shootId}`

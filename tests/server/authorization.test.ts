@@ -1,11 +1,16 @@
-// The authorisation matrix: every route × every kind of caller, asserting the exact status.
-// A route file under server/api without a row here fails the completeness check at the bottom.
+// The authorisation matrix: every route × every kind of caller, asserting the exact status, and
+// every socket command × every kind of caller, asserting the refusal or that the caller got past
+// the guard and the role table. A route file under server/api without a row, or a shoot command
+// without a sample, fails the completeness checks.
 import { readdirSync, statSync } from 'node:fs'
 import { join, relative } from 'node:path'
-import { beforeAll, describe, expect, it } from 'vitest'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { SHOOT_COMMAND_TYPES, type ShootCommandType, type ShootRole } from '../../shared/types/shoot'
+import { SHOOT_COMMAND_ROLES, shootCommandForbiddenMessage } from '../../shared/utils/shoot-commands'
 import { rootDir, useBuiltApp } from '../support/app'
 import { Client, demo, signedIn, uniqueEmail } from '../support/client'
 import { insertShoot } from '../support/shoot-row'
+import { connect, emitAck, type TestSocket } from '../support/sockets'
 
 type CallerName = 'anon' | 'producer' | 'host' | 'camera' | 'viewer' | 'outsider' | 'hostDevice' | 'cameraDevice'
 const CALLERS: CallerName[] = ['anon', 'producer', 'host', 'camera', 'viewer', 'outsider', 'hostDevice', 'cameraDevice']
@@ -18,7 +23,7 @@ interface Row {
   body?: (ids: Ids) => unknown
   expect: Record<CallerName, number>
 }
-interface Ids { studio: number; shoot: number; recipe: number; episode: number }
+interface Ids { studio: number; shoot: number; recipe: number; episode: number; socketShoot: number }
 
 const all = (status: number) => Object.fromEntries(CALLERS.map((c) => [c, status])) as Record<CallerName, number>
 /** Studio routes: signed out 401, another studio's member 404, a device 403; members as given. */
@@ -104,19 +109,20 @@ function routeFiles(dir: string): string[] {
 
 describe('authorisation matrix', async () => {
   const { databasePath } = await useBuiltApp()
-  const ids: Ids = { studio: 0, shoot: 0, recipe: 0, episode: 0 }
+  const ids: Ids = { studio: 0, shoot: 0, recipe: 0, episode: 0, socketShoot: 0 }
   const callers = {} as Record<CallerName, () => Promise<Client>>
 
   beforeAll(async () => {
     const producer = await signedIn(demo.producer)
     ids.studio = (await producer.get('/api/me')).body.memberships[0].studioId
     ids.shoot = await insertShoot(databasePath, ids.studio, 'Matrix shoot')
+    ids.socketShoot = await insertShoot(databasePath, ids.studio, 'Socket matrix shoot')
     ids.recipe = (await producer.post(`/api/studios/${ids.studio}/recipes`, { title: 'Matrix stew', servings: 4 })).body.id
     ids.episode = (await producer.post(`/api/studios/${ids.studio}/episodes`, { title: 'Matrix episode', recipeIds: [ids.recipe] })).body.id
     const outsiderEmail = uniqueEmail('outsider')
     await new Client().post('/api/auth/signup', { name: 'Outsider', email: outsiderEmail, password: 'some other studio', studioName: 'Elsewhere Kitchen' })
-    const device = async (role: 'host' | 'camera') => {
-      const { body } = await (await signedIn(demo.producer)).post(`/api/shoots/${ids.shoot}/join-codes`, { role })
+    const device = async (role: 'host' | 'camera', shootId = ids.shoot) => {
+      const { body } = await (await signedIn(demo.producer)).post(`/api/shoots/${shootId}/join-codes`, { role })
       const client = new Client()
       await client.post('/api/join', { code: body.code })
       return client
@@ -132,7 +138,14 @@ describe('authorisation matrix', async () => {
       hostDevice: () => device('host'),
       cameraDevice: () => device('camera'),
     })
+    // One socket per kind of caller for the socket matrix; devices joined to its own shoot.
+    for (const name of CALLERS) {
+      const client = name === 'hostDevice' ? await device('host', ids.socketShoot) : name === 'cameraDevice' ? await device('camera', ids.socketShoot) : await callers[name]()
+      sockets[name] = await connect(client.cookie ? client : null)
+    }
   })
+  const sockets = {} as Record<CallerName, TestSocket>
+  afterAll(() => Object.values(sockets).forEach((s) => s.disconnect()))
 
   for (const row of [...rows, ...moduleRoutes]) {
     it(`${row.method} ${row.file}`, async () => {
@@ -149,5 +162,73 @@ describe('authorisation matrix', async () => {
   it('covers every route file under server/api', () => {
     const covered = new Set(rows.map((r) => r.file))
     expect(routeFiles(join(rootDir, 'server/api')).filter((f) => !covered.has(f))).toEqual([])
+  })
+
+  // Every change, as a form on another site posts it with the producer's cookie, is refused before
+  // the route reads it (server/middleware/01.same-origin.ts).
+  it('refuses every changing route when the post comes from another site', async () => {
+    const got: Record<string, string> = {}
+    const want: Record<string, string> = {}
+    for (const row of [...rows, ...moduleRoutes].filter((r) => r.method !== 'GET')) {
+      const producer = await signedIn(demo.producer)
+      const res = await producer.call(row.method, row.path(ids), 'name=value', {
+        'content-type': 'application/x-www-form-urlencoded', 'origin': 'https://elsewhere.example', 'sec-fetch-site': 'cross-site',
+      })
+      got[`${row.method} ${row.file}`] = `${res.status} ${res.body?.data?.code}`
+      want[`${row.method} ${row.file}`] = '403 cross-site'
+    }
+    expect(got).toEqual(want)
+  })
+
+  describe('socket commands', () => {
+    // A valid command of every type, so a caller that gets past the guard and the role table meets
+    // the shoot's state (ok, or a refusal such as 'not-started'), never 'invalid'. Typed by the
+    // command types: a new command without a sample does not compile, and fails the check below.
+    const samples: Record<ShootCommandType, Record<string, unknown>> = {
+      'shoot.start': {},
+      'shoot.pause': {},
+      'shoot.resume': {},
+      'shoot.end': {},
+      'step.next': {},
+      'step.previous': {},
+      'step.jump': { segment: 0, step: 0 },
+      'timer.start': { label: 'Matrix timer', durationMs: 60_000 },
+      'timer.pause': { timerId: 'matrix-timer' },
+      'timer.resume': { timerId: 'matrix-timer' },
+      'timer.addTime': { timerId: 'matrix-timer', deltaMs: 60_000 },
+      'timer.cancel': { timerId: 'matrix-timer' },
+      'timer.acknowledge': { timerId: 'matrix-timer' },
+      'rolling.set': { rolling: true },
+      'clock.speed': { speed: 2 },
+      'marker.add': { kind: 'good' },
+      'wait.start': { stepId: 'matrix-step' },
+    }
+    /** The shoot role each caller acts as; anonymous callers and other studios never get that far. */
+    const roleOf: Partial<Record<CallerName, ShootRole>> = {
+      producer: 'producer', host: 'host', camera: 'camera', viewer: 'viewer', hostDevice: 'host', cameraDevice: 'camera',
+    }
+    /** A refusal by the guard, the role table or the schema keeps its code; anything else got through. */
+    const GATES = new Set(['signed-out', 'not-found', 'forbidden', 'invalid'])
+
+    it('has a sample for every shoot command', () => {
+      expect(Object.keys(samples).sort()).toEqual([...SHOOT_COMMAND_TYPES].sort())
+    })
+
+    for (const type of SHOOT_COMMAND_TYPES) {
+      it(`${type}: ${SHOOT_COMMAND_ROLES[type].join(', ')}`, async () => {
+        const want = {} as Record<CallerName, string>
+        const got = {} as Record<CallerName, string>
+        for (const name of CALLERS) {
+          const role = roleOf[name]
+          want[name] = name === 'anon' ? 'signed-out' : name === 'outsider' ? 'not-found'
+            : SHOOT_COMMAND_ROLES[type].includes(role!) ? 'passes' : `forbidden: ${shootCommandForbiddenMessage(role!, type)}`
+          const reply = await emitAck<{ ok: boolean; error?: { code: string; message: string } }>(
+            sockets[name], 'shoot:command', { shootId: ids.socketShoot, type, ...samples[type] })
+          const code = reply.ok ? 'ok' : reply.error!.code
+          got[name] = !GATES.has(code) ? 'passes' : code === 'forbidden' ? `forbidden: ${reply.error!.message}` : code
+        }
+        expect(got).toEqual(want)
+      })
+    }
   })
 })

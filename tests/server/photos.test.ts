@@ -20,11 +20,11 @@ interface Upload {
   body: Json
 }
 
-/** A multipart upload, as a browser form sends it, with the client's session cookie. */
+/** A multipart upload, as a browser form sends it, with the client's session cookie and the app's Origin. */
 async function upload(base: (path: string) => string, cookie: string, path: string, bytes: Uint8Array, filename = 'dish.jpg', type = 'image/jpeg', field = 'photo'): Promise<Upload> {
   const form = new FormData()
   form.append(field, new Blob([new Uint8Array(bytes)], { type }), filename)
-  const res = await fetch(base(path), { method: 'POST', body: form, headers: { cookie, accept: 'application/json' } })
+  const res = await fetch(base(path), { method: 'POST', body: form, headers: { cookie, accept: 'application/json', origin: new URL(base('/')).origin } })
   const text = await res.text()
   return { status: res.status, body: text ? JSON.parse(text) : null }
 }
@@ -193,7 +193,7 @@ describe('photos in the photo folder', async () => {
       const base = new URL(url('/'))
       const req = httpRequest({
         host: base.hostname, port: base.port, method: 'POST', path: `/api/recipes/${recipe.id}/photo`,
-        headers: { cookie: producer.cookie, accept: 'application/json', 'content-type': 'multipart/form-data; boundary=x', 'transfer-encoding': 'chunked' },
+        headers: { cookie: producer.cookie, origin: base.origin, accept: 'application/json', 'content-type': 'multipart/form-data; boundary=x', 'transfer-encoding': 'chunked' },
       }, (res) => {
         let body = ''
         res.on('data', (c) => (body += c))
@@ -390,7 +390,7 @@ describe('photos in an S3-compatible bucket', () => {
     const at = (path: string) => `${base}${path}`
     const login = await fetch(at('/api/auth/login'), { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: demo.producer, password: DEMO_PASSWORD }) })
     const cookie = login.headers.getSetCookie().find((c) => c.startsWith('nuxt-session='))!.split(';')[0]!
-    const call = (method: string, path: string, body?: unknown) => fetch(at(path), { method, headers: { cookie, 'content-type': 'application/json', accept: 'application/json' }, body: body === undefined ? undefined : JSON.stringify(body) })
+    const call = (method: string, path: string, body?: unknown) => fetch(at(path), { method, headers: { cookie, origin: base, 'content-type': 'application/json', accept: 'application/json' }, body: body === undefined ? undefined : JSON.stringify(body) })
     const me = await (await call('GET', '/api/me')).json()
     const studioId = me.memberships[0].studioId
     const recipe = await (await call('POST', `/api/studios/${studioId}/recipes`, { title: 'Photo test', servings: 2 })).json()

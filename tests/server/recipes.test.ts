@@ -4,7 +4,7 @@ import { readFileSync } from 'node:fs'
 import { resolve } from 'node:path'
 import { beforeAll, describe, expect, it } from 'vitest'
 import { rootDir, useBuiltApp } from '../support/app'
-import { Client, demo, signedIn } from '../support/client'
+import { appOrigin, Client, demo, signedIn } from '../support/client'
 
 const fixture = readFileSync(resolve(rootDir, 'tests/fixtures/recipe-fennel-orzo.jsonld'), 'utf8')
 
@@ -133,7 +133,7 @@ describe('recipes', async () => {
 
     const form = new FormData()
     form.append('file', new Blob([fixture], { type: 'application/ld+json' }), 'orzo.jsonld')
-    const res = await fetch((await import('@nuxt/test-utils/e2e')).url(`/api/studios/${studioId}/recipes/import`), { method: 'POST', body: form, headers: { cookie: producer.cookie } })
+    const res = await fetch((await import('@nuxt/test-utils/e2e')).url(`/api/studios/${studioId}/recipes/import`), { method: 'POST', body: form, headers: { cookie: producer.cookie, origin: appOrigin() } })
     expect(res.status).toBe(201)
     expect((await res.json()).recipe.title).toBe('Fennel and lemon orzo')
   })

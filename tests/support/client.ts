@@ -1,4 +1,5 @@
-// A tiny HTTP client for server tests: one cookie jar per person, raw status and headers kept.
+// A tiny HTTP client for server tests: one cookie jar per person, raw status and headers kept; it
+// sends the app's own Origin, as the app's pages do.
 import { url } from '@nuxt/test-utils/e2e'
 import { DEMO_PASSWORD } from '../../server/db/demo'
 
@@ -15,6 +16,14 @@ export interface Reply<T = Json> {
   headers: Headers
 }
 
+/**
+ * The Origin header of a page of the app under test. The server refuses a cookie-carrying change that
+ * does not name its origin (server/utils/same-origin.ts); this client speaks for the app's own pages.
+ */
+export function appOrigin(): string {
+  return new URL(url('/')).origin
+}
+
 export class Client {
   cookie = ''
 
@@ -23,6 +32,7 @@ export class Client {
       method,
       headers: {
         accept: 'application/json',
+        origin: appOrigin(),
         ...(body !== undefined && typeof body !== 'string' ? { 'content-type': 'application/json' } : {}),
         ...(this.cookie ? { cookie: this.cookie } : {}),
         ...headers,

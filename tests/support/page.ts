@@ -15,6 +15,14 @@ export async function openPage(path: string, viewport = { width: 1280, height: 8
   return { page, response, requests }
 }
 
+/**
+ * Headers for a change sent with `page.request` (Playwright's API client, which sends the page's
+ * cookies but no Origin): the app's own Origin, as the page itself would send (server/utils/same-origin.ts).
+ */
+export function sameOrigin(): { origin: string } {
+  return { origin: new URL(url('/')).origin }
+}
+
 /** The demo studio's password for every seeded member (server/db/demo data). */
 export const DEMO_PASSWORD = 'hob-demo-2026'
 

@@ -2,7 +2,7 @@
 import { url } from '@nuxt/test-utils/e2e'
 import { io, type Socket } from 'socket.io-client'
 import type { ClientToServerEvents, ServerToClientEvents, ShootEventMessage } from '../../shared/types/socket-events'
-import type { Client, Json } from './client'
+import { appOrigin, type Client, type Json } from './client'
 
 export type TestSocket = Socket<ServerToClientEvents, ClientToServerEvents> & { received: ShootEventMessage[] }
 
@@ -10,7 +10,8 @@ export function connect(client: Client | null, transport: 'websocket' | 'polling
   const socket = io(url('/'), {
     path: '/socket.io',
     transports: [transport],
-    extraHeaders: client?.cookie ? { cookie: client.cookie } : {},
+    // The app's own Origin, as a browser sends on the handshake (server/utils/same-origin.ts).
+    extraHeaders: { origin: appOrigin(), ...(client?.cookie ? { cookie: client.cookie } : {}) },
     reconnection: false,
     forceNew: true,
   }) as TestSocket
