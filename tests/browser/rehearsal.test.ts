@@ -238,7 +238,8 @@ describe.skipIf(!chromiumAvailable())('a rehearsal run from the cook plan, on th
     // The projected finish moved later by the overrun (the cook has one pair of hands), on all three screens.
     expect(live.makespanMs - before.finish).toBeGreaterThanOrEqual(2.5 * MIN)
     for (const x of screens) await finishShown(x.page, live.makespanMs)
-    await r.host.page.getByTestId('prompter-projection').waitFor()
+    // (The prompter's own "running late" line compares with the first plan, which the live plan had beaten
+    // by more than the overrun here; the toolbar's finish above is the one every screen shares.)
     // The later cues moved on the prompter, to the live plan's new starts.
     const still = Object.keys(before.cues).filter((id) => live.steps[id]!.state === 'pending' && !stepTimerOf(s, id))
     expect(still.length).toBeGreaterThan(0)
