@@ -214,7 +214,9 @@ describe.skipIf(!chromiumAvailable())('a rehearsal run from the cook plan, on th
       const step = shootPlanStep(s, shootCursorRef(s).stepId)
       const waits = upcomingWaits(s, Date.now())
       // Once the plan has been computed again from the present (it is the first plan before that).
-      return !!step?.handsOn && s.plan!.live!.atShootMs > 0 && waits.length > 0 && waits.every((w) => w.inMs > 10_000)
+      // A step just begun (a minute or more to its planned end), so the overrun is all its own.
+      const fresh = !!step && s.plan!.live!.steps[step.id]!.endMs - shootClockAt(s.clock, Date.now()) > MIN
+      return !!step?.handsOn && fresh && s.plan!.live!.atShootMs > 0 && waits.length > 0 && waits.every((w) => w.inMs > 10_000)
         && !dueTimersAt(s.timers, Date.now()).length
     }
     let s = await drive(r, onIt)
@@ -236,11 +238,14 @@ describe.skipIf(!chromiumAvailable())('a rehearsal run from the cook plan, on th
     // The projected finish moved later by the overrun (the cook has one pair of hands), on all three screens.
     expect(live.makespanMs - before.finish).toBeGreaterThanOrEqual(2.5 * MIN)
     for (const x of screens) await finishShown(x.page, live.makespanMs)
-    await r.host.page.getByTestId('prompter-projection').waitFor()
+    // (The prompter's own "running late" line compares with the first plan, which the live plan had beaten
+    // by more than the overrun here; the toolbar's finish above is the one every screen shares.)
     // The later cues moved on the prompter, to the live plan's new starts.
     const still = Object.keys(before.cues).filter((id) => live.steps[id]!.state === 'pending' && !stepTimerOf(s, id))
     expect(still.length).toBeGreaterThan(0)
-    for (const id of still) await cueShown(id, live.steps[id]!.startMs)
+    // (Each within a kitchen second of the plan's start: the server computes the plan again on later changes too.)
+    const cueAt = (id: string) => r.host.page.getByTestId('prompter-cue').and(r.host.page.locator(`[data-step-id="${id}"]`)).getAttribute('data-at-ms')
+    for (const id of still) await expect.poll(async () => Math.abs(Number(await cueAt(id)) - live.steps[id]!.startMs)).toBeLessThanOrEqual(1000)
     expect(still.some((id) => live.steps[id]!.startMs - before.cues[id]! >= 2.5 * MIN), JSON.stringify({ before: before.cues, live: live.steps })).toBe(true)
     // And on the cue screen's stand-by: each wait stands at the new start (to 2 kitchen s: a row is
     // drawn up to one frame, 50 ms = 1.6 kitchen s at 32×, before it is read).
