@@ -11,6 +11,8 @@ import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { CHROMIUM_ARGS, CHROMIUM_PATH, chromiumAvailable } from '../support/chromium'
 import { DEMO_PASSWORD, sameOrigin, screenshot, signInOnPage, startTimerOnPage } from '../support/page'
+import type { ShootSnapshot } from '../../shared/types/socket-events'
+import { stepTimerLabel } from '../../shared/utils/key-map'
 
 const LAPTOP = { width: 1280, height: 800 }
 const TABLET = { width: 1024, height: 768 }
@@ -101,11 +103,18 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     await expect(stepOf(host.page)).resolves.toBe('0')
     await host.page.keyboard.press('PageDown')
     for (const s of all) await atStep(s.page, 1)
-    // The step's amounts are scaled in the studio's units on the prompter (demo: 30 mL olive oil).
-    await expect(host.page.getByTestId('amount').first().textContent()).resolves.toBe('30 mL olive oil')
+    // The run order is the cook plan's: what each beat shows is read from the shoot the server made.
+    const snapshot = async () => (await desk.page.request.get(url(`/api/shoots/${shootId}`))).json() as Promise<ShootSnapshot>
+    const made = await snapshot()
+    const order = made.state.runOrder.flatMap((r) => r.stepIds)
+    const stepAt = (i: number) => made.steps[order[i]!]!
+    // The step's amounts are scaled in the studio's units on the prompter (the first amount of the
+    // first step that has one, as the server scaled it).
+    const amounts = stepAt(1).segments.filter((x) => 'key' in x && x.key).map((x) => x.text)
+    await expect(host.page.getByTestId('amount').allTextContents()).resolves.toEqual(amounts)
     // The camera sees the shot of this step and the next cue.
-    await expect(camera.page.getByTestId('cue-shot').textContent()).resolves.toContain('Side angle on the pan')
-    await expect(camera.page.getByTestId('cue-next').textContent()).resolves.toContain('Close on the pan')
+    await expect(camera.page.getByTestId('cue-shot').textContent()).resolves.toContain(stepAt(1).cameraShot ?? 'Wide, as set')
+    await expect(camera.page.getByTestId('cue-next').textContent()).resolves.toContain(stepAt(2).cameraShot ?? 'Hold the shot')
 
     // Remap on the tablet: the pedal's key "j" now means next step.
     await host.page.getByRole('link', { name: 'This device' }).click()
@@ -146,7 +155,9 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     await host.page.locator('[data-testid="tile-Flatbread flip"][data-urgent="true"]').waitFor()
     await host.page.getByTestId('alarm-flash').waitFor({ timeout: 10_000 })
     await host.page.locator('[data-testid="tile-Flatbread flip"][data-state="due"]').waitFor()
-    await expect.poll(() => howlerPlaying(desk.page), { timeout: 5000 }).toContainEqual(expect.stringContaining('/sounds/alarm-slot-2.wav'))
+    // Its own slot's sound (the waits the host reached hold slots of their own).
+    const flip = (await snapshot()).state.timers.find((t) => t.label === 'Flatbread flip')!
+    await expect.poll(() => howlerPlaying(desk.page), { timeout: 5000 }).toContainEqual(expect.stringContaining(`/sounds/alarm-slot-${flip.slot + 1}.wav`))
     await expect.poll(() => alarmMode(desk.page)).toBe('sound+flash')
     // At this device's volume (the default, 80 %).
     await expect(desk.page.evaluate(() => (window as unknown as { Howler: { volume(): number } }).Howler.volume())).resolves.toBeCloseTo(0.8, 5)
@@ -165,14 +176,18 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     }
     await expect.poll(() => howlerPlaying(desk.page)).toEqual([])
 
-    // The host starts this step's timer with its key ("t"): the step's longest time (2 minutes), on
-    // every screen, named after the step.
+    // The host starts this step's timer with its key ("t"): the step's longest time, on every
+    // screen, named after the step (the first words of its text).
+    const here = stepAt(2)
+    expect(here.durationMax ?? here.durationMin, 'the demo run order\'s third beat has a time').not.toBeNull()
+    const longest = (here.durationMax ?? here.durationMin)! * 1000
+    const words = stepTimerLabel(here.text).replace(/…$/, '').split(' ').slice(0, 3).join(' ')
     await host.page.keyboard.press('t')
-    const stepTimer = desk.page.locator('[data-testid^="timer-Stir in the garlic"]')
+    const stepTimer = desk.page.locator(`[data-testid^="timer-${words}"]`)
     await stepTimer.waitFor()
-    expect(Number(await stepTimer.getAttribute('data-remaining-ms'))).toBeGreaterThan(110_000)
-    expect(Number(await stepTimer.getAttribute('data-remaining-ms'))).toBeLessThanOrEqual(120_000)
-    await host.page.locator('[data-testid^="tile-Stir in the garlic"]').waitFor()
+    expect(Number(await stepTimer.getAttribute('data-remaining-ms'))).toBeGreaterThan(longest - 10_000)
+    expect(Number(await stepTimer.getAttribute('data-remaining-ms'))).toBeLessThanOrEqual(longest)
+    await host.page.locator(`[data-testid^="tile-${words}"]`).waitFor()
 
     // A reload of the tablet returns to the same step and the same timer deadline.
     const deadline = await host.page.getByTestId('tile-Beans simmer').getAttribute('data-deadline')
