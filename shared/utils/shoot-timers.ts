@@ -1,7 +1,7 @@
 // Shoot timers as deadlines. A running timer is a deadline on the server clock and the speed it
 // runs at (kitchen ms per server ms, see shoot-clock.ts); what is left is always drawn from the
 // deadline, never counted down. A paused timer keeps its kitchen time left.
-import type { ShootActor, ShootState, ShootStepRef, ShootTimer } from '../types/shoot'
+import type { ShootActor, ShootState, ShootTimer } from '../types/shoot'
 import { shootClockAt } from './shoot-clock'
 
 /** Running, paused or due: a timer that still holds its slot and needs someone's attention. */
@@ -88,13 +88,8 @@ export function markDueTimers(state: ShootState, nowServerMs: number): { state: 
   return { state: { ...state, timers, seq: state.seq + 1 }, due }
 }
 
-export interface NewShootTimer {
-  id: string
-  slot: number
-  label: string
-  sound: string | null
-  stepRef: ShootStepRef
-  durationMs: number
+/** What a new timer is given; the rest follows from the moment it starts. */
+export type NewShootTimer = Pick<ShootTimer, 'id' | 'slot' | 'label' | 'sound' | 'stepRef' | 'durationMs'> & {
   origin: 'step' | 'free'
   checkLeftMs: number | null
 }

@@ -10,7 +10,7 @@ import type { ShootState } from '../../shared/types/shoot'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
-import { artifactsDir, consoleErrorsOf, screenshot, signInOnPage } from '../support/page'
+import { artifactsDir, consoleErrorsOf, sameOrigin, screenshot, signInOnPage } from '../support/page'
 
 const MIN = 60_000
 const num = async (page: Page, testId: string, name: string) => Number(await page.getByTestId(testId).first().getAttribute(name))
@@ -21,7 +21,7 @@ async function producerWithRehearsal(viewport: { width: number; height: number }
   const errors = consoleErrorsOf(page)
   await signInOnPage(page, 'producer@brackenford.test')
   await beforeCreating?.(page)
-  const created = await page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' } })
+  const created = await page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' }, headers: sameOrigin() })
   expect(created.status()).toBe(201)
   return { page, errors, shootId: (await created.json()).shoot.id as number }
 }
@@ -32,7 +32,7 @@ describe.skipIf(!chromiumAvailable())('the control desk\'s live cook plan', asyn
   it('draws the lanes and a moving now-line, and moves the projected finish when the host runs 3 minutes late', async () => {
     const { page, errors, shootId } = await producerWithRehearsal({ width: 1440, height: 900 })
     const command = async (data: object) => {
-      const r = await page.request.post(url(`/api/shoots/${shootId}/commands`), { data })
+      const r = await page.request.post(url(`/api/shoots/${shootId}/commands`), { data, headers: sameOrigin() })
       expect(r.status(), JSON.stringify(data)).toBe(200)
     }
     const server = async (): Promise<ShootState> => (await (await page.request.get(url(`/api/shoots/${shootId}`))).json()).state
@@ -129,9 +129,9 @@ describe.skipIf(!chromiumAvailable())('the control desk\'s live cook plan', asyn
     // A kitchen without an oven cannot roast the squash (missing-station, tests/server/plan.test.ts).
     const kitchen = { hands: 1, burners: 4, ovens: 0, racksPerOven: 1, parallelRecipes: true }
     const { page, errors, shootId } = await producerWithRehearsal({ width: 1280, height: 800 }, async (p) => {
-      expect((await p.request.patch(url('/api/studios/1'), { data: { kitchen } })).status()).toBe(200)
+      expect((await p.request.patch(url('/api/studios/1'), { data: { kitchen }, headers: sameOrigin() })).status()).toBe(200)
     })
-    await page.request.patch(url('/api/studios/1'), { data: { kitchen: { ...kitchen, ovens: 1 } } })
+    await page.request.patch(url('/api/studios/1'), { data: { kitchen: { ...kitchen, ovens: 1 } }, headers: sameOrigin() })
 
     await page.goto(url(`/shoots/${shootId}/desk`), { waitUntil: 'networkidle' })
     const refused = page.getByTestId('desk-plan-refused')

@@ -20,7 +20,7 @@ import { shootPlanStep, stepTimerOf } from '../../shared/utils/shoot-waits'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
-import { DEMO_PASSWORD, consoleErrorsOf, screenshot } from '../support/page'
+import { DEMO_PASSWORD, consoleErrorsOf, sameOrigin, screenshot } from '../support/page'
 
 const SPEED = 32
 const MIN = 60_000
@@ -32,7 +32,7 @@ interface CueFlip { id: string; atMs: number; serverMs: number }
 async function signedIn(email: string, path: string | null, viewport: { width: number; height: number }): Promise<Screen> {
   const page = await createPage(undefined, { viewport })
   const errors = consoleErrorsOf(page)
-  expect((await page.request.post(url('/api/auth/login'), { data: { email, password: DEMO_PASSWORD } })).status()).toBe(200)
+  expect((await page.request.post(url('/api/auth/login'), { data: { email, password: DEMO_PASSWORD }, headers: sameOrigin() })).status()).toBe(200)
   if (path) await page.goto(url(path), { waitUntil: 'networkidle' })
   return { page, errors }
 }
@@ -45,7 +45,7 @@ async function ready(page: Page) {
 /** The producer's rehearsal of the demo episode at 32×, with the desk, the prompter and the cue screen open. */
 async function rehearsal() {
   const producer = await signedIn('producer@brackenford.test', null, { width: 1280, height: 800 })
-  const created = await producer.page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' } })
+  const created = await producer.page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' }, headers: sameOrigin() })
   expect(created.status()).toBe(201)
   const shootId: number = (await created.json()).shoot.id
   const base = `/shoots/${shootId}`
@@ -54,7 +54,7 @@ async function rehearsal() {
   const camera = await signedIn('camera@brackenford.test', `${base}/cue`, { width: 900, height: 1000 })
   for (const x of [producer, host, camera]) await ready(x.page)
   const command = async (data: Record<string, unknown>) => {
-    const r = await producer.page.request.post(url(`/api/shoots/${shootId}/commands`), { data })
+    const r = await producer.page.request.post(url(`/api/shoots/${shootId}/commands`), { data, headers: sameOrigin() })
     expect(r.status(), JSON.stringify(data)).toBe(200)
   }
   const state = async (): Promise<ShootState> => (await (await host.page.request.get(url(`/api/shoots/${shootId}`))).json()).state

@@ -110,7 +110,7 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     const stepAt = (i: number) => made.steps[order[i]!]!
     // The step's amounts are scaled in the studio's units on the prompter (the first amount of the
     // first step that has one, as the server scaled it).
-    const amounts = stepAt(1).segments.filter((x) => 'key' in x && x.key).map((x) => x.text)
+    const amounts = stepAt(1).segments.filter((x) => x.ingredientKey).map((x) => x.text)
     await expect(host.page.getByTestId('amount').allTextContents()).resolves.toEqual(amounts)
     // The camera sees the shot of this step and the next cue.
     await expect(camera.page.getByTestId('cue-shot').textContent()).resolves.toContain(stepAt(1).cameraShot ?? 'Wide, as set')

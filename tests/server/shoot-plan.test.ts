@@ -104,10 +104,11 @@ describe('the shoot runs the cook plan', async () => {
     await agree(episode.body.id)
   })
 
-  it('advancing through the script starts each wait\'s timer by itself, with the step\'s time and the deadline it gives', async () => {
+  /** A new rehearsal of the demo episode with the host and the producer on sockets; `send` applies a
+   * host command and returns the message every screen got for it (the host's, the producer's). */
+  async function rehearsal() {
     const made = await producer.post(`/api/episodes/${episodeId}/shoots`, { mode: 'rehearsal' })
     const shootId = made.body.shoot.id as number
-    const plan = (made.body.state as ShootState).plan!
     const host = await connect(await signedIn(demo.host))
     const camera = await connect(producer)
     sockets.push(host, camera)
@@ -116,8 +117,14 @@ describe('the shoot runs the cook plan', async () => {
       const ack = await emitAck<{ ok: boolean; seq: number }>(host, 'shoot:command', { shootId, ...command })
       expect(ack.ok, JSON.stringify(ack)).toBe(true)
       await waitFor(() => host.received.some((m) => m.seq === ack.seq) && camera.received.some((m) => m.seq === ack.seq))
-      return { mine: host.received.find((m) => m.seq === ack.seq)!, theirs: camera.received.find((m) => m.seq === ack.seq)! }
+      return [host.received.find((m) => m.seq === ack.seq)!, camera.received.find((m) => m.seq === ack.seq)!] as const
     }
+    return { shootId, plan: (made.body.state as ShootState).plan!, send, camera }
+  }
+
+  it('advancing through the script starts each wait\'s timer by itself, with the step\'s time and the deadline it gives', async () => {
+    const { plan, send: sendBoth } = await rehearsal()
+    const send = async (command: object) => ({ mine: (await sendBoth(command))[0] })
     const waits = plan.steps.filter((s) => !s.handsOn && (s.maxMs ?? s.minMs) !== null)
     expect(waits.length).toBeGreaterThan(2)
 
@@ -150,19 +157,7 @@ describe('the shoot runs the cook plan', async () => {
   })
 
   it('a hands-on step 3 minutes late: every screen gets the same new plan, what depends on it moves by 3 minutes', async () => {
-    const made = await producer.post(`/api/episodes/${episodeId}/shoots`, { mode: 'rehearsal' })
-    const shootId = made.body.shoot.id as number
-    const first = (made.body.state as ShootState).plan!
-    const host = await connect(await signedIn(demo.host))
-    const camera = await connect(producer)
-    sockets.push(host, camera)
-    for (const s of [host, camera]) expect((await emitAck(s, 'shoot:join', { shootId })).ok).toBe(true)
-    const send = async (command: object) => {
-      const ack = await emitAck<{ ok: boolean; seq: number }>(host, 'shoot:command', { shootId, ...command })
-      expect(ack.ok, JSON.stringify(ack)).toBe(true)
-      await waitFor(() => host.received.some((m) => m.seq === ack.seq) && camera.received.some((m) => m.seq === ack.seq))
-      return [host.received.find((m) => m.seq === ack.seq)!, camera.received.find((m) => m.seq === ack.seq)!] as const
-    }
+    const { shootId, plan: first, send, camera } = await rehearsal()
     // 32×: three kitchen minutes are 5.6 real seconds.
     await emitAck(camera, 'shoot:command', { shootId, type: 'clock.speed', speed: 32 })
     let [mine] = await send({ type: 'shoot.start' })
