@@ -1,5 +1,6 @@
 // Hobline: the run-of-show for cooking on camera.
 import { fileURLToPath } from 'node:url'
+import { bundleWorker } from './server/workers/bundle'
 
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
@@ -62,6 +63,8 @@ export default defineNuxtConfig({
     experimental: { websocket: true },
     // Node 20 runs ES2022 natively (the unit maths uses BigInt literals for exact ratios).
     esbuild: { options: { target: 'es2022' } },
+    // Recipe imports are read in a worker thread (server/utils/import-reader.ts); its code is bundled here.
+    virtual: { '#recipe-import-worker': () => bundleWorker(fileURLToPath(new URL('./server/workers/recipe-import.ts', import.meta.url))) },
   },
   hooks: {
     // A refusal thrown as a DomainError is answered by server/error.ts before Nuxt's own handler.

@@ -80,9 +80,9 @@ export async function importPriceCsv(studioId: number, text: string) {
  */
 export async function readUploadText(event: H3Event, field: string, maxBytes: number): Promise<string> {
   const type = getRequestHeader(event, 'content-type') ?? ''
-  const length = Number(getRequestHeader(event, 'content-length') ?? 0)
   const tooBig = () => new DomainError('too-large', `The upload is larger than ${Math.round(maxBytes / 1024)} KB; send a smaller file.`)
-  if (length > maxBytes) throw tooBig()
+  // A multipart form carries its field names and boundaries beside the file: 16 KB allowed for them.
+  await readBodyWithin(event, maxBytes + (type.startsWith('multipart/form-data') ? 16 * 1024 : 0), tooBig().message)
   if (type.startsWith('multipart/form-data')) {
     const parts = (await readMultipartFormData(event)) ?? []
     const part = parts.find((p) => p.name === field)

@@ -138,17 +138,9 @@ export async function studioSettings(studioId: number) {
 /** Reads an import into a body ready to save, with what could not be understood. */
 export async function readRecipeImport(studioId: number, text: string) {
   const settings = await studioSettings(studioId)
-  let imported
-  try {
-    imported = importSchemaOrgRecipe(text, { cups: settings.cupUnit === 'metric-cup' ? 'metric' : 'us' })
-  } catch (error) {
-    if (error instanceof RecipeImportError) throw new DomainError('invalid', `body: ${error.message}`, { field: 'body' })
-    throw error
+  const { imported, body, invalid } = await readImportOffLoop(text, { cups: settings.cupUnit === 'metric-cup' ? 'metric' : 'us' })
+  if (invalid) {
+    throw new DomainError('invalid', `The recipe was read, but ${invalid.field}: ${invalid.message}`, { data: { field: invalid.field, draft: imported.recipe, problems: imported.problems } })
   }
-  const parsed = recipeCreateSchema.safeParse(imported.recipe)
-  if (!parsed.success) {
-    const issue = parsed.error.issues[0]!
-    throw new DomainError('invalid', `The recipe was read, but ${issue.path.join('.')}: ${issue.message}`, { data: { field: issue.path.join('.'), draft: imported.recipe, problems: imported.problems } })
-  }
-  return { draft: imported.recipe, body: parsed.data, problems: imported.problems, images: imported.images }
+  return { draft: imported.recipe, body: body!, problems: imported.problems, images: imported.images }
 }

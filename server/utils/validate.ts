@@ -28,8 +28,9 @@ function isJsonType(contentType: string): boolean {
 async function readJson(event: H3Event): Promise<unknown> {
   let raw: string | undefined
   try {
-    raw = await readRawBody(event, 'utf8')
-  } catch {
+    raw = (await readBodyWithin(event, JSON_BODY_MAX_BYTES, `body: larger than ${JSON_BODY_MAX_BYTES / 1024 / 1024} MB; send less at once.`)).toString('utf8')
+  } catch (error) {
+    if (error instanceof DomainError) throw error
     throw new DomainError('invalid', 'body: send a JSON object (the body could not be read).', { field: 'body' })
   }
   if (raw === undefined || raw.trim() === '') return undefined
