@@ -51,8 +51,9 @@ export function actorFor(caller: ShootCaller): ShootActor {
 
 /** The shoot a payload names, or a refusal that says what to send. */
 export function shootIdOf(payload: unknown): number {
-  const id = Number((payload as { shootId?: unknown } | null)?.shootId)
-  if (!Number.isSafeInteger(id) || id <= 0) throw new DomainError('invalid', 'shootId: send the number of the shoot.', { field: 'shootId' })
+  // A number, not text or true that happens to convert to one.
+  const id = (payload as { shootId?: unknown } | null)?.shootId
+  if (typeof id !== 'number' || !Number.isSafeInteger(id) || id <= 0) throw new DomainError('invalid', 'shootId: send the number of the shoot.', { field: 'shootId' })
   return id
 }
 

@@ -73,8 +73,9 @@ export function validateQuery<S extends z.ZodType>(event: H3Event, schema: S): z
 /** A numeric id from the route, such as `studioId`; 400 naming it when it is not a positive whole number. */
 export function routeId(event: H3Event, name: string): number {
   const raw = getRouterParam(event, name)
-  const id = Number(raw)
-  if (!raw || !Number.isSafeInteger(id) || id <= 0) {
+  // Digits only: Number() would also read " 1", "0x10" and "1e3" as ids of other rows.
+  const id = raw && /^[1-9]\d{0,15}$/.test(raw) ? Number(raw) : Number.NaN
+  if (!Number.isSafeInteger(id)) {
     throw new DomainError('invalid', `${name}: must be a positive whole number, got "${String(raw).slice(0, 40)}".`, { field: name })
   }
   return id

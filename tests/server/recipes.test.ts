@@ -218,5 +218,25 @@ describe('recipes', async () => {
     expect(res.body.added.map((p: { item: string }) => p.item)).toEqual(['Chickpeas', 'Lemons'])
     expect(res.body.added[0]).toMatchObject({ priceMinor: 65, packageSize: 400, packageUnit: 'g', boughtOn: '2026-11-02' })
     expect(res.body.errors).toEqual([expect.objectContaining({ line: 4 })])
+    // No good row: a refusal in the one error shape, naming the first problem, every row in its data.
+    const none = await producer.call('POST', `/api/studios/${studioId}/prices/import`, 'item,package size,unit,price,currency\nMystery,,g,1.00,GBP\n,1,kg,2.00,GBP\n', { 'content-type': 'text/csv' })
+    expect(none.status).toBe(400)
+    expect(none.body.statusMessage).toMatch(/^No price was added\. Line 2.*\(1 more problems are listed by line\)$/)
+    expect(none.body.data.errors.map((e: { line: number }) => e.line)).toEqual([2, 3])
+  })
+
+  it('ids in addresses are digits only: " 1", "0x10" and "1e0" name no row', async () => {
+    for (const id of ['%201', '0x10', '1e0', '01', '1.0']) {
+      const res = await producer.get(`/api/recipes/${id}`)
+      expect(res.status, id).toBe(400)
+      expect(res.body.statusMessage).toMatch(/must be a positive whole number/)
+    }
+  })
+
+  it('an address under /api that no route answers is a 404 in the one error shape', async () => {
+    const res = await producer.call('POST', '/api/no-such-thing', {})
+    expect(res.status).toBe(404)
+    expect(res.body.data.code).toBe('not-found')
+    expect(res.body.statusMessage).toMatch(/No Hobline address \/api\/no-such-thing/)
   })
 })
