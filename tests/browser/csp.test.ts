@@ -1,6 +1,6 @@
 // Every screen runs under the content security policy (DEVELOPERS.md, "Security headers") with no
-// violation: the planning pages, the control desk, the prompter with voice commands and full screen,
-// the cue screen and the join page, in real Chromium. A violation is caught twice: the
+// violation: the planning pages (with a recipe photo and a mail in the outbox's frame), the control
+// desk, the prompter with voice commands and full screen, the cue screen and the join page, in real Chromium. A violation is caught twice: the
 // `securitypolicyviolation` event (W3C CSP Level 3, §5.3), reported from every document the page
 // opens, and the console message Chromium writes for it. The Permissions-Policy is read back from the
 // document (microphone and full screen for the app itself, no camera), and full screen really opens.
@@ -61,10 +61,18 @@ describe.skipIf(!chromiumAvailable())('no screen breaks the content security pol
     const producer = await watchedPage(LAPTOP)
     await signInOnPage(producer.page, 'producer@brackenford.test')
     const studioPath = new URL(producer.page.url()).pathname
+    // An invite, so that the outbox shows a mail in its sandboxed frame (inline styles, under the policy).
+    const studioId = Number(studioPath.split('/').pop())
+    const invited = await producer.page.request.post(url(`/api/studios/${studioId}/invites`), { data: { email: 'csp-check@example.test', role: 'camera' }, headers: sameOrigin() })
+    expect(invited.status()).toBe(201)
     // The planning pages (the recipe page shows the demo photo, through /api/photos).
     for (const path of ['/', '/studio', studioPath, `${studioPath}/recipes`, '/recipes/1', '/episodes/1', '/episodes/1/plan', `${studioPath}/crew`, `${studioPath}/outbox`]) {
       await visit(producer.page, path)
     }
+    await producer.page.goto(url(`${studioPath}/outbox`), { waitUntil: 'networkidle' })
+    const mailFrame = producer.page.frameLocator('iframe[title^="The mail"]')
+    // The mail's button keeps its inline style (white text on paprika; server/mail/templates.ts).
+    await expect.poll(() => mailFrame.locator('a').first().evaluate((a) => getComputedStyle(a).color)).toBe('rgb(255, 255, 255)')
     await producer.page.goto(url('/recipes/1'), { waitUntil: 'networkidle' })
     const hero = producer.page.getByRole('img', { name: 'Smoky butter bean and tomato stew' })
     expect(await hero.evaluate(async (img: HTMLImageElement) => { await img.decode(); return img.naturalWidth })).toBeGreaterThan(0)
