@@ -5,9 +5,8 @@
 import { spawn } from 'node:child_process'
 import { resolve } from 'node:path'
 import { url } from '@nuxt/test-utils/e2e'
-import { checkPort } from 'get-port-please'
 import { beforeAll, describe, expect, it } from 'vitest'
-import { rootDir, tempDatabasePath, useBuiltApp } from '../support/app'
+import { rootDir, serverPort, tempDatabasePath, useBuiltApp } from '../support/app'
 import { type Client, demo, signedIn } from '../support/client'
 import { IMPORT_TOO_LARGE } from '../../shared/utils/schemaorg-read'
 
@@ -119,11 +118,7 @@ describe('security headers', async () => {
 
 describe('Strict-Transport-Security when the site URL is https', () => {
   it('is sent on pages and API answers of a site whose URL is https', async () => {
-    let port = 0
-    for (let i = 0; i < 50 && !port; i++) {
-      const p = 20000 + Math.floor(Math.random() * 12000)
-      if (await checkPort(p, '127.0.0.1')) port = p
-    }
+    const port = await serverPort()
     const server = spawn(process.execPath, [resolve(rootDir, '.output/server/index.mjs')], {
       env: {
         ...process.env,
