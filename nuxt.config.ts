@@ -2,11 +2,26 @@
 import { fileURLToPath } from 'node:url'
 import { bundleWorker } from './server/workers/bundle'
 
+// Security headers (nuxt-security; DEVELOPERS.md, "Security headers", is the policy in words and
+// tests/server/headers.test.ts checks it). Everything a page loads comes from its own origin: the
+// bundled font, scripts and styles under /_nuxt/, photos through /api/photos (also when they are kept in
+// an S3 bucket), the alarm sounds under /sounds, socket.io over long-polling and a WebSocket to the same
+// host. QR codes are inline SVG; data: images are allowed for them all the same.
+const PERMISSIONS = { 'camera': [], 'display-capture': [], 'fullscreen': ['self'], 'geolocation': [], 'microphone': ['self'] }
+const PERMISSIONS_HEADER = Object.entries(PERMISSIONS).map(([feature, allow]) => `${feature}=(${allow.join(' ')})`).join(', ')
+// An API answer is data, never a document: it may load nothing and be framed by nothing.
+const API_CSP = "default-src 'none'; frame-ancestors 'none'"
+// Bodies over this are refused before any route reads them (message in server/error.ts).
+const REQUEST_MAX_BYTES = 2_000_000
+// Uploads read by the app's own readers, each with its own limit and a message that says it (photos
+// 8 MiB, recipe imports 512 KB, price lists): nuxt-security's request size limiter stays off for them.
+const UPLOADS = ['/api/recipes/*/photo', '/api/recipes/*/steps/*/photo', '/api/studios/*/recipes/import', '/api/studios/*/prices/import']
+
 export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
   devtools: { enabled: false },
   telemetry: false,
-  modules: ['@nuxt/eslint', '@nuxtjs/tailwindcss', '@pinia/nuxt', '@vueuse/nuxt', 'nuxt-auth-utils'],
+  modules: ['@nuxt/eslint', '@nuxtjs/tailwindcss', '@pinia/nuxt', '@vueuse/nuxt', 'nuxt-auth-utils', 'nuxt-security'],
   css: ['~/assets/css/main.css'],
   tailwindcss: { cssPath: false, configPath: 'tailwind.config.ts' },
   app: {
@@ -72,6 +87,52 @@ export default defineNuxtConfig({
       const nuxtHandlers = [config.errorHandler ?? []].flat()
       config.errorHandler = [fileURLToPath(new URL('./server/error.ts', import.meta.url)), ...nuxtHandlers] as never
     },
+  },
+  security: {
+    headers: {
+      contentSecurityPolicy: {
+        'default-src': ["'self'"],
+        'base-uri': ["'none'"],
+        'connect-src': ["'self'"],
+        'font-src': ["'self'"],
+        'form-action': ["'self'"],
+        'frame-ancestors': ["'none'"],
+        'img-src': ["'self'", 'data:'],
+        'media-src': ["'self'"],
+        'object-src': ["'none'"],
+        // Nuxt's own inline scripts and module entry carry the request's nonce; what they load is
+        // trusted through 'strict-dynamic'.
+        'script-src': ["'self'", "'strict-dynamic'", "'nonce-{{nonce}}'"],
+        'script-src-attr': ["'none'"],
+        // Server-rendered style attributes (tooltips' positions) and mail shown in the outbox.
+        'style-src': ["'self'", "'unsafe-inline'"],
+        // A studio LAN serves plain http: upgrading would break every request there.
+        'upgrade-insecure-requests': false,
+      },
+      permissionsPolicy: PERMISSIONS,
+      // 'same-origin', not 'no-referrer': with no-referrer a browser sends `Origin: null` on the app's
+      // own POSTs, which the same-origin check refuses where Sec-Fetch-Site is not sent (plain http).
+      referrerPolicy: 'same-origin',
+      xContentTypeOptions: 'nosniff',
+      xFrameOptions: 'DENY',
+      // Sent by server/middleware/02.transport-security.ts, only when the site URL is https.
+      strictTransportSecurity: false,
+    },
+    nonce: true,
+    sri: true,
+    // Bodies over 2 MB (POST, PUT, DELETE; by Content-Length) are refused as 'too-large' (server/error.ts).
+    requestSizeLimiter: { maxRequestSizeInBytes: REQUEST_MAX_BYTES, maxUploadFileRequestInBytes: REQUEST_MAX_BYTES },
+    // The app keeps its own limits (server/utils/throttle.ts, the socket bucket), its own checks of
+    // what is sent (zod; Vue escapes what is shown) and its own same-origin rule; no CORS at all.
+    rateLimiter: false,
+    xssValidator: false,
+    corsHandler: false,
+    csrf: false,
+    removeLoggers: false,
+  },
+  routeRules: {
+    '/api/**': { headers: { 'Content-Security-Policy': API_CSP, 'Permissions-Policy': PERMISSIONS_HEADER } },
+    ...Object.fromEntries(UPLOADS.map((path) => [path, { security: { requestSizeLimiter: false } }])),
   },
   typescript: { strict: true },
 })

@@ -1,10 +1,14 @@
 // First in Nitro's chain of error handlers (nuxt.config.ts puts it there): a DomainError thrown by
-// any route or service becomes its refusal (server/utils/errors.ts). Anything else goes on to
-// Nuxt's own handler (the error page, or its JSON).
-import { isDomainError } from '../shared/utils/domain-error'
+// any route or service becomes its refusal (server/utils/errors.ts). nuxt-security's request size
+// limiter (nuxt.config.ts, 2 MB) throws h3's 413: it is answered in the same shape. Anything else
+// goes on to Nuxt's own handler (the error page, or its JSON).
+import { DomainError, isDomainError } from '../shared/utils/domain-error'
 import { sendDomainError } from './utils/errors'
+
+const TOO_LARGE = 'The request body is over 2 MB, the most any request may carry; send less (a recipe import can be up to 512 KB, a photo 8 MB).'
 
 export default defineNitroErrorHandler(async (error, event) => {
   const domain = [error, error.cause].find(isDomainError)
   if (domain) await sendDomainError(event, domain)
+  else if (error.statusCode === 413) await sendDomainError(event, new DomainError('too-large', TOO_LARGE))
 })

@@ -24,7 +24,7 @@ export function tempDatabasePath(label = 'test'): string {
  * taken by another test file's outgoing connection between the check and the server's listen
  * (seen once in CI as EADDRINUSE).
  */
-async function serverPort(): Promise<number> {
+export async function serverPort(): Promise<number> {
   for (let i = 0; i < 50; i++) {
     const port = 20000 + Math.floor(Math.random() * 12000)
     if (await checkPort(port, '127.0.0.1')) return port
