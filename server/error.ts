@@ -1,7 +1,9 @@
 // First in Nitro's chain of error handlers (nuxt.config.ts puts it there): a DomainError thrown by
 // any route or service becomes its refusal (server/utils/errors.ts). nuxt-security's request size
 // limiter (nuxt.config.ts, 2 MB) throws h3's 413: it is answered in the same shape. Anything else
-// goes on to Nuxt's own handler (the error page, or its JSON).
+// goes on to Nuxt's own handler (the error page, or its JSON). An address under /api that no route
+// answers (or not for its method) is Nuxt's "Page not found": it is answered as the one shape's 404,
+// so a mangled id gets the same kind of refusal as a missing row.
 import { DomainError, isDomainError } from '../shared/utils/domain-error'
 import { sendDomainError } from './utils/errors'
 
@@ -11,4 +13,8 @@ export default defineNitroErrorHandler(async (error, event) => {
   const domain = [error, error.cause].find(isDomainError)
   if (domain) await sendDomainError(event, domain)
   else if (error.statusCode === 413) await sendDomainError(event, new DomainError('too-large', TOO_LARGE))
+  else if (error.statusCode === 404 && event.path.startsWith('/api/')) {
+    const path = event.path.split('?')[0]!.slice(0, 200)
+    await sendDomainError(event, new DomainError('not-found', `No Hobline address ${path} answers ${event.method}; check the link, or the id in it.`))
+  }
 })

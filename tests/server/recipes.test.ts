@@ -233,10 +233,12 @@ describe('recipes', async () => {
     }
   })
 
-  it('an address under /api that no route answers is a 404 in the one error shape', async () => {
-    const res = await producer.call('POST', '/api/no-such-thing', {})
-    expect(res.status).toBe(404)
-    expect(res.body.data.code).toBe('not-found')
-    expect(res.body.statusMessage).toMatch(/No Hobline address \/api\/no-such-thing/)
+  it('an address under /api that no route answers, or not for its method, is a 404 in the one error shape', async () => {
+    for (const [method, path] of [['POST', '/api/no-such-thing'], ['DELETE', `/api/studios/${studioId}/prices/`], ['DELETE', `/api/studios/${studioId}/prices/%3Fx`]]) {
+      const res = await producer.call(method!, path!, method === 'POST' ? {} : undefined)
+      expect(res.status, path).toBe(404)
+      expect(res.body.data.code).toBe('not-found')
+      expect(res.body.statusMessage).toMatch(/^No Hobline address \/api\//)
+    }
   })
 })
