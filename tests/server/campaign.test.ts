@@ -48,7 +48,8 @@ function json(file: string, method: string, path: (i: Ids) => string, base: (i: 
     file, method,
     payloads: (i) => fc.oneof(
       { arbitrary: jsonBodies(base(i)).filter(refused).map((v) => ({ path: path(i), body: { json: v } as Body })), weight: 8 },
-      { arbitrary: rawBodies.filter((r) => r.type !== 'application/json' || !parsesValid(r.text, refused)).map((r) => ({ path: path(i), body: r as Body })), weight: 2 },
+      // An empty body of any type is read as {} (validate.ts), so it is left out where {} is a valid body.
+      { arbitrary: rawBodies.filter((r) => !((r.type === 'application/json' || !r.text.trim()) && parsesValid(r.text, refused))).map((r) => ({ path: path(i), body: r as Body })), weight: 2 },
     ),
   }
 }
