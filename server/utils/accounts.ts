@@ -52,7 +52,7 @@ export async function signUp(input: { name: string; email: string; password: str
     const user = await createUser(input, transaction)
     const studio = await Studio.create({ name: input.studioName, slug: slugFor(input.studioName) }, { transaction })
     await Membership.create({ userId: user.id, studioId: studio.id, role: 'producer' }, { transaction })
-    return { user: publicUser(user), studioId: studio.id }
+    return { user: publicUser(user), studioId: studio.id, sessionVersion: user.sessionVersion ?? 0 }
   })
 }
 
@@ -67,7 +67,30 @@ export async function checkCredentials(email: string, password: string): Promise
     await verifyPassword(await decoyHash, password)
     return null
   }
-  return (await verifyPassword(user.passwordHash, password)) ? user : null
+  if (!(await verifyPassword(user.passwordHash, password))) return null
+  await rehashIfOld(user, password)
+  return user
+}
+
+/**
+ * A hash made at an older cost (e.g. scrypt N=2^14 before Hobline moved to OWASP's N=2^17) is made
+ * again, at today's cost, while the password is at hand: after a successful check only.
+ */
+export async function rehashIfOld(user: User, password: string, transaction?: Transaction) {
+  if (!passwordNeedsReHash(user.passwordHash)) return
+  user.passwordHash = await hashPassword(password)
+  await user.save({ transaction })
+}
+
+/**
+ * Ends every session of the account but (optionally) the caller's: the version the sessions carry
+ * goes up, and the guard refuses a session whose version is behind. Returns the new version.
+ */
+export async function endSessions(userId: number, transaction?: Transaction): Promise<number> {
+  await useDb()
+  await User.increment('sessionVersion', { where: { id: userId }, transaction })
+  const user = await User.findByPk(userId, { attributes: ['sessionVersion'], transaction })
+  return user?.sessionVersion ?? 0
 }
 
 /**
@@ -84,7 +107,7 @@ export async function startFreshSession(event: H3Event, data: Omit<UserSession, 
 }
 
 export async function startMemberSession(event: H3Event, user: User, studioId?: number) {
-  await startFreshSession(event, { user: publicUser(user), studioId, loggedInAt: Date.now() })
+  await startFreshSession(event, { user: publicUser(user), studioId, sessionVersion: user.sessionVersion ?? 0, loggedInAt: Date.now() })
 }
 
 export async function requestPasswordReset(email: string): Promise<{ user: User; token: string; expiresAt: Date } | null> {
@@ -108,6 +131,8 @@ export async function resetPassword(token: string, password: string) {
     if (!user) throw new DomainError('gone', 'The account for this link no longer exists.')
     assertPasswordAllowed(password, user.email)
     user.passwordHash = await hashPassword(password)
+    // Every session of the account ends: whoever knew the old password is signed out everywhere.
+    user.sessionVersion = (user.sessionVersion ?? 0) + 1
     await user.save({ transaction })
     // This link and every other open link for the account stop working.
     await PasswordReset.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: null }, transaction })

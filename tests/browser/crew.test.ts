@@ -57,7 +57,7 @@ describe.skipIf(!chromiumAvailable())('crew in the browser', async () => {
     await camera.goto(new URL(new URL(link!).pathname, url('/')).toString(), { waitUntil: 'networkidle' })
     await camera.getByText('Larchmere Kitchen').first().waitFor()
     await camera.getByLabel('Your name').fill('Jory Tamsett')
-    await camera.getByLabel('Choose a password').fill('framing the shot')
+    await camera.getByLabel('Password').fill('framing the shot')
     await camera.getByRole('button', { name: 'Join Larchmere Kitchen' }).click()
     await camera.waitForURL(/\/studios\/\d+$/)
     await camera.getByText('Camera', { exact: true }).first().waitFor()

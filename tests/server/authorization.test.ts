@@ -38,6 +38,11 @@ const rows: Row[] = [
   { file: 'auth/signup.post.ts', method: 'POST', path: () => '/api/auth/signup', body: () => ({ name: 'N', email: demo.producer, password: 'long enough password', studioName: 'S' }), expect: all(409) },
   { file: 'auth/login.post.ts', method: 'POST', path: () => '/api/auth/login', body: () => ({ email: uniqueEmail('nobody'), password: 'wrong password' }), expect: all(401) },
   { file: 'auth/logout.post.ts', method: 'POST', path: () => '/api/auth/logout', expect: all(204) },
+  // A member ends their other sessions; a device has no account to end them for.
+  {
+    file: 'auth/logout-everywhere.post.ts', method: 'POST', path: () => '/api/auth/logout-everywhere',
+    expect: { anon: 401, producer: 200, host: 200, camera: 200, viewer: 200, outsider: 200, hostDevice: 401, cameraDevice: 401 },
+  },
   { file: 'auth/password-reset/index.post.ts', method: 'POST', path: () => '/api/auth/password-reset', body: () => ({ email: uniqueEmail('matrix') }), expect: all(202) },
   { file: 'auth/password-reset/[token].post.ts', method: 'POST', path: () => '/api/auth/password-reset/not-a-token', body: () => ({ password: 'long enough password' }), expect: all(410) },
   { file: 'me.get.ts', method: 'GET', path: () => '/api/me', expect: { ...all(200), anon: 401 } },
@@ -138,12 +143,16 @@ describe('authorisation matrix', async () => {
       hostDevice: () => device('host'),
       cameraDevice: () => device('camera'),
     })
-    // One socket per kind of caller for the socket matrix; devices joined to its own shoot.
-    for (const name of CALLERS) {
-      const client = name === 'hostDevice' ? await device('host', ids.socketShoot) : name === 'cameraDevice' ? await device('camera', ids.socketShoot) : await callers[name]()
-      sockets[name] = await connect(client.cookie ? client : null)
+    connectSockets = async () => {
+      for (const name of CALLERS) {
+        const client = name === 'hostDevice' ? await device('host', ids.socketShoot) : name === 'cameraDevice' ? await device('camera', ids.socketShoot) : await callers[name]()
+        sockets[name] = await connect(client.cookie ? client : null)
+      }
     }
   })
+  // One socket per kind of caller for the socket matrix; devices joined to its own shoot. Connected
+  // when the socket rows start: the route rows end sessions ("sign out everywhere") on the way.
+  let connectSockets = async () => {}
   const sockets = {} as Record<CallerName, TestSocket>
   afterAll(() => Object.values(sockets).forEach((s) => s.disconnect()))
 
@@ -181,6 +190,7 @@ describe('authorisation matrix', async () => {
   })
 
   describe('socket commands', () => {
+    beforeAll(() => connectSockets())
     // A valid command of every type, so a caller that gets past the guard and the role table meets
     // the shoot's state (ok, or a refusal such as 'not-started'), never 'invalid'. Typed by the
     // command types: a new command without a sample does not compile, and fails the check below.

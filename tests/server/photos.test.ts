@@ -361,6 +361,7 @@ describe('photos in an S3-compatible bucket', () => {
         NUXT_DATABASE_PATH: tempDatabasePath('photos-s3'),
         NUXT_DATABASE_SEED: 'always',
         NUXT_SESSION_PASSWORD: 'test-session-password-of-at-least-32-characters',
+        NUXT_PUBLIC_SITE_URL: `http://127.0.0.1:${port}`,
         NUXT_PHOTOS_DIR: join(tmpdir(), 'hobline-photos-never-used'),
         NUXT_PHOTOS_S3_ENDPOINT: `http://127.0.0.1:${bucketPort}`,
         NUXT_PHOTOS_S3_BUCKET: 'brackenford-photos',

@@ -37,11 +37,12 @@ export async function useBuiltApp(options: AppOptions = {}): Promise<{ databaseP
   const databasePath = tempDatabasePath()
   // nuxt-auth-utils refuses to seal sessions without a 32+ character password.
   process.env.NUXT_SESSION_PASSWORD ||= 'test-session-password-of-at-least-32-characters'
+  const port = await serverPort()
   await setup({
     rootDir,
     build: false,
     server: true,
-    port: await serverPort(),
+    port,
     browser: options.browser ?? false,
     browserOptions: { type: 'chromium', launch: chromiumLaunchOptions() },
     nuxtConfig: { nitro: { output: { dir: resolve(rootDir, '.output') } } },
@@ -49,6 +50,12 @@ export async function useBuiltApp(options: AppOptions = {}): Promise<{ databaseP
     env: {
       NUXT_DATABASE_PATH: databasePath,
       NUXT_DATABASE_SEED: options.seed ?? 'always',
+      // The built server refuses to start without its public address (server/plugins/00.site-url.ts).
+      NUXT_PUBLIC_SITE_URL: `http://127.0.0.1:${port}`,
+      // Every test client comes from 127.0.0.1: the per-address limits on new accounts and reset
+      // requests are set high here, and tested at their size in throttle.test.ts.
+      NUXT_AUTH_SIGNUP_PER_ADDRESS: '10000',
+      NUXT_AUTH_RESET_PER_ADDRESS: '10000',
       ...options.env,
     },
   })
