@@ -38,18 +38,29 @@ export function slugFor(name: string): string {
   return `${base}-${Math.random().toString(36).slice(2, 8)}`
 }
 
-export async function createUser(input: { name: string; email: string; password: string }, transaction: Transaction): Promise<User> {
-  assertPasswordAllowed(input.password, input.email)
+/**
+ * A new account, in the caller's transaction. The password is hashed BEFORE the transaction
+ * (`newPasswordHash`): at OWASP's scrypt cost a hash takes about half a second, and a transaction
+ * holds the one write queue every live shoot shares.
+ */
+export async function createUser(input: { name: string; email: string; passwordHash: string }, transaction: Transaction): Promise<User> {
   if (await User.findOne({ where: { email: input.email }, transaction })) {
     throw new DomainError('conflict', 'email: An account with this e-mail address already exists. Sign in instead, or reset the password.', { field: 'email' })
   }
-  return User.create({ name: input.name, email: input.email, passwordHash: await hashPassword(input.password) }, { transaction })
+  return User.create({ name: input.name, email: input.email, passwordHash: input.passwordHash }, { transaction })
+}
+
+/** The hash of a new password, once the password policy allows it. */
+export async function newPasswordHash(password: string, email: string): Promise<string> {
+  assertPasswordAllowed(password, email)
+  return hashPassword(password)
 }
 
 export async function signUp(input: { name: string; email: string; password: string; studioName: string }) {
   const sequelize = await useDb()
+  const passwordHash = await newPasswordHash(input.password, input.email)
   return sequelize.transaction(async (transaction) => {
-    const user = await createUser(input, transaction)
+    const user = await createUser({ name: input.name, email: input.email, passwordHash }, transaction)
     const studio = await Studio.create({ name: input.studioName, slug: slugFor(input.studioName) }, { transaction })
     await Membership.create({ userId: user.id, studioId: studio.id, role: 'producer' }, { transaction })
     return { user: publicUser(user), studioId: studio.id, sessionVersion: user.sessionVersion ?? 0 }
@@ -122,15 +133,21 @@ export async function requestPasswordReset(email: string): Promise<{ user: User;
 
 export async function resetPassword(token: string, password: string) {
   const sequelize = await useDb()
-  return sequelize.transaction(async (transaction) => {
-    const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) }, transaction })
+  const openReset = async () => {
+    const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) } })
     if (!reset || reset.usedAt || reset.expiresAt.getTime() < Date.now()) {
       throw new DomainError('gone', 'This reset link has expired or was already used. Ask for a new one from the sign-in page.')
     }
-    const user = await User.findByPk(reset.userId, { transaction })
+    const user = await User.findByPk(reset.userId)
     if (!user) throw new DomainError('gone', 'The account for this link no longer exists.')
-    assertPasswordAllowed(password, user.email)
-    user.passwordHash = await hashPassword(password)
+    return { reset, user }
+  }
+  // Hashed outside the transaction (see createUser); the link is checked again inside it.
+  const { user: before } = await openReset()
+  const passwordHash = await newPasswordHash(password, before.email)
+  return sequelize.transaction(async (transaction) => {
+    const { user } = await openReset()
+    user.passwordHash = passwordHash
     // Every session of the account ends: whoever knew the old password is signed out everywhere.
     user.sessionVersion = (user.sessionVersion ?? 0) + 1
     await user.save({ transaction })

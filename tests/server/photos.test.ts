@@ -382,8 +382,17 @@ describe('photos in an S3-compatible bucket', () => {
     throw new Error(`the built app with an S3 bucket never became healthy:\n${appLog}`)
   }, 120_000)
 
+  // The app must be gone before the bucket closes: a bucket's close() waits for every open
+  // connection, and the app's keep-alive connections to it would hold the test file open.
   afterAll(async () => {
-    app?.kill('SIGTERM')
+    if (app && app.exitCode === null && app.signalCode === null) {
+      const exited = new Promise((r) => app!.once('exit', r))
+      app.kill('SIGTERM')
+      const timer = setTimeout(() => app!.kill('SIGKILL'), 10_000)
+      await exited
+      clearTimeout(timer)
+    }
+    bucket?.closeAllConnections()
     await new Promise((r) => bucket?.close(r))
   })
 
