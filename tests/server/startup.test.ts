@@ -34,7 +34,7 @@ describe('start-up rules of the built server', () => {
       const health = await waitForHealth(app, (_status, body) => body.status === 'failed')
       expect(health.status).toBe(503)
       expect(health.body).toEqual({ status: 'failed', database: { file: 'hobline.sqlite' }, message: 'The database did not start. The reason is in the server log.' })
-      expect(app.log()).toMatch(/\[hobline\] database failed to start:.*(ENOTDIR|SQLITE_CANTOPEN)/s)
+      expect(app.log()).toMatch(/\[hobline\] database failed to start: Error: (EEXIST|ENOTDIR|SQLITE_CANTOPEN)/)
     } finally {
       await app.stop()
     }
