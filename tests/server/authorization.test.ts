@@ -132,14 +132,20 @@ describe('authorisation matrix', async () => {
       await client.post('/api/join', { code: body.code })
       return client
     }
-    // Each call gets a fresh caller, so a route that ends a session cannot change the next row.
+    // Members are signed in once and kept until a row ends sessions (ENDS_SESSIONS): a sign-in is a
+    // scrypt check at OWASP's cost, about half a second. Devices join afresh for every call, so a
+    // row that revokes a join code cannot change the next row.
+    const member = (name: CallerName, email: string, password?: string) => () => {
+      if (!signedInMembers.has(name)) signedInMembers.set(name, signedIn(email, password))
+      return signedInMembers.get(name)!
+    }
     Object.assign(callers, {
       anon: async () => new Client(),
-      producer: () => signedIn(demo.producer),
-      host: () => signedIn(demo.host),
-      camera: () => signedIn(demo.camera),
-      viewer: () => signedIn(demo.viewer),
-      outsider: () => signedIn(outsiderEmail, 'some other studio'),
+      producer: member('producer', demo.producer),
+      host: member('host', demo.host),
+      camera: member('camera', demo.camera),
+      viewer: member('viewer', demo.viewer),
+      outsider: member('outsider', outsiderEmail, 'some other studio'),
       hostDevice: () => device('host'),
       cameraDevice: () => device('camera'),
     })
@@ -150,9 +156,15 @@ describe('authorisation matrix', async () => {
       }
     }
   })
+  const signedInMembers = new Map<CallerName, Promise<Client>>()
+  /** Routes after which the kept member sessions are no longer good (signed out, or every session ended). */
+  const ENDS_SESSIONS = new Set(['auth/logout.post.ts', 'auth/logout-everywhere.post.ts', '(nuxt-auth-utils) DELETE /api/_auth/session'])
   // One socket per kind of caller for the socket matrix; devices joined to its own shoot. Connected
-  // when the socket rows start: the route rows end sessions ("sign out everywhere") on the way.
+  // when the first socket row runs (the test context exists inside tests only), after the route rows
+  // have ended sessions on the way.
   let connectSockets = async () => {}
+  let socketsReady: Promise<void> | undefined
+  const ready = () => (socketsReady ??= connectSockets())
   const sockets = {} as Record<CallerName, TestSocket>
   afterAll(() => Object.values(sockets).forEach((s) => s.disconnect()))
 
@@ -163,6 +175,7 @@ describe('authorisation matrix', async () => {
         const client = await callers[name]()
         const body = row.body?.(ids)
         got[name] = (await client.call(row.method, row.path(ids), body ?? (row.method === 'GET' || row.method === 'DELETE' ? undefined : {}))).status
+        if (ENDS_SESSIONS.has(row.file)) signedInMembers.delete(name)
       }
       expect(got).toEqual(row.expect)
     })
@@ -179,7 +192,8 @@ describe('authorisation matrix', async () => {
     const got: Record<string, string> = {}
     const want: Record<string, string> = {}
     for (const row of [...rows, ...moduleRoutes].filter((r) => r.method !== 'GET')) {
-      const producer = await signedIn(demo.producer)
+      // Refused before any route runs, so one sign-in serves every row.
+      const producer = await callers.producer()
       const res = await producer.call(row.method, row.path(ids), 'name=value', {
         'content-type': 'application/x-www-form-urlencoded', 'origin': 'https://elsewhere.example', 'sec-fetch-site': 'cross-site',
       })
@@ -190,7 +204,6 @@ describe('authorisation matrix', async () => {
   })
 
   describe('socket commands', () => {
-    beforeAll(() => connectSockets())
     // A valid command of every type, so a caller that gets past the guard and the role table meets
     // the shoot's state (ok, or a refusal such as 'not-started'), never 'invalid'. Typed by the
     // command types: a new command without a sample does not compile, and fails the check below.
@@ -226,6 +239,7 @@ describe('authorisation matrix', async () => {
 
     for (const type of SHOOT_COMMAND_TYPES) {
       it(`${type}: ${SHOOT_COMMAND_ROLES[type].join(', ')}`, async () => {
+        await ready()
         const want = {} as Record<CallerName, string>
         const got = {} as Record<CallerName, string>
         for (const name of CALLERS) {

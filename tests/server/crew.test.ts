@@ -120,7 +120,9 @@ describe('crew and invites', async () => {
     // The change takes effect on the next request: a viewer may not manage the crew.
     expect((await owner.get(`/api/studios/${studioId}/invites`)).status).toBe(403)
     expect((await guest.delete(`/api/studios/${studioId}/members/${selfId}`)).status).toBe(204)
-    expect((await owner.get(`/api/studios/${studioId}/members`)).status).toBe(404)
+    // Removal ends every session of the removed person at once (session version); signed in again, the studio is not theirs.
+    expect((await owner.get(`/api/studios/${studioId}/members`)).status).toBe(401)
+    expect((await (await signedIn(email, 'only one producer')).get(`/api/studios/${studioId}/members`)).status).toBe(404)
     expect((await guest.get(`/api/studios/${studioId}/members`)).body.members.map((m: { userId: number }) => m.userId)).toEqual([partnerId])
   })
 })
