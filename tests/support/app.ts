@@ -2,9 +2,10 @@
 import { mkdtempSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join, resolve } from 'node:path'
-import { $fetch, setup } from '@nuxt/test-utils/e2e'
+import type { ChildProcess } from 'node:child_process'
+import { $fetch, setup, useTestContext } from '@nuxt/test-utils/e2e'
 import { checkPort } from 'get-port-please'
-import { beforeAll } from 'vitest'
+import { afterEach, beforeAll } from 'vitest'
 import { chromiumLaunchOptions } from './chromium'
 
 export const rootDir = resolve(import.meta.dirname, '../..')
@@ -67,6 +68,15 @@ export async function useBuiltApp(options: AppOptions = {}): Promise<{ databaseP
       await new Promise((r) => setTimeout(r, 50))
     }
     throw new Error('the built app never reported a healthy database')
+  })
+  // A server under test that died is named, with its exit and last log lines, instead of leaving
+  // the next test to fail with "connection refused".
+  afterEach(() => {
+    const ctx = useTestContext()
+    const child = (ctx.serverProcess as unknown as { process?: ChildProcess } | undefined)?.process
+    if (child && (child.exitCode !== null || child.signalCode !== null)) {
+      throw new Error(`the built app under test exited (${child.exitCode ?? child.signalCode}); its last log lines:\n${ctx.serverLogs.slice(-40).join('\n')}`)
+    }
   })
   return { databasePath }
 }
