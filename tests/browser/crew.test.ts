@@ -38,6 +38,9 @@ describe.skipIf(!chromiumAvailable())('crew in the browser', async () => {
     await producer.getByTestId(`invite-${cameraEmail}`).waitFor()
     expect(await axeViolations(producer)).toEqual([])
     await screenshot(producer, 'crew')
+    // "Your sessions": ending every other session keeps this one signed in (the outbox below still opens).
+    await producer.getByRole('button', { name: 'Sign out everywhere else' }).click()
+    await producer.getByRole('status').filter({ hasText: 'Signed out on every other browser and device. This one stays signed in.' }).waitFor()
 
     await producer.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Outbox' }).click()
     await producer.waitForURL(/\/outbox/)
