@@ -1,5 +1,6 @@
 // Hobline: the run-of-show for cooking on camera.
 import { fileURLToPath } from 'node:url'
+import { SCRYPT_OPTIONS } from './server/db/scrypt-cost'
 import { bundleWorker } from './server/workers/bundle'
 
 // Security headers (nuxt-security; DEVELOPERS.md, "Security headers", is the policy in words and
@@ -23,6 +24,8 @@ export default defineNuxtConfig({
   telemetry: false,
   modules: ['@nuxt/eslint', '@nuxtjs/tailwindcss', '@pinia/nuxt', '@vueuse/nuxt', 'nuxt-auth-utils', 'nuxt-security'],
   css: ['~/assets/css/main.css'],
+  // nuxt-auth-utils hashes with scrypt at OWASP's cost (server/db/scrypt-cost.ts).
+  auth: { hash: { scrypt: { ...SCRYPT_OPTIONS } } },
   tailwindcss: { cssPath: false, configPath: 'tailwind.config.ts' },
   app: {
     head: {
@@ -55,12 +58,17 @@ export default defineNuxtConfig({
       catcherPort: 0,
     },
     auth: {
-      // NUXT_AUTH_THROTTLE_WINDOW_SECONDS and limits for sign-in and join-code attempts.
+      // NUXT_AUTH_THROTTLE_WINDOW_SECONDS and the attempts allowed in it (NUXT_AUTH_LOGIN_PER_EMAIL, …): server/utils/throttle.ts.
       throttleWindowSeconds: 900,
       loginPerEmail: 5,
       loginPerAddress: 30,
       joinPerAddress: 10,
+      resetPerEmail: 3,
+      resetPerAddress: 10,
+      signupPerAddress: 10,
     },
+    // NUXT_TRUSTED_PROXIES: comma-separated proxy addresses whose X-Forwarded-For is believed. Empty: none.
+    trustedProxies: '',
     photos: {
       // NUXT_PHOTOS_DIR: folder of the photo store when no S3 bucket is configured.
       dir: '.data/photos',
@@ -70,7 +78,8 @@ export default defineNuxtConfig({
     },
     public: {
       appName: 'Hobline',
-      // NUXT_PUBLIC_SITE_URL: absolute base for links in e-mails; empty means the request's own origin.
+      // NUXT_PUBLIC_SITE_URL: absolute base for links in e-mails. Required by the built server (it will not start
+      // without it); in `nuxt dev` empty means the request's own origin.
       siteUrl: '',
     },
   },

@@ -16,7 +16,7 @@ export async function startBuiltApp(): Promise<{ url: string; databasePath: stri
   const port = await getRandomPort('127.0.0.1')
   const child: ChildProcess = spawn(process.execPath, [resolve(rootDir, '.output/server/index.mjs')], {
     env: {
-      ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATABASE_PATH: databasePath, NUXT_DATABASE_SEED: 'always',
+      ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATABASE_PATH: databasePath, NUXT_DATABASE_SEED: 'always', NUXT_PUBLIC_SITE_URL: `http://127.0.0.1:${port}`,
       NUXT_SESSION_PASSWORD: 'bench-session-password-of-at-least-32-characters', NUXT_PHOTOS_DIR: join(databasePath, '..', 'photos'),
       // The shoot benchmarks send commands back to back on one socket to measure the server, not the
       // per-socket limit a screen has (server/utils/socket-session.ts).

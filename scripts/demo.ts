@@ -18,6 +18,7 @@ mkdirSync('.data', { recursive: true })
 const secretFile = '.data/session-password'
 if (!existsSync(secretFile)) writeFileSync(secretFile, randomBytes(32).toString('hex'), { mode: 0o600 })
 
+const url = `http://${host === '0.0.0.0' ? 'localhost' : host}:${port}`
 const server = spawn('node', ['.output/server/index.mjs'], {
   stdio: 'inherit',
   env: {
@@ -27,12 +28,13 @@ const server = spawn('node', ['.output/server/index.mjs'], {
     NUXT_DATABASE_PATH: databasePath,
     NUXT_DATABASE_SEED: 'always',
     NUXT_SESSION_PASSWORD: process.env.NUXT_SESSION_PASSWORD || readFileSync(secretFile, 'utf8'),
+    // The built server needs its public address (links in mail); the demo's own unless one is given.
+    NUXT_PUBLIC_SITE_URL: process.env.NUXT_PUBLIC_SITE_URL || url,
   },
 })
 for (const signal of ['SIGINT', 'SIGTERM'] as const) process.on(signal, () => server.kill(signal))
 server.on('exit', (code) => process.exit(code ?? 0))
 
-const url = `http://${host === '0.0.0.0' ? 'localhost' : host}:${port}`
 for (let i = 0; i < 120; i++) {
   const health = await fetch(`${url}/api/health`).then((r) => r.json()).catch(() => null)
   if (health?.status === 'ok') {

@@ -1,6 +1,6 @@
 // The caller: a member with their studios, or a device with its one shoot.
 export default defineEventHandler(async (event) => {
-  const session = await getUserSession(event)
+  const session = await currentSession(event)
   if (session.device) return { user: null, memberships: [], device: session.device, studioId: session.device.studioId }
   const user = await requireMember(event)
   await useDb()

@@ -38,21 +38,32 @@ export function slugFor(name: string): string {
   return `${base}-${Math.random().toString(36).slice(2, 8)}`
 }
 
-export async function createUser(input: { name: string; email: string; password: string }, transaction: Transaction): Promise<User> {
-  assertPasswordAllowed(input.password, input.email)
+/**
+ * A new account, in the caller's transaction. The password is hashed BEFORE the transaction
+ * (`newPasswordHash`): at OWASP's scrypt cost a hash takes about half a second, and a transaction
+ * holds the one write queue every live shoot shares.
+ */
+export async function createUser(input: { name: string; email: string; passwordHash: string }, transaction: Transaction): Promise<User> {
   if (await User.findOne({ where: { email: input.email }, transaction })) {
     throw new DomainError('conflict', 'email: An account with this e-mail address already exists. Sign in instead, or reset the password.', { field: 'email' })
   }
-  return User.create({ name: input.name, email: input.email, passwordHash: await hashPassword(input.password) }, { transaction })
+  return User.create({ name: input.name, email: input.email, passwordHash: input.passwordHash }, { transaction })
+}
+
+/** The hash of a new password, once the password policy allows it. */
+export async function newPasswordHash(password: string, email: string): Promise<string> {
+  assertPasswordAllowed(password, email)
+  return hashPassword(password)
 }
 
 export async function signUp(input: { name: string; email: string; password: string; studioName: string }) {
   const sequelize = await useDb()
+  const passwordHash = await newPasswordHash(input.password, input.email)
   return sequelize.transaction(async (transaction) => {
-    const user = await createUser(input, transaction)
+    const user = await createUser({ name: input.name, email: input.email, passwordHash }, transaction)
     const studio = await Studio.create({ name: input.studioName, slug: slugFor(input.studioName) }, { transaction })
     await Membership.create({ userId: user.id, studioId: studio.id, role: 'producer' }, { transaction })
-    return { user: publicUser(user), studioId: studio.id }
+    return { user: publicUser(user), studioId: studio.id, sessionVersion: user.sessionVersion ?? 0 }
   })
 }
 
@@ -67,7 +78,30 @@ export async function checkCredentials(email: string, password: string): Promise
     await verifyPassword(await decoyHash, password)
     return null
   }
-  return (await verifyPassword(user.passwordHash, password)) ? user : null
+  if (!(await verifyPassword(user.passwordHash, password))) return null
+  await rehashIfOld(user, password)
+  return user
+}
+
+/**
+ * A hash made at an older cost (e.g. scrypt N=2^14 before Hobline moved to OWASP's N=2^17) is made
+ * again, at today's cost, while the password is at hand: after a successful check only.
+ */
+export async function rehashIfOld(user: User, password: string, transaction?: Transaction) {
+  if (!passwordNeedsReHash(user.passwordHash)) return
+  user.passwordHash = await hashPassword(password)
+  await user.save({ transaction })
+}
+
+/**
+ * Ends every session of the account but (optionally) the caller's: the version the sessions carry
+ * goes up, and the guard refuses a session whose version is behind. Returns the new version.
+ */
+export async function endSessions(userId: number, transaction?: Transaction): Promise<number> {
+  await useDb()
+  await User.increment('sessionVersion', { where: { id: userId }, transaction })
+  const user = await User.findByPk(userId, { attributes: ['sessionVersion'], transaction })
+  return user?.sessionVersion ?? 0
 }
 
 /**
@@ -84,7 +118,7 @@ export async function startFreshSession(event: H3Event, data: Omit<UserSession, 
 }
 
 export async function startMemberSession(event: H3Event, user: User, studioId?: number) {
-  await startFreshSession(event, { user: publicUser(user), studioId, loggedInAt: Date.now() })
+  await startFreshSession(event, { user: publicUser(user), studioId, sessionVersion: user.sessionVersion ?? 0, loggedInAt: Date.now() })
 }
 
 export async function requestPasswordReset(email: string): Promise<{ user: User; token: string; expiresAt: Date } | null> {
@@ -99,15 +133,23 @@ export async function requestPasswordReset(email: string): Promise<{ user: User;
 
 export async function resetPassword(token: string, password: string) {
   const sequelize = await useDb()
-  return sequelize.transaction(async (transaction) => {
-    const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) }, transaction })
+  const openReset = async () => {
+    const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) } })
     if (!reset || reset.usedAt || reset.expiresAt.getTime() < Date.now()) {
       throw new DomainError('gone', 'This reset link has expired or was already used. Ask for a new one from the sign-in page.')
     }
-    const user = await User.findByPk(reset.userId, { transaction })
+    const user = await User.findByPk(reset.userId)
     if (!user) throw new DomainError('gone', 'The account for this link no longer exists.')
-    assertPasswordAllowed(password, user.email)
-    user.passwordHash = await hashPassword(password)
+    return { reset, user }
+  }
+  // Hashed outside the transaction (see createUser); the link is checked again inside it.
+  const { user: before } = await openReset()
+  const passwordHash = await newPasswordHash(password, before.email)
+  return sequelize.transaction(async (transaction) => {
+    const { user } = await openReset()
+    user.passwordHash = passwordHash
+    // Every session of the account ends: whoever knew the old password is signed out everywhere.
+    user.sessionVersion = (user.sessionVersion ?? 0) + 1
     await user.save({ transaction })
     // This link and every other open link for the account stop working.
     await PasswordReset.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: null }, transaction })

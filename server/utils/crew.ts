@@ -45,6 +45,8 @@ export async function removeMember(studioId: number, userId: number) {
       throw new DomainError('conflict', 'A studio needs at least one producer. Make someone else a producer before removing this one.')
     }
     await membership.destroy()
+    // Every session of the removed person ends at its next request (the guard compares versions).
+    await User.increment('sessionVersion', { where: { id: userId } })
   })
 }
 
@@ -121,29 +123,42 @@ async function openInvite(token: string) {
   return invite as Invite & { studio: Studio }
 }
 
+// The preview does not say whether the address has an account: the page asks for a name and a
+// password either way, and an existing account keeps its own name.
 export async function describeInvite(token: string) {
   const invite = await openInvite(token)
-  const hasAccount = !!(await User.findOne({ where: { email: invite.email }, attributes: ['id'] }))
-  return { studioName: invite.studio.name, role: invite.role, email: invite.email, expiresAt: invite.expiresAt, hasAccount }
+  return { studioName: invite.studio.name, role: invite.role, email: invite.email, expiresAt: invite.expiresAt }
+}
+
+/** The address an open invite was sent to (the sign-in limit of that address covers accepting it). */
+export async function invitedEmail(token: string): Promise<string> {
+  return (await openInvite(token)).email
 }
 
 export async function acceptInvite(token: string, input: { name?: string; password: string }) {
   const sequelize = await useDb()
-  return sequelize.transaction(async (transaction) => {
-    const invite = await openInvite(token)
-    let user = await User.findOne({ where: { email: invite.email }, transaction })
-    if (user) {
-      if (!(await verifyPassword(user.passwordHash, input.password))) {
-        throw new DomainError('signed-out', `password: That is not the password of the existing account for ${invite.email}.`, { field: 'password' })
-      }
-    } else {
-      if (!input.name) throw new DomainError('invalid', 'name: Enter your name for the new account.', { field: 'name' })
-      user = await createUser({ name: input.name, email: invite.email, password: input.password }, transaction)
+  const invite = await openInvite(token)
+  // Asked of everyone, account or not, so the answer does not tell which.
+  if (!input.name) throw new DomainError('invalid', 'name: Enter your name (an existing account keeps the name it has).', { field: 'name' })
+  // The password is checked or hashed before the transaction: a scrypt run takes about half a
+  // second, and a transaction holds the one write queue every live shoot shares.
+  const existing = await User.findOne({ where: { email: invite.email } })
+  let passwordHash = ''
+  if (existing) {
+    if (!(await verifyPassword(existing.passwordHash, input.password))) {
+      throw new DomainError('signed-out', `password: This password was not accepted for ${invite.email}. If the address already has a Hobline account, enter that account's password, or reset it from the sign-in page.`, { field: 'password' })
     }
-    const already = await Membership.findOne({ where: { userId: user.id, studioId: invite.studioId }, transaction })
-    if (!already) await Membership.create({ userId: user.id, studioId: invite.studioId, role: invite.role }, { transaction })
-    invite.acceptedAt = new Date()
-    await invite.save({ transaction })
-    return { user, studioId: invite.studioId }
+    await rehashIfOld(existing, input.password)
+  } else {
+    passwordHash = await newPasswordHash(input.password, invite.email)
+  }
+  return sequelize.transaction(async (transaction) => {
+    const open = await openInvite(token)
+    const user = existing ?? await createUser({ name: input.name!, email: open.email, passwordHash }, transaction)
+    const already = await Membership.findOne({ where: { userId: user.id, studioId: open.studioId }, transaction })
+    if (!already) await Membership.create({ userId: user.id, studioId: open.studioId, role: open.role }, { transaction })
+    open.acceptedAt = new Date()
+    await open.save({ transaction })
+    return { user, studioId: open.studioId }
   })
 }

@@ -1,10 +1,12 @@
 // The one guard: who is asking, and may they do this in this studio (or on this shoot)?
 // Every route calls it first; the socket handshake and every socket command use `authorizeSession`.
 // The membership is read from the database on every call, so a changed or removed role takes
-// effect at once, without waiting for the session cookie to expire.
+// effect at once, without waiting for the session cookie to expire. So is the account's session
+// version: a member session made before the account's last "sign out everywhere", password reset
+// or removal from a studio is refused (401), and over HTTP its cookie is cleared.
 import type { H3Event } from 'h3'
 import type { User, UserSession } from '#auth-utils'
-import { JoinCode, Membership } from '../db/models'
+import { JoinCode, Membership, User as Account } from '../db/models'
 import { DomainError } from '../../shared/utils/domain-error'
 import { deviceCan, roleCan, type DeviceRole, type StudioAction, type StudioRole } from '../../shared/utils/roles'
 
@@ -31,9 +33,30 @@ const ACTION_WORDS: Record<StudioAction, string> = {
   'joincode.manage': 'make join codes',
 }
 
-/** The decision itself, without an HTTP event: shared by routes and sockets. */
-export async function authorizeSession(session: UserSession, target: Target, action: StudioAction): Promise<Caller> {
+const SESSION_ENDED_MESSAGE = 'This session was ended (signed out everywhere, a new password, or removed from a studio). Sign in again.'
+
+/** Whether a member session still holds: it carries the account's current session version. */
+export async function sessionIsCurrent(session: UserSession): Promise<boolean> {
+  if (!session.user) return true
   await useDb()
+  const account = await Account.findByPk(session.user.id, { attributes: ['sessionVersion'] })
+  return !!account && account.sessionVersion === (session.sessionVersion ?? 0)
+}
+
+/** The request's session; an ended member session is cleared (its cookie too) and answered 401. */
+export async function currentSession(event: H3Event): Promise<UserSession> {
+  const session = await getUserSession(event)
+  if (!(await sessionIsCurrent(session))) {
+    await clearUserSession(event)
+    throw new DomainError('signed-out', SESSION_ENDED_MESSAGE)
+  }
+  return session
+}
+
+/** The decision itself, without an HTTP event: shared by routes and sockets. */
+export async function authorizeSession(session: UserSession, target: Target, action: StudioAction, versionChecked = false): Promise<Caller> {
+  await useDb()
+  if (!versionChecked && !(await sessionIsCurrent(session))) throw new DomainError('signed-out', SESSION_ENDED_MESSAGE)
   let studioId: number
   let shootId: number | undefined
   if ('shootId' in target) {
@@ -75,13 +98,13 @@ export async function authorizeSession(session: UserSession, target: Target, act
 
 /** 401 unless a member (not a device) is signed in. */
 export async function requireMember(event: H3Event): Promise<User> {
-  const session = await getUserSession(event)
+  const session = await currentSession(event)
   if (!session.user) throw new DomainError('signed-out', 'Sign in first.')
   return session.user
 }
 
 export async function authorize(event: H3Event, target: Target, action: StudioAction): Promise<Caller> {
-  return authorizeSession(await getUserSession(event), target, action)
+  return authorizeSession(await currentSession(event), target, action, true)
 }
 
 /** For routes under /api/studios/:studioId/…: a member of that studio whose role allows `action`. */

@@ -87,7 +87,7 @@ export async function readPhotoUpload(event: H3Event, field = 'photo'): Promise<
   return part.data
 }
 
-// ---- sharp: loaded once, on first use; without it photos are kept as sent -----------------------
+// ---- sharp: loaded once, on first use; without it photos are refused, never kept as sent -----------
 
 type SharpFactory = (input?: Buffer, options?: SharpOptions) => Sharp
 let sharpLoading: Promise<SharpFactory | null> | undefined
@@ -96,7 +96,7 @@ function loadSharp(): Promise<SharpFactory | null> {
   sharpLoading ??= import('sharp').then(
     (m) => (m.default ?? m) as unknown as SharpFactory,
     (error: Error) => {
-      console.warn(`[hobline] sharp could not load (${error.message.split('\n')[0]}): photos are stored as uploaded, camera metadata included, and serve as their own thumbnails`)
+      console.error(`[hobline] sharp could not load (${error.message.split('\n')[0]}): photo uploads are refused until it does`)
       return null
     },
   )
@@ -118,7 +118,11 @@ export async function preparePhoto(bytes: Buffer): Promise<PhotoVersions> {
   const type = sniffPhotoType(bytes)
   if (!type) throw notAPhoto('this file is not an image Hobline takes (it is checked by its contents, not its name).')
   const sharp = await loadSharp()
-  if (!sharp) return { type, original: bytes, thumb: null }
+  // Without the image library the camera's metadata (GPS included) could not be removed: refuse, store nothing.
+  if (!sharp) {
+    throw new DomainError('unavailable', 'Photos cannot be taken right now: the server\'s image library did not load. Nothing was stored; '
+      + 'ask whoever runs this Hobline server to reinstall it (npm install), then upload the photo again.')
+  }
   // The header is read first (no pixels decoded), so an oversized image gets a message, not a crash.
   let width = 0
   let height = 0

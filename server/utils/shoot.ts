@@ -38,7 +38,7 @@ export function useShoot() {
 
 /** The connection of one HTTP request: its session, no room. */
 export async function httpConnection(event: H3Event): Promise<ShootConnection> {
-  return { id: 'http', session: await getUserSession(event) }
+  return { id: 'http', session: await currentSession(event) }
 }
 
 /** A handler's answer over HTTP: its value, or its refusal thrown for the error handler to send. */

@@ -1,6 +1,6 @@
 // The session behind a socket.io connection: the same sealed nuxt-auth-utils cookie the HTTP routes
 // read, unsealed from the handshake's Cookie header with h3's own session unsealer; and the limit on
-// how fast one socket may send.
+// how fast one socket may send. A member session whose account ended it reads as signed out.
 import { parse as parseCookies } from 'cookie-es'
 import { unsealSession } from 'h3'
 import type { UserSession } from '#auth-utils'
@@ -14,7 +14,10 @@ export async function sessionFromCookieHeader(header: string | undefined): Promi
   const password = process.env.NUXT_SESSION_PASSWORD || config.session.password
   try {
     const unsealed = await unsealSession(null as never, { ...config.session, password } as never, sealed)
-    return { ...(unsealed.data as object), id: String(unsealed.id ?? '') } as UserSession
+    const session = { ...(unsealed.data as object), id: String(unsealed.id ?? '') } as UserSession
+    // A member session ended by its account (its session version is behind) counts as signed out;
+    // every later command is checked again by the guard.
+    return (await sessionIsCurrent(session)) ? session : { id: '' }
   } catch {
     // A cookie that is forged, from another secret or expired counts as signed out.
     return { id: '' }

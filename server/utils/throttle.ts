@@ -1,49 +1,102 @@
-// Fixed-window attempt counters for sign-in and join codes, kept in the server process (one box;
-// a scaled-out deployment would move them to the shared store). A tripped limit is a 429 that says
-// when to try again, with a Retry-After header.
+// Attempt limits for everything that checks a secret or sends mail to a stranger: sign-in (per e-mail
+// and per client address), invite accept, join codes, password-reset requests (per e-mail and per
+// address) and sign-up. rate-limiter-flexible keeps the counts.
+//
+// A point is CONSUMED BEFORE the secret is checked, so concurrent guesses cannot all pass the check
+// and then be counted; a success gives its point back (`refund`), so only failures use up a limit.
+// A used-up limit is a 429 in the one error shape that says when to try again (Retry-After header).
+//
+// The counts live in this process's memory (RateLimiterMemory; its expiry timers are unref'd, so they
+// never keep a process alive). Several server processes behind one address would each count on
+// their own: DEVELOPERS.md, "Rate limits", shows the one change (`limiterFor`) that moves them to a
+// shared store.
 import type { H3Event } from 'h3'
+import { RateLimiterMemory, RateLimiterRes, type RateLimiterAbstract } from 'rate-limiter-flexible'
 import { DomainError } from '../../shared/utils/domain-error'
 
-interface Window {
-  count: number
-  resetAt: number
+export type LimitName = 'loginEmail' | 'loginAddress' | 'inviteAddress' | 'join' | 'resetEmail' | 'resetAddress' | 'signup'
+
+/** Each limit's size in the runtime config (`auth.*`, NUXT_AUTH_*), and what the refusal calls the attempts. */
+const LIMITS: Record<LimitName, { points: (auth: AuthLimits) => number; what: string }> = {
+  loginEmail: { points: (a) => a.loginPerEmail, what: 'sign-in attempts for' },
+  loginAddress: { points: (a) => a.loginPerAddress, what: 'sign-in attempts from this network' },
+  inviteAddress: { points: (a) => a.loginPerAddress, what: 'invite attempts from this network' },
+  join: { points: (a) => a.joinPerAddress, what: 'join-code attempts from this device' },
+  resetEmail: { points: (a) => a.resetPerEmail, what: 'reset mails for' },
+  resetAddress: { points: (a) => a.resetPerAddress, what: 'reset requests from this network' },
+  signup: { points: (a) => a.signupPerAddress, what: 'new accounts from this network' },
 }
 
-const windows = new Map<string, Window>()
+interface AuthLimits {
+  throttleWindowSeconds: number
+  loginPerEmail: number
+  loginPerAddress: number
+  joinPerAddress: number
+  resetPerEmail: number
+  resetPerAddress: number
+  signupPerAddress: number
+}
 
-function windowFor(key: string, windowMs: number, now: number): Window {
-  let w = windows.get(key)
-  if (!w || w.resetAt <= now) {
-    w = { count: 0, resetAt: now + windowMs }
-    windows.set(key, w)
+function positive(value: unknown, fallback: number): number {
+  const n = Number(value)
+  return Number.isFinite(n) && n > 0 ? Math.floor(n) : fallback
+}
+
+const limiters = new Map<LimitName, RateLimiterAbstract>()
+
+/**
+ * The limiter of one limit, made on first use from the runtime config. To share the counts between
+ * processes, return e.g. `new RateLimiterRedis({ storeClient, keyPrefix: name, points, duration })`
+ * here instead; every caller goes through this function.
+ */
+function limiterFor(name: LimitName): RateLimiterAbstract {
+  let limiter = limiters.get(name)
+  if (!limiter) {
+    const auth = useRuntimeConfig().auth as unknown as AuthLimits
+    limiter = new RateLimiterMemory({
+      keyPrefix: name,
+      points: positive(LIMITS[name].points(auth), 1),
+      duration: positive(auth.throttleWindowSeconds, 900),
+    })
+    limiters.set(name, limiter)
   }
-  return w
+  return limiter
 }
 
-export function throttleWindowMs(): number {
-  return useRuntimeConfig().auth.throttleWindowSeconds * 1000
+export function waitWords(seconds: number): string {
+  return seconds >= 90 ? `${Math.ceil(seconds / 60)} minutes` : `${seconds} ${seconds === 1 ? 'second' : 'seconds'}`
 }
 
-/** Throws a 429 when `key` has used up `limit` attempts in the current window. */
-export function assertUnderLimit(event: H3Event, key: string, limit: number, what: string) {
-  const now = Date.now()
-  const w = windowFor(key, throttleWindowMs(), now)
-  if (w.count >= limit) {
-    const seconds = Math.max(1, Math.ceil((w.resetAt - now) / 1000))
+/**
+ * Uses one attempt of `name` for `key` (an e-mail or a client address), or throws the 429 when
+ * none is left. Call it BEFORE checking the password or code. `label` ends the message for the
+ * per-e-mail limits ("… for camera@example.test").
+ */
+export async function consumeAttempt(event: H3Event, name: LimitName, key: string, label = ''): Promise<void> {
+  try {
+    await limiterFor(name).consume(key)
+  } catch (refused) {
+    if (!(refused instanceof RateLimiterRes)) throw refused
+    const seconds = Math.max(1, Math.ceil(refused.msBeforeNext / 1000))
     setResponseHeader(event, 'Retry-After', seconds)
-    const wait = seconds >= 90 ? `${Math.ceil(seconds / 60)} minutes` : `${seconds} seconds`
-    throw new DomainError('too-many', `Too many ${what}. Try again in ${wait}.`, { data: { retryAfterSeconds: seconds } })
+    const what = label ? `${LIMITS[name].what} ${label}` : LIMITS[name].what
+    throw new DomainError('too-many', `Too many ${what}. Try again in ${waitWords(seconds)}.`, { data: { retryAfterSeconds: seconds } })
   }
 }
 
-export function countAttempt(key: string) {
-  windowFor(key, throttleWindowMs(), Date.now()).count++
+/** Gives back the attempt a success used (only failures count against a limit). */
+export async function refundAttempt(name: LimitName, key: string): Promise<void> {
+  await limiterFor(name).reward(key, 1)
 }
 
-export function clearAttempts(key: string) {
-  windows.delete(key)
+/** Forgets every attempt of `key` (a successful sign-in clears its e-mail's failures). */
+export async function clearAttempts(name: LimitName, key: string): Promise<void> {
+  await limiterFor(name).delete(key)
 }
 
+/** The requester's address, with X-Forwarded-For believed only from a trusted proxy (NUXT_TRUSTED_PROXIES). */
 export function clientAddress(event: H3Event): string {
-  return getRequestIP(event) ?? 'unknown'
+  const peer = event.node.req.socket?.remoteAddress
+  const forwarded = event.node.req.headers['x-forwarded-for']
+  return clientAddressFrom(peer, Array.isArray(forwarded) ? forwarded.join(',') : forwarded, String(useRuntimeConfig().trustedProxies ?? ''))
 }

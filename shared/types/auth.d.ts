@@ -19,6 +19,8 @@ declare module '#auth-utils' {
     /** The studio the member last switched to in the app shell. */
     studioId?: number
     loggedInAt?: number
+    /** The account's session version at sign-in; the guard refuses the session once the account's is higher. */
+    sessionVersion?: number
   }
 }
 

@@ -38,6 +38,9 @@ describe.skipIf(!chromiumAvailable())('crew in the browser', async () => {
     await producer.getByTestId(`invite-${cameraEmail}`).waitFor()
     expect(await axeViolations(producer)).toEqual([])
     await screenshot(producer, 'crew')
+    // "Your sessions": ending every other session keeps this one signed in (the outbox below still opens).
+    await producer.getByRole('button', { name: 'Sign out everywhere else' }).click()
+    await producer.getByRole('status').filter({ hasText: 'Signed out on every other browser and device. This one stays signed in.' }).waitFor()
 
     await producer.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Outbox' }).click()
     await producer.waitForURL(/\/outbox/)
@@ -57,7 +60,7 @@ describe.skipIf(!chromiumAvailable())('crew in the browser', async () => {
     await camera.goto(new URL(new URL(link!).pathname, url('/')).toString(), { waitUntil: 'networkidle' })
     await camera.getByText('Larchmere Kitchen').first().waitFor()
     await camera.getByLabel('Your name').fill('Jory Tamsett')
-    await camera.getByLabel('Choose a password').fill('framing the shot')
+    await camera.getByLabel('Password').fill('framing the shot')
     await camera.getByRole('button', { name: 'Join Larchmere Kitchen' }).click()
     await camera.waitForURL(/\/studios\/\d+$/)
     await camera.getByText('Camera', { exact: true }).first().waitFor()

@@ -38,6 +38,11 @@ const rows: Row[] = [
   { file: 'auth/signup.post.ts', method: 'POST', path: () => '/api/auth/signup', body: () => ({ name: 'N', email: demo.producer, password: 'long enough password', studioName: 'S' }), expect: all(409) },
   { file: 'auth/login.post.ts', method: 'POST', path: () => '/api/auth/login', body: () => ({ email: uniqueEmail('nobody'), password: 'wrong password' }), expect: all(401) },
   { file: 'auth/logout.post.ts', method: 'POST', path: () => '/api/auth/logout', expect: all(204) },
+  // A member ends their other sessions; a device has no account to end them for.
+  {
+    file: 'auth/logout-everywhere.post.ts', method: 'POST', path: () => '/api/auth/logout-everywhere',
+    expect: { anon: 401, producer: 200, host: 200, camera: 200, viewer: 200, outsider: 200, hostDevice: 401, cameraDevice: 401 },
+  },
   { file: 'auth/password-reset/index.post.ts', method: 'POST', path: () => '/api/auth/password-reset', body: () => ({ email: uniqueEmail('matrix') }), expect: all(202) },
   { file: 'auth/password-reset/[token].post.ts', method: 'POST', path: () => '/api/auth/password-reset/not-a-token', body: () => ({ password: 'long enough password' }), expect: all(410) },
   { file: 'me.get.ts', method: 'GET', path: () => '/api/me', expect: { ...all(200), anon: 401 } },
@@ -127,23 +132,39 @@ describe('authorisation matrix', async () => {
       await client.post('/api/join', { code: body.code })
       return client
     }
-    // Each call gets a fresh caller, so a route that ends a session cannot change the next row.
+    // Members are signed in once and kept until a row ends sessions (ENDS_SESSIONS): a sign-in is a
+    // scrypt check at OWASP's cost, about half a second. Devices join afresh for every call, so a
+    // row that revokes a join code cannot change the next row.
+    const member = (name: CallerName, email: string, password?: string) => () => {
+      if (!signedInMembers.has(name)) signedInMembers.set(name, signedIn(email, password))
+      return signedInMembers.get(name)!
+    }
     Object.assign(callers, {
       anon: async () => new Client(),
-      producer: () => signedIn(demo.producer),
-      host: () => signedIn(demo.host),
-      camera: () => signedIn(demo.camera),
-      viewer: () => signedIn(demo.viewer),
-      outsider: () => signedIn(outsiderEmail, 'some other studio'),
+      producer: member('producer', demo.producer),
+      host: member('host', demo.host),
+      camera: member('camera', demo.camera),
+      viewer: member('viewer', demo.viewer),
+      outsider: member('outsider', outsiderEmail, 'some other studio'),
       hostDevice: () => device('host'),
       cameraDevice: () => device('camera'),
     })
-    // One socket per kind of caller for the socket matrix; devices joined to its own shoot.
-    for (const name of CALLERS) {
-      const client = name === 'hostDevice' ? await device('host', ids.socketShoot) : name === 'cameraDevice' ? await device('camera', ids.socketShoot) : await callers[name]()
-      sockets[name] = await connect(client.cookie ? client : null)
+    connectSockets = async () => {
+      for (const name of CALLERS) {
+        const client = name === 'hostDevice' ? await device('host', ids.socketShoot) : name === 'cameraDevice' ? await device('camera', ids.socketShoot) : await callers[name]()
+        sockets[name] = await connect(client.cookie ? client : null)
+      }
     }
   })
+  const signedInMembers = new Map<CallerName, Promise<Client>>()
+  /** Routes after which the kept member sessions are no longer good (signed out, or every session ended). */
+  const ENDS_SESSIONS = new Set(['auth/logout.post.ts', 'auth/logout-everywhere.post.ts', '(nuxt-auth-utils) DELETE /api/_auth/session'])
+  // One socket per kind of caller for the socket matrix; devices joined to its own shoot. Connected
+  // when the first socket row runs (the test context exists inside tests only), after the route rows
+  // have ended sessions on the way.
+  let connectSockets = async () => {}
+  let socketsReady: Promise<void> | undefined
+  const ready = () => (socketsReady ??= connectSockets())
   const sockets = {} as Record<CallerName, TestSocket>
   afterAll(() => Object.values(sockets).forEach((s) => s.disconnect()))
 
@@ -154,6 +175,7 @@ describe('authorisation matrix', async () => {
         const client = await callers[name]()
         const body = row.body?.(ids)
         got[name] = (await client.call(row.method, row.path(ids), body ?? (row.method === 'GET' || row.method === 'DELETE' ? undefined : {}))).status
+        if (ENDS_SESSIONS.has(row.file)) signedInMembers.delete(name)
       }
       expect(got).toEqual(row.expect)
     })
@@ -170,7 +192,8 @@ describe('authorisation matrix', async () => {
     const got: Record<string, string> = {}
     const want: Record<string, string> = {}
     for (const row of [...rows, ...moduleRoutes].filter((r) => r.method !== 'GET')) {
-      const producer = await signedIn(demo.producer)
+      // Refused before any route runs, so one sign-in serves every row.
+      const producer = await callers.producer()
       const res = await producer.call(row.method, row.path(ids), 'name=value', {
         'content-type': 'application/x-www-form-urlencoded', 'origin': 'https://elsewhere.example', 'sec-fetch-site': 'cross-site',
       })
@@ -216,6 +239,7 @@ describe('authorisation matrix', async () => {
 
     for (const type of SHOOT_COMMAND_TYPES) {
       it(`${type}: ${SHOOT_COMMAND_ROLES[type].join(', ')}`, async () => {
+        await ready()
         const want = {} as Record<CallerName, string>
         const got = {} as Record<CallerName, string>
         for (const name of CALLERS) {

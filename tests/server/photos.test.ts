@@ -361,6 +361,7 @@ describe('photos in an S3-compatible bucket', () => {
         NUXT_DATABASE_PATH: tempDatabasePath('photos-s3'),
         NUXT_DATABASE_SEED: 'always',
         NUXT_SESSION_PASSWORD: 'test-session-password-of-at-least-32-characters',
+        NUXT_PUBLIC_SITE_URL: `http://127.0.0.1:${port}`,
         NUXT_PHOTOS_DIR: join(tmpdir(), 'hobline-photos-never-used'),
         NUXT_PHOTOS_S3_ENDPOINT: `http://127.0.0.1:${bucketPort}`,
         NUXT_PHOTOS_S3_BUCKET: 'brackenford-photos',
@@ -381,8 +382,17 @@ describe('photos in an S3-compatible bucket', () => {
     throw new Error(`the built app with an S3 bucket never became healthy:\n${appLog}`)
   }, 120_000)
 
+  // The app must be gone before the bucket closes: a bucket's close() waits for every open
+  // connection, and the app's keep-alive connections to it would hold the test file open.
   afterAll(async () => {
-    app?.kill('SIGTERM')
+    if (app && app.exitCode === null && app.signalCode === null) {
+      const exited = new Promise((r) => app!.once('exit', r))
+      app.kill('SIGTERM')
+      const timer = setTimeout(() => app!.kill('SIGKILL'), 10_000)
+      await exited
+      clearTimeout(timer)
+    }
+    bucket?.closeAllConnections()
     await new Promise((r) => bucket?.close(r))
   })
 

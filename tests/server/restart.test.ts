@@ -16,6 +16,7 @@ function startServer(databasePath: string, port: number) {
       NUXT_DATABASE_PATH: databasePath,
       NUXT_DATABASE_SEED: 'always',
       NUXT_SESSION_PASSWORD: 'test-session-password-of-at-least-32-characters',
+      NUXT_PUBLIC_SITE_URL: `http://127.0.0.1:${port}`,
     },
     stdio: 'ignore',
   })

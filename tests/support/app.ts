@@ -2,9 +2,10 @@
 import { mkdtempSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join, resolve } from 'node:path'
-import { $fetch, setup } from '@nuxt/test-utils/e2e'
+import type { ChildProcess } from 'node:child_process'
+import { $fetch, setup, useTestContext } from '@nuxt/test-utils/e2e'
 import { checkPort } from 'get-port-please'
-import { beforeAll } from 'vitest'
+import { afterEach, beforeAll } from 'vitest'
 import { chromiumLaunchOptions } from './chromium'
 
 export const rootDir = resolve(import.meta.dirname, '../..')
@@ -37,11 +38,12 @@ export async function useBuiltApp(options: AppOptions = {}): Promise<{ databaseP
   const databasePath = tempDatabasePath()
   // nuxt-auth-utils refuses to seal sessions without a 32+ character password.
   process.env.NUXT_SESSION_PASSWORD ||= 'test-session-password-of-at-least-32-characters'
+  const port = await serverPort()
   await setup({
     rootDir,
     build: false,
     server: true,
-    port: await serverPort(),
+    port,
     browser: options.browser ?? false,
     browserOptions: { type: 'chromium', launch: chromiumLaunchOptions() },
     nuxtConfig: { nitro: { output: { dir: resolve(rootDir, '.output') } } },
@@ -49,6 +51,12 @@ export async function useBuiltApp(options: AppOptions = {}): Promise<{ databaseP
     env: {
       NUXT_DATABASE_PATH: databasePath,
       NUXT_DATABASE_SEED: options.seed ?? 'always',
+      // The built server refuses to start without its public address (server/plugins/00.site-url.ts).
+      NUXT_PUBLIC_SITE_URL: `http://127.0.0.1:${port}`,
+      // Every test client comes from 127.0.0.1: the per-address limits on new accounts and reset
+      // requests are set high here, and tested at their size in throttle.test.ts.
+      NUXT_AUTH_SIGNUP_PER_ADDRESS: '10000',
+      NUXT_AUTH_RESET_PER_ADDRESS: '10000',
       ...options.env,
     },
   })
@@ -60,6 +68,15 @@ export async function useBuiltApp(options: AppOptions = {}): Promise<{ databaseP
       await new Promise((r) => setTimeout(r, 50))
     }
     throw new Error('the built app never reported a healthy database')
+  })
+  // A server under test that died is named, with its exit and last log lines, instead of leaving
+  // the next test to fail with "connection refused".
+  afterEach(() => {
+    const ctx = useTestContext()
+    const child = (ctx.serverProcess as unknown as { process?: ChildProcess } | undefined)?.process
+    if (child && (child.exitCode !== null || child.signalCode !== null)) {
+      throw new Error(`the built app under test exited (${child.exitCode ?? child.signalCode}); its last log lines:\n${ctx.serverLogs.slice(-40).join('\n')}`)
+    }
   })
   return { databasePath }
 }

@@ -6,6 +6,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare name: string
   declare email: string
   declare passwordHash: string
+  /** Goes up to end every session of the account at once (sign out everywhere, password reset, removal). */
+  declare sessionVersion: CreationOptional<number>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 }
@@ -49,7 +51,7 @@ const id = { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true }
 const stamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE }
 
 export function initAccountModels(sequelize: Sequelize) {
-  User.init({ id, name: DataTypes.STRING(80), email: DataTypes.STRING(254), passwordHash: DataTypes.STRING(255), ...stamps }, { sequelize, tableName: 'users', underscored: true })
+  User.init({ id, name: DataTypes.STRING(80), email: DataTypes.STRING(254), passwordHash: DataTypes.STRING(255), sessionVersion: { type: DataTypes.INTEGER, defaultValue: 0 }, ...stamps }, { sequelize, tableName: 'users', underscored: true })
   Membership.init({ id, role: DataTypes.STRING(16), ...stamps }, { sequelize, tableName: 'memberships', underscored: true })
   Invite.init(
     {

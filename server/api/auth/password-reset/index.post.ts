@@ -1,11 +1,11 @@
 import { passwordResetMail } from '../../../mail/templates'
 
-// Public. Always the same answer, so it cannot tell whether an address has an account.
+// Public. Always the same answer, so it cannot tell whether an address has an account. Limited per
+// client address and per e-mail (NUXT_AUTH_RESET_PER_ADDRESS, NUXT_AUTH_RESET_PER_EMAIL).
 export default defineEventHandler(async (event) => {
   const { email } = await validateBody(event, resetRequestBodySchema)
-  const key = `reset:${email}`
-  assertUnderLimit(event, key, 3, `reset mails for ${email}`)
-  countAttempt(key)
+  await consumeAttempt(event, 'resetAddress', clientAddress(event))
+  await consumeAttempt(event, 'resetEmail', email, email)
   const reset = await requestPasswordReset(email)
   if (reset) {
     const link = `${siteUrl(event)}/reset/${reset.token}`
