@@ -123,7 +123,7 @@ function shootsBody(): z.ZodType {
 
 function form(u: { field: string; name: string; type: string; bytes: Uint8Array }): FormData {
   const data = new FormData()
-  data.append(u.field, new Blob([u.bytes], { type: u.type }), u.name)
+  data.append(u.field, new Blob([new Uint8Array(u.bytes)], { type: u.type }), u.name)
   return data
 }
 
