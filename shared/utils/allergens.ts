@@ -1,12 +1,13 @@
 // Allergen groups: the 14 of Regulation (EU) No 1169/2011 Annex II and the 9 major food
 // allergens of the United States (FALCPA 2004, plus sesame by the FASTER Act 2021, in force
-// 1 January 2023); the mapping between them; and suggestions from an ingredient's name by a
+// 1 January 2023); the mapping between them; the tree nuts the FDA names (Questions and Answers
+// Regarding Food Allergens, Edition 5, January 2025, Appendix I: twelve, no chestnut, no coconut); and suggestions from an ingredient's name by a
 // keyword table (shared/data/allergen-keywords.ts). Suggestions are for the user to confirm:
 // a recipe lists what the user confirmed, and product labels always win.
 import { ALLERGEN_KEYWORDS } from '../data/allergen-keywords'
 
 export const EU_ALLERGENS = [
-  { id: 'cereals-gluten', annexItem: 1, label: 'Cereals containing gluten (wheat, rye, barley, oats, spelt, kamut)' },
+  { id: 'cereals-gluten', annexItem: 1, label: 'Cereals containing gluten (wheat (such as spelt and khorasan wheat), rye, barley, oats)' },
   { id: 'crustaceans', annexItem: 2, label: 'Crustaceans' },
   { id: 'eggs', annexItem: 3, label: 'Eggs' },
   { id: 'fish', annexItem: 4, label: 'Fish' },
@@ -36,6 +37,16 @@ export const US_ALLERGENS = [
 ] as const
 export type UsAllergenId = (typeof US_ALLERGENS)[number]['id']
 
+/**
+ * The tree nuts the FDA considers major food allergens, by common or usual name: Questions and Answers
+ * Regarding Food Allergens (Edition 5, January 2025), Appendix I. Twelve; beech nut, butternut, chestnut,
+ * chinquapin, coconut, ginkgo, hickory, lichee, pili and shea nut were removed from the earlier list.
+ */
+export const FDA_TREE_NUTS = [
+  'Almond', 'Black walnut', 'Brazil nut', 'California walnut', 'Cashew', 'Filbert/Hazelnut', 'Heartnut/Japanese walnut',
+  'Macadamia nut/Bush nut', 'Pecan', 'Pine nut/Pinon nut', 'Pistachio', 'Walnut (English, Persian)',
+] as const
+
 /** What an ingredient contains, in both lists (stored with the ingredient). */
 export interface IngredientAllergens {
   eu: EuAllergenId[]
@@ -58,7 +69,7 @@ export const EU_US_ALLERGEN_MAP: readonly AllergenMapping[] = [
   { eu: 'peanuts', us: 'peanuts', relation: 'same', note: '' },
   { eu: 'soybeans', us: 'soybeans', relation: 'same', note: '' },
   { eu: 'milk', us: 'milk', relation: 'same', note: '' },
-  { eu: 'tree-nuts', us: 'tree-nuts', relation: 'partial', note: 'The EU names eight nuts; the FDA\'s list of tree nuts is longer (for example pine nuts and chestnuts; from memory, check the FDA guidance).' },
+  { eu: 'tree-nuts', us: 'tree-nuts', relation: 'partial', note: 'The EU names eight nuts; the FDA names twelve tree nuts (Q&A Edition 5, January 2025), among them pine nuts and four walnuts.' },
   { eu: 'celery', us: null, relation: 'none', note: 'Not a US major allergen.' },
   { eu: 'mustard', us: null, relation: 'none', note: 'Not a US major allergen.' },
   { eu: 'sesame', us: 'sesame', relation: 'same', note: 'US major allergen since 1 January 2023 (FASTER Act 2021).' },
@@ -100,6 +111,8 @@ export interface AllergenMatch {
   eu: EuAllergenId[]
   us: UsAllergenId[]
   note?: string
+  /** A compound item (stock cube): the groups are what it often contains, to check on its label. */
+  mayContain?: boolean
 }
 
 export interface AllergenSuggestion extends IngredientAllergens {
@@ -121,7 +134,9 @@ export function suggestAllergens(item: string): AllergenSuggestion {
     const m = re.exec(text)
     if (!m) continue
     text = text.slice(0, m.index) + ' '.repeat(m[0].length - 1) + text.slice(m.index + m[0].length - 1)
-    matches.push({ keyword: kw, eu: [...entry.eu], us: [...entry.us], ...(entry.note ? { note: entry.note } : {}) })
+    matches.push({
+      keyword: kw, eu: [...entry.eu], us: [...entry.us], ...(entry.note ? { note: entry.note } : {}), ...(entry.mayContain ? { mayContain: true } : {}),
+    })
   }
   const eu = EU_ORDER.filter((id) => matches.some((m) => m.eu.includes(id)))
   const us = US_ORDER.filter((id) => matches.some((m) => m.us.includes(id)))
