@@ -1,7 +1,8 @@
 // Cost per serving (shared/utils/cost.ts) and money (shared/utils/money.ts).
 // The formula is DESIGN.md's: Σ (amount used ÷ package size × package price) ÷ servings, in
 // integer minor units rounded once at the end. Minor-unit digits are ISO 4217's (GBP 2, JPY 0,
-// KWD 3), read through Intl; conversions by NIST Handbook 44 Appendix C; the flour density is
+// KWD 3), from one table (shared/data/iso4217-minor-units.ts); conversions by NIST Handbook 44
+// Appendix C; the flour density is
 // USDA SR Legacy NDB 20081 (1 cup = 125 g, from memory). Worked examples are computed by hand.
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
@@ -137,7 +138,7 @@ describe('costRecipe rules', () => {
 })
 
 describe('money', () => {
-  it('takes minor-unit digits from ISO 4217 through Intl: GBP 2, EUR 2, JPY 0, KWD 3', () => {
+  it('takes minor-unit digits from the ISO 4217 table: GBP 2, EUR 2, JPY 0, KWD 3', () => {
     expect(currencyMinorDigits('GBP')).toBe(2)
     expect(currencyMinorDigits('EUR')).toBe(2)
     expect(currencyMinorDigits('JPY')).toBe(0)
