@@ -3,7 +3,7 @@
 // integer minor units rounded once at the end. Minor-unit digits are ISO 4217's (GBP 2, JPY 0,
 // KWD 3), from one table (shared/data/iso4217-minor-units.ts); conversions by NIST Handbook 44
 // Appendix C; the flour density is
-// USDA SR Legacy NDB 20081 (1 cup = 125 g, from memory). Worked examples are computed by hand.
+// USDA SR Legacy NDB 20081 (1 cup = 125 g, checked against SR Legacy). Worked examples are computed by hand.
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
 import { costRecipe, type CostedIngredient, type StudioPrice } from '../../shared/utils/cost'
