@@ -9,7 +9,7 @@ import { scaleLoadedRecipe } from '../utils/recipe-maths'
 import type { ShootSnapshot } from '../../shared/types/socket-events'
 import { euAllergenLabel, type EuAllergenId } from '../../shared/utils/allergens'
 import { findStepTokens } from '../../shared/utils/step-text'
-import { CAUTIONS, isCautionId } from '../../shared/utils/cautions'
+import { cautionsFor, countryOfLocale, isCautionId } from '../../shared/utils/cautions'
 import type { ShootRow } from './store'
 
 export type ShootScript = Pick<ShootSnapshot, 'steps' | 'units' | 'makespanMs'>
@@ -19,6 +19,7 @@ export async function buildShootScript(row: ShootRow): Promise<ShootScript> {
   const ids = new Set(stepIdsOf(row))
   const settings = await studioSettings(row.studioId)
   const units = settings.unitSystem as 'metric' | 'us'
+  const CAUTIONS = cautionsFor(countryOfLocale(settings.locale))
   // The plan the shoot began with (server/shoot/plan.ts); none on a shoot the planner refused.
   const first = row.state.plan?.first ?? null
   const names = new Map((row.state.plan?.steps ?? []).map((p) => [p.id, p.name]))
