@@ -42,11 +42,14 @@ async function pricesFor(studioId: number) {
   return (await listPrices(studioId)).map(studioPrice)
 }
 
-type CostLine = { key: string; item: string; min: number | null; max: number | null; unit: string | null; optional: boolean; priceId: number | null }
+type CostLine = {
+  key: string; item: string; min: number | null; max: number | null; unit: string | null; optional: boolean; toTaste?: boolean; priceId: number | null
+}
 
 function costInput(ingredients: CostLine[]) {
   return ingredients.map((i) => ({
-    key: i.key, item: i.item, min: i.min, max: i.max, unit: i.unit as UnitId | null, optional: i.optional, priceId: i.priceId ? String(i.priceId) : null,
+    key: i.key, item: i.item, min: i.min, max: i.max, unit: i.unit as UnitId | null, optional: i.optional, toTaste: i.toTaste === true,
+    priceId: i.priceId ? String(i.priceId) : null,
   }))
 }
 
@@ -76,6 +79,7 @@ export async function recipeCostView(recipeId: number, studioId: number, serving
     lines: cost.lines.map((l) => ({ ...l, cost: l.costMinor === null ? null : dec(l.costMinor), formatted: l.costMinor === null ? null : fmt(l.costMinor) })),
     missing: cost.missing.map((l) => ({ key: l.key, item: l.item, message: l.message })),
     problems: cost.problems.map((l) => ({ key: l.key, item: l.item, message: l.message })),
+    unmeasured: cost.unmeasured.map((l) => ({ key: l.key, item: l.item, message: l.message })),
   }
 }
 

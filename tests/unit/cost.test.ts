@@ -69,6 +69,24 @@ describe('costRecipe: worked example (4 servings, GBP)', () => {
   })
 })
 
+describe('"to taste" lines', () => {
+  // Issue 14: a "to taste" line with no amount cannot be costed, so the cost is a lower bound, not complete.
+  const priced = [ing('butter', 100, 'g', 'p-butter')]
+  it('a required "salt, to taste" leaves the cost incomplete and says why', () => {
+    const cost = costRecipe([...priced, { ...ing('salt', null, null, null), toTaste: true }], prices, { currency: 'GBP', servings: 4 })
+    expect(cost.lines[1]!.status).toBe('to-taste')
+    expect(cost.unmeasured.map((l) => l.key)).toEqual(['salt'])
+    expect(cost.unmeasured[0]!.message).toMatch(/"salt" is to taste/)
+    expect(cost.complete).toBe(false)
+    expect(cost.totalMinor).toBe(84)
+  })
+  it('an optional to-taste line, or one with an amount, keeps it complete', () => {
+    expect(costRecipe([...priced, { ...ing('chilli flakes', null, null, null, true), toTaste: true }], prices, { currency: 'GBP', servings: 4 }).complete).toBe(true)
+    expect(costRecipe([...priced, { ...ing('butter', 10, 'g', 'p-butter'), key: 'b2', toTaste: true }], prices, { currency: 'GBP', servings: 4 }).complete).toBe(true)
+    expect(costRecipe(priced, prices, { currency: 'GBP', servings: 4 }).complete).toBe(true)
+  })
+})
+
 describe('costRecipe rules', () => {
   it('takes "each" and numeric price ids as the studio stores them', () => {
     const p = [{ id: 7, item: 'lemons', packageSize: 4, packageUnit: 'each' as const, priceMinor: 120, currency: 'GBP' }]
