@@ -4,6 +4,7 @@ import type { CautionId } from '~~/shared/utils/cautions'
 import type { EuAllergenId, UsAllergenId } from '~~/shared/utils/allergens'
 import type { RecipeStation } from '~~/shared/types/recipe'
 import type { UnitId } from '~~/shared/utils/units'
+import type { FluidMeasure } from '~~/shared/utils/fluid-measure'
 import type { LoadedRecipe } from '~/types/api'
 
 /** A link to an earlier step beyond "waits for" (start with it, or finish together), by position. */
@@ -117,8 +118,10 @@ export function ingredientRow(parts: Partial<Pick<IngredientRow, 'min' | 'max' |
 }
 
 /** "2 1/2 cups plain flour, sifted" as a row, and what the reader was unsure of. */
-export function ingredientFromLine(line: string, takenKeys: string[], cups: 'us' | 'metric' = 'us'): { row: IngredientRow; warnings: string[] } {
-  const q = parseQuantity(line, { cups })
+export function ingredientFromLine(
+  line: string, takenKeys: string[], cups: 'us' | 'metric' = 'us', fluid: FluidMeasure = 'us',
+): { row: IngredientRow; warnings: string[] } {
+  const q = parseQuantity(line, { cups, fluid })
   const row = ingredientRow({
     min: amountText(q.min), max: q.max === q.min ? '' : amountText(q.max), unit: q.unit ?? '', item: q.item, prep: q.prep ?? '', optional: q.optional, toTaste: q.toTaste,
   }, takenKeys)

@@ -17,12 +17,14 @@ export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, 
   const system = units ?? (settings.unitSystem as 'metric' | 'us')
   const target = servings ?? recipe.servings
   const draft = recipeDraft(recipe)
-  const scaled = scaleRecipeIngredients(draft.ingredients, recipe.servings, target, { system, metricCups: settings.cupUnit === 'metric-cup' })
+  const display = { system, metricCups: settings.cupUnit === 'metric-cup', fluid: settings.fluidMeasure }
+  const scaled = scaleRecipeIngredients(draft.ingredients, recipe.servings, target, display)
   const byKey = new Map(recipe.ingredients.map((i) => [i.key, i]))
   const factor = target / recipe.servings
   return {
     servings: target,
     units: system,
+    fluidMeasure: settings.fluidMeasure,
     ingredients: scaled.ingredients.map((s) => {
       const ing = byKey.get(s.key)!
       return {
@@ -31,7 +33,7 @@ export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, 
       }
     }),
     steps: recipe.steps.map((step) => {
-      const rendered = renderStepText(step.text, { system, metricCups: settings.cupUnit === 'metric-cup', ingredients: draft.ingredients, fromServings: recipe.servings, toServings: target })
+      const rendered = renderStepText(step.text, { ...display, ingredients: draft.ingredients, fromServings: recipe.servings, toServings: target })
       return { id: step.id, position: step.position, text: rendered.text, segments: rendered.segments, problems: rendered.problems }
     }),
     factor,

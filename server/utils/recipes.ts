@@ -132,13 +132,14 @@ export async function studioSettings(studioId: number) {
     id: s.id, name: s.name, locale: s.locale as string, currency: s.currency as string,
     budgetPerServingMinor: (s.budgetPerServingMinor ?? null) as number | null, cupUnit: s.cupUnit as string,
     unitSystem: s.unitSystem as string, kitchen: s.kitchen as KitchenProfile,
+    fluidMeasure: studioFluidMeasure(s), fluidMeasureChosen: s.fluidMeasure === 'us' || s.fluidMeasure === 'imperial',
   }
 }
 
 /** Reads an import into a body ready to save, with what could not be understood. */
 export async function readRecipeImport(studioId: number, text: string) {
   const settings = await studioSettings(studioId)
-  const { imported, body, invalid } = await readImportOffLoop(text, { cups: settings.cupUnit === 'metric-cup' ? 'metric' : 'us' })
+  const { imported, body, invalid } = await readImportOffLoop(text, { cups: settings.cupUnit === 'metric-cup' ? 'metric' : 'us', fluid: settings.fluidMeasure })
   if (invalid) {
     throw new DomainError('invalid', `The recipe was read, but ${invalid.field}: ${invalid.message}`, { data: { field: invalid.field, draft: imported.recipe, problems: imported.problems } })
   }

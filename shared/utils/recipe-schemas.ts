@@ -108,6 +108,7 @@ export const studioSettingsSchema = z.object({
   budgetPerServingMinor: z.number().int('budgetPerServingMinor must be whole minor units.').min(0).max(1e8).nullable().optional(),
   cupUnit: z.enum(['cup', 'metric-cup'], { error: 'cupUnit must be cup (US, 236.6 mL) or metric-cup (250 mL).' }).optional(),
   unitSystem: z.enum(['metric', 'us'], { error: 'unitSystem must be metric or us.' }).optional(),
+  fluidMeasure: z.enum(['us', 'imperial'], { error: 'fluidMeasure must be us (1 pint = 473 mL), imperial (568 mL) or null to follow the locale.' }).nullable().optional(),
   kitchen: z.object({
     hands: z.number({ error: 'kitchen.hands must be a number.' }).int().min(1, 'A kitchen needs at least one cook (kitchen.hands).').max(12),
     burners: z.number({ error: 'kitchen.burners must be a number.' }).int().min(0).max(16),
