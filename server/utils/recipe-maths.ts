@@ -101,6 +101,9 @@ export async function listRecipes(studioId: number, filters: { q?: string; tag?:
     return {
       id: r.id, title: r.title, summary: r.summary, servings: r.servings, tags: r.tags, photo: photoUrl(r.photo), updatedAt: r.updatedAt,
       allergens: { eu: allergens.eu.map((a: { id: string }) => a.id), us: allergens.us.map((a: { id: string }) => a.id) },
+      /** Ingredients whose allergens nobody has checked. */
+      allergensUnchecked: allergens.unchecked.length,
+      freeOf: filters.without ? recipeFreeOf(ings as never, filters.without) : null,
       cost: {
         perServing: minorToDecimal(cost.perServingMinor, cost.currency),
         perServingWithOptional: minorToDecimal(cost.perServingWithOptionalMinor, cost.currency),
@@ -110,11 +113,15 @@ export async function listRecipes(studioId: number, filters: { q?: string; tag?:
       },
     }
   })
-  const filtered = recipes.filter((r) =>
+  const others = recipes.filter((r) =>
     (!filters.tag || r.tags.includes(filters.tag))
-    && (!filters.allergen || r.allergens.eu.includes(filters.allergen) || r.allergens.us.includes(filters.allergen))
-    && (!filters.without || (!r.allergens.eu.includes(filters.without) && !r.allergens.us.includes(filters.without))))
-  return { recipes: filtered, currency: settings.currency, budgetPerServingMinor: settings.budgetPerServingMinor }
+    && (!filters.allergen || r.allergens.eu.includes(filters.allergen) || r.allergens.us.includes(filters.allergen)))
+  // "Free of" counts only checked ingredients: a recipe is listed when none contains the group and all are
+  // checked; one that lists no such group but has unchecked ingredients is named apart, with how many.
+  const filtered = others.filter((r) => !r.freeOf || r.freeOf.free)
+  const notChecked = others.filter((r) => r.freeOf && !r.freeOf.contains && !r.freeOf.free)
+    .map((r) => ({ id: r.id, title: r.title, unchecked: r.freeOf!.unchecked }))
+  return { recipes: filtered, notChecked, currency: settings.currency, budgetPerServingMinor: settings.budgetPerServingMinor }
 }
 
 export async function updateStudioSettings(studioId: number, body: z.output<typeof studioSettingsSchema>) {

@@ -53,6 +53,38 @@ export interface IngredientAllergens {
   us: UsAllergenId[]
 }
 
+/**
+ * How sure an ingredient's allergens are: 'suggested' (read from its name by the keyword table, nobody
+ * has checked), 'checked' (a person checked the label: who and when are stored beside it), or
+ * 'none-declared' (nothing is known: no keyword matched and nobody has checked). Only 'checked' is
+ * evidence that an ingredient is free of something.
+ */
+export const ALLERGEN_STATES = ['suggested', 'checked', 'none-declared'] as const
+export type AllergenState = (typeof ALLERGEN_STATES)[number]
+
+export interface AllergenCertainty {
+  allergenState?: AllergenState | null
+  allergensCheckedBy?: string | null
+  allergensCheckedAt?: string | Date | null
+}
+
+/** The state of an ingredient that does not say: suggested when it lists something, none declared when not. */
+export function allergenStateOf(i: { allergens: IngredientAllergens } & AllergenCertainty): AllergenState {
+  if (i.allergenState && (ALLERGEN_STATES as readonly string[]).includes(i.allergenState)) return i.allergenState
+  return i.allergens.eu.length || i.allergens.us.length ? 'suggested' : 'none-declared'
+}
+
+/** "checked by Ada Lovelace on 2 December 2026", "suggested from the name, not checked", "none declared, not checked". */
+export function allergenCertaintyText(i: { allergens: IngredientAllergens } & AllergenCertainty, locale = 'en-GB'): string {
+  const state = allergenStateOf(i)
+  if (state === 'checked') {
+    const when = i.allergensCheckedAt ? new Date(i.allergensCheckedAt) : null
+    const date = when && !Number.isNaN(when.getTime()) ? ` on ${when.toLocaleDateString(locale, { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' })}` : ''
+    return `checked${i.allergensCheckedBy ? ` by ${i.allergensCheckedBy}` : ''}${date}`
+  }
+  return state === 'suggested' ? 'suggested from the name, not checked' : 'none declared, not checked'
+}
+
 export interface AllergenMapping {
   eu: EuAllergenId
   us: UsAllergenId | null
@@ -150,22 +182,43 @@ export interface RecipeAllergenEntry<Id> {
   items: string[]
   /** True when only optional ingredients contain it. */
   optionalOnly: boolean
+  /** Of `items`, those whose allergens nobody has checked (suggested from the name). */
+  unchecked: string[]
 }
 
 /** The allergens of a recipe from its ingredients' confirmed allergens, in the order of each list. */
-export function listRecipeAllergens(ingredients: ReadonlyArray<{ item: string; optional?: boolean; allergens: IngredientAllergens }>): {
+export function listRecipeAllergens(ingredients: ReadonlyArray<{ item: string; optional?: boolean; allergens: IngredientAllergens } & AllergenCertainty>): {
   eu: RecipeAllergenEntry<EuAllergenId>[]
   us: RecipeAllergenEntry<UsAllergenId>[]
+  /** Every ingredient whose allergens nobody has checked, in recipe order. */
+  unchecked: string[]
 } {
   const collect = <Id extends string>(order: Id[], pick: (a: IngredientAllergens) => readonly string[], label: (id: Id) => string) =>
     order
       .map((id) => {
         const having = ingredients.filter((i) => pick(i.allergens).includes(id))
-        return { id, label: label(id), items: having.map((i) => i.item), optionalOnly: having.every((i) => i.optional === true) }
+        return {
+          id, label: label(id), items: having.map((i) => i.item), optionalOnly: having.every((i) => i.optional === true),
+          unchecked: having.filter((i) => allergenStateOf(i) !== 'checked').map((i) => i.item),
+        }
       })
       .filter((e) => e.items.length > 0)
   return {
     eu: collect(EU_ORDER, (a) => a.eu, euAllergenLabel),
     us: collect(US_ORDER, (a) => a.us, usAllergenLabel),
+    unchecked: ingredients.filter((i) => allergenStateOf(i) !== 'checked').map((i) => i.item),
   }
+}
+
+/**
+ * Whether a recipe is free of an allergen group (EU or US id), counting only checked ingredients: it is
+ * free when no ingredient lists the group and every ingredient has been checked. `unchecked` says how
+ * many ingredients stand between a "maybe" and a "yes".
+ */
+export function recipeFreeOf(
+  ingredients: ReadonlyArray<{ allergens: IngredientAllergens } & AllergenCertainty>, id: string,
+): { free: boolean; contains: boolean; unchecked: number } {
+  const contains = ingredients.some((i) => (i.allergens.eu as string[]).includes(id) || (i.allergens.us as string[]).includes(id))
+  const unchecked = ingredients.filter((i) => allergenStateOf(i) !== 'checked').length
+  return { free: !contains && unchecked === 0, contains, unchecked }
 }

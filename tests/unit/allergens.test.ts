@@ -3,8 +3,8 @@
 // Which foods contain which allergen is common kitchen knowledge unless a note says otherwise.
 import { describe, expect, it } from 'vitest'
 import {
-  EU_ALLERGENS, EU_US_ALLERGEN_MAP, FDA_TREE_NUTS, US_ALLERGENS, euAllergenLabel, isEuAllergenId, isUsAllergenId, listRecipeAllergens,
-  suggestAllergens, usAllergenLabel,
+  EU_ALLERGENS, EU_US_ALLERGEN_MAP, FDA_TREE_NUTS, US_ALLERGENS, allergenCertaintyText, allergenStateOf, euAllergenLabel, isEuAllergenId, isUsAllergenId,
+  listRecipeAllergens, recipeFreeOf, suggestAllergens, usAllergenLabel, type IngredientAllergens,
 } from '../../shared/utils/allergens'
 
 describe('the lists', () => {
@@ -174,5 +174,37 @@ describe('facts against their sources', () => {
     expect(r.matches[0]).toMatchObject({ keyword: 'stock cube', mayContain: true })
     expect(r.matches[0]!.note).toMatch(/check the label/)
     expect(suggestAllergens('vegetable bouillon powder').matches[0]!.mayContain).toBe(true)
+  })
+})
+
+describe('allergen certainty per ingredient', () => {
+  const milk = { eu: ['milk'], us: ['milk'] } as IngredientAllergens
+  const none = { eu: [], us: [] } as IngredientAllergens
+  it('an ingredient with no state is suggested when it lists something, none declared when not; only checked is checked', () => {
+    expect(allergenStateOf({ allergens: milk })).toBe('suggested')
+    expect(allergenStateOf({ allergens: none })).toBe('none-declared')
+    expect(allergenStateOf({ allergens: none, allergenState: 'checked' })).toBe('checked')
+  })
+  it('says who checked and when', () => {
+    expect(allergenCertaintyText({ allergens: milk, allergenState: 'checked', allergensCheckedBy: 'Ada Cook', allergensCheckedAt: '2026-12-02T10:00:00Z' }))
+      .toBe('checked by Ada Cook on 2 December 2026')
+    expect(allergenCertaintyText({ allergens: milk })).toBe('suggested from the name, not checked')
+    expect(allergenCertaintyText({ allergens: none })).toBe('none declared, not checked')
+  })
+  it('lists the unchecked items beside each group and for the recipe', () => {
+    const list = listRecipeAllergens([
+      { item: 'butter', allergens: milk, allergenState: 'checked' },
+      { item: 'cream', allergens: milk, allergenState: 'suggested' },
+      { item: 'salt', allergens: none },
+    ])
+    expect(list.eu[0]).toMatchObject({ id: 'milk', items: ['butter', 'cream'], unchecked: ['cream'] })
+    expect(list.unchecked).toEqual(['cream', 'salt'])
+  })
+  it('"free of" counts only checked ingredients and says how many are unchecked', () => {
+    const wheat = { eu: ['cereals-gluten'], us: ['wheat'] } as IngredientAllergens
+    expect(recipeFreeOf([{ allergens: wheat, allergenState: 'checked' }, { allergens: none, allergenState: 'checked' }], 'milk'))
+      .toEqual({ free: true, contains: false, unchecked: 0 })
+    expect(recipeFreeOf([{ allergens: wheat, allergenState: 'checked' }, { allergens: none }], 'milk')).toEqual({ free: false, contains: false, unchecked: 1 })
+    expect(recipeFreeOf([{ allergens: milk, allergenState: 'checked' }], 'milk')).toMatchObject({ free: false, contains: true })
   })
 })
