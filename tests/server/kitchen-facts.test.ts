@@ -4,7 +4,7 @@
 // carries the certainty.
 import { beforeAll, describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
-import type { Client} from '../support/client';
+import type { Client } from '../support/client'
 import { demo, signedIn } from '../support/client'
 
 describe('kitchen facts', async () => {
