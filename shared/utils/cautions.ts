@@ -115,6 +115,9 @@ export function cautionsFor(country: string): Readonly<Record<CautionId, Caution
   return Object.fromEntries([...list, hotHolding(country)].map((c) => [c.id, c])) as Record<CautionId, Caution>
 }
 
+/** The injection key under which a page provides its studio's country to the caution notes. */
+export const CAUTION_COUNTRY = 'hobline-caution-country'
+
 /** The cautions as a studio outside the UK sees them (labels are the same everywhere). */
 export const CAUTIONS: Readonly<Record<CautionId, Caution>> = cautionsFor('US')
 
