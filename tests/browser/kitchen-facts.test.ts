@@ -86,6 +86,14 @@ describe.skipIf(!chromiumAvailable())('kitchen facts in the browser', async () =
     await expect(allergen.textContent()).resolves.not.toMatch(/Not checked:[^.]*flour/)
     await expect(allergen.textContent()).resolves.toMatch(/Follow your local food-safety rules\./)
     await screenshot(host.page, 'prompter-allergen-certainty')
+
+    // The cue screen and the desk show the step's caution labels.
+    const camera = await signedIn('camera@brackenford.test', { width: 900, height: 1000 })
+    await camera.page.goto(url(`/shoots/${shootId}/cue`), { waitUntil: 'networkidle' })
+    await expect(camera.page.getByTestId('caution-labels').textContent()).resolves.toContain('Allergens')
+    await page.goto(url(`/shoots/${shootId}/desk`), { waitUntil: 'networkidle' })
+    await expect(page.getByTestId('caution-labels').textContent()).resolves.toContain('Allergens')
+    expect(camera.errors).toEqual([])
     expect(errors).toEqual([])
     expect(host.errors).toEqual([])
   })
