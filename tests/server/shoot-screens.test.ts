@@ -42,8 +42,9 @@ describe('what the shoot screens read', async () => {
     expect(us.units).toBe('us')
     // NIST Handbook 44 Appendix C: 1 US tablespoon = 14.786 765 mL, so 30 mL = 2.03 tbsp, shown as 2 tbsp.
     expect(stepWith(us, 'Warm {{olive-oil|item}}').ingredients).toEqual([{ key: 'olive-oil', item: 'olive oil', amount: '2 tbsp' }])
-    // In US units the US list (FALCPA 2004: wheat, milk) goes beside the EU one; the demo's allergens are suggestions.
-    expect(stepWith(us, '{{plain-yoghurt*5/7|item}}').allergensUs).toEqual(['Milk', 'Wheat'])
+    // In US units the US list (FALCPA 2004: wheat, milk) goes beside the EU one, in the order the step uses
+    // the ingredients (flour, then yoghurt); the demo's allergens are suggestions.
+    expect(stepWith(us, '{{plain-yoghurt*5/7|item}}').allergensUs).toEqual(['Wheat', 'Milk'])
     expect(stepWith(us, '{{plain-yoghurt*5/7|item}}').allergensUnchecked).toEqual(['self-raising flour', 'plain yoghurt'])
     expect((await producer.patch('/api/studios/1', { unitSystem: 'metric' })).status).toBe(200)
   })
