@@ -82,7 +82,8 @@ export function allergenCertaintyText(i: { allergens: IngredientAllergens } & Al
     const date = when && !Number.isNaN(when.getTime()) ? ` on ${when.toLocaleDateString(locale, { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' })}` : ''
     return `checked${i.allergensCheckedBy ? ` by ${i.allergensCheckedBy}` : ''}${date}`
   }
-  return state === 'suggested' ? 'suggested from the name, not checked' : 'none declared, not checked'
+  if (state === 'none-declared') return 'none declared, not checked'
+  return i.allergens.eu.length || i.allergens.us.length ? 'suggested from the name, not checked' : 'none suggested from the name, not checked'
 }
 
 export interface AllergenMapping {

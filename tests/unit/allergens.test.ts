@@ -190,6 +190,8 @@ describe('allergen certainty per ingredient', () => {
       .toBe('checked by Ada Cook on 2 December 2026')
     expect(allergenCertaintyText({ allergens: milk })).toBe('suggested from the name, not checked')
     expect(allergenCertaintyText({ allergens: none })).toBe('none declared, not checked')
+    // rows saved before certainty was stored are 'suggested', some with nothing suggested (salt)
+    expect(allergenCertaintyText({ allergens: none, allergenState: 'suggested' })).toBe('none suggested from the name, not checked')
   })
   it('lists the unchecked items beside each group and for the recipe', () => {
     const list = listRecipeAllergens([
