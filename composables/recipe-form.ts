@@ -1,9 +1,10 @@
 // The recipe editor's form: what the inputs hold (text, so nothing typed is lost or reformatted
 // while editing), and the conversions between it, a loaded recipe and the request body.
 import type { CautionId } from '~~/shared/utils/cautions'
-import type { EuAllergenId, UsAllergenId } from '~~/shared/utils/allergens'
+import type { AllergenState, EuAllergenId, UsAllergenId } from '~~/shared/utils/allergens'
 import type { RecipeStation } from '~~/shared/types/recipe'
 import type { UnitId } from '~~/shared/utils/units'
+import type { FluidMeasure } from '~~/shared/utils/fluid-measure'
 import type { LoadedRecipe } from '~/types/api'
 
 /** A link to an earlier step beyond "waits for" (start with it, or finish together), by position. */
@@ -25,7 +26,10 @@ export interface IngredientRow {
   group: string
   allergens: { eu: EuAllergenId[]; us: UsAllergenId[] }
   /** "suggested": filled from the item's name and not yet confirmed by the user. */
-  allergenState: 'suggested' | 'confirmed'
+  /** Suggested from the name, checked by a person (stamped by the server on save), or none declared. */
+  allergenState: AllergenState
+  /** "checked by Ada Cook on 2 December 2026", as loaded; empty for a row not yet saved as checked. */
+  allergenCheckedText: string
   priceId: number | null
 }
 
@@ -93,7 +97,8 @@ export function formFromRecipe(r: LoadedRecipe): RecipeForm {
     ingredients: r.ingredients.map((i) => ({
       uid: `ing-${i.id}`, id: i.id, key: i.key, keyAuto: false, min: amountText(i.min), max: i.max === i.min ? '' : amountText(i.max),
       unit: (i.unit ?? '') as UnitId | '', item: i.item, prep: i.prep ?? '', optional: i.optional, toTaste: i.toTaste, group: i.group ?? '',
-      allergens: { eu: [...i.allergens.eu] as EuAllergenId[], us: [...i.allergens.us] as UsAllergenId[] }, allergenState: 'confirmed', priceId: i.priceId,
+      allergens: { eu: [...i.allergens.eu] as EuAllergenId[], us: [...i.allergens.us] as UsAllergenId[] }, allergenState: allergenStateOf(i as never),
+      allergenCheckedText: allergenStateOf(i as never) === 'checked' ? allergenCertaintyText(i as never) : '', priceId: i.priceId,
     })),
     steps: r.steps.map((s, index) => ({
       uid: stepUids[index]!, id: s.id, name: s.name ?? '', text: s.text, script: s.script.join('\n'), handsOn: s.handsOn,
@@ -112,13 +117,15 @@ export function ingredientRow(parts: Partial<Pick<IngredientRow, 'min' | 'max' |
   return {
     uid: rowUid('ing'), key: item ? makeIngredientKey(item, takenKeys) : '', keyAuto: true, min: parts.min ?? '', max: parts.max ?? '', unit: parts.unit ?? '',
     item, prep: parts.prep ?? '', optional: parts.optional ?? false, toTaste: parts.toTaste ?? false, group: '',
-    allergens: { eu: s.eu, us: s.us }, allergenState: 'suggested', priceId: null,
+    allergens: { eu: s.eu, us: s.us }, allergenState: s.eu.length || s.us.length ? 'suggested' : 'none-declared', allergenCheckedText: '', priceId: null,
   }
 }
 
 /** "2 1/2 cups plain flour, sifted" as a row, and what the reader was unsure of. */
-export function ingredientFromLine(line: string, takenKeys: string[], cups: 'us' | 'metric' = 'us'): { row: IngredientRow; warnings: string[] } {
-  const q = parseQuantity(line, { cups })
+export function ingredientFromLine(
+  line: string, takenKeys: string[], cups: 'us' | 'metric' = 'us', fluid: FluidMeasure = 'us',
+): { row: IngredientRow; warnings: string[] } {
+  const q = parseQuantity(line, { cups, fluid })
   const row = ingredientRow({
     min: amountText(q.min), max: q.max === q.min ? '' : amountText(q.max), unit: q.unit ?? '', item: q.item, prep: q.prep ?? '', optional: q.optional, toTaste: q.toTaste,
   }, takenKeys)
@@ -207,7 +214,7 @@ export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>;
     return {
       ...(r.id ? { id: r.id } : {}), key: r.key || makeIngredientKey(r.item || 'ingredient', form.ingredients.map((x) => x.key)),
       min: min ?? max, max: max ?? min, unit: r.unit || null, item: r.item.trim(), prep: r.prep.trim() || null, optional: r.optional, toTaste: r.toTaste,
-      group: r.group.trim() || null, allergens: { eu: r.allergens.eu, us: r.allergens.us }, priceId: r.priceId,
+      group: r.group.trim() || null, allergens: { eu: r.allergens.eu, us: r.allergens.us }, allergenState: r.allergenState, priceId: r.priceId,
     }
   })
   const steps = form.steps.map((s, i) => {

@@ -88,13 +88,13 @@ export const demoRecipes: DemoRecipe[] = [
       ['1 pinch salt', null],
     ],
     steps: [
-      { text: 'Mix {{self-raising-flour|item}} with {{plain-yoghurt*5/7|item}} and the salt into a soft dough.', script: ['Just two things in the bowl: flour and yoghurt.'], handsOn: true, minutes: [4, 5], station: 'counter', shot: 'Overhead on the bowl' },
+      { text: 'Mix {{self-raising-flour|item}} with {{plain-yoghurt*5/7|item}} and the salt into a soft dough.', script: ['Just two things in the bowl: flour and yoghurt.'], handsOn: true, minutes: [4, 5], station: 'counter', shot: 'Overhead on the bowl', cautions: ['allergen'] },
       { name: 'Dough rest', text: 'Cover and rest the dough.', handsOn: false, minutes: [15, 20], after: [1], shot: 'Quick insert of the covered bowl' },
       // Made while the dough rests: starts together with the rest instead of after it.
       { text: 'Chop the mint and stir it into the rest of the yoghurt.', script: ['While the dough rests, the dip.'], handsOn: true, minutes: [3, 4], station: 'counter',
         links: [{ step: 2, kind: 'start-start', lag: 0 }], shot: 'Close on the knife', cautions: ['knife', 'allergen'] },
       { text: 'Divide and roll the dough into six rounds.', handsOn: true, minutes: [5, 6], station: 'counter', after: [2], shot: 'Hands on the board' },
-      { text: 'Cook each round in a hot dry pan until puffed and spotted.', script: ['Watch for the bubbles — that is when you flip.'], handsOn: true, minutes: [10, 12], station: 'burner', after: [4], shot: 'Side angle on the pan', cautions: ['hot-holding'] },
+      { text: 'Cook each round in a hot dry pan until puffed and spotted.', script: ['Watch for the bubbles — that is when you flip.'], handsOn: true, minutes: [10, 12], station: 'burner', after: [4], shot: 'Side angle on the pan', cautions: ['hot-pan'] },
     ],
   },
   {
@@ -117,7 +117,7 @@ export const demoRecipes: DemoRecipe[] = [
       { name: 'Lentil simmer', text: 'Simmer {{green-lentils|item}} in plenty of water until just tender.', handsOn: false, minutes: [20, 25], station: 'burner', after: [1], shot: 'Locked-off on the pot', cautions: ['boiling'] },
       // Whisked in the last five minutes of the roast, so sauce and squash are ready together.
       { text: 'Whisk {{tahini|item}} with the lemon juice and cold water to a pourable sauce.', script: ['It seizes first, then loosens — keep whisking.'], handsOn: true, minutes: [3, 4], station: 'counter', links: [{ step: 2, kind: 'finish-together', lag: 300 }], shot: 'Close on the whisk', cautions: ['allergen'] },
-      { text: 'Drain the lentils, dress with the rest of the oil and salt, and top with squash and sauce.', script: ['Lentils down, squash on top, sauce over everything.'], handsOn: true, minutes: [3, 4], after: [2, 3, 4], shot: 'Hero shot of the plate', cautions: ['oven'] },
+      { text: 'Drain the lentils, dress with the rest of the oil and salt, and top with squash and sauce.', script: ['Lentils down, squash on top, sauce over everything.'], handsOn: true, minutes: [3, 4], after: [2, 3, 4], shot: 'Hero shot of the plate', cautions: ['boiling'] },
     ],
   },
 ]

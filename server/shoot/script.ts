@@ -7,9 +7,9 @@ import { Episode, Recipe, RecipeStep, Studio } from '../db/models'
 import { loadRecipe, studioSettings } from '../utils/recipes'
 import { scaleLoadedRecipe } from '../utils/recipe-maths'
 import type { ShootSnapshot } from '../../shared/types/socket-events'
-import { euAllergenLabel, type EuAllergenId } from '../../shared/utils/allergens'
+import { allergenStateOf, euAllergenLabel, usAllergenLabel, type EuAllergenId, type UsAllergenId } from '../../shared/utils/allergens'
 import { findStepTokens } from '../../shared/utils/step-text'
-import { CAUTIONS, isCautionId } from '../../shared/utils/cautions'
+import { cautionsFor, countryOfLocale, isCautionId } from '../../shared/utils/cautions'
 import type { ShootRow } from './store'
 
 export type ShootScript = Pick<ShootSnapshot, 'steps' | 'units' | 'makespanMs'>
@@ -19,6 +19,7 @@ export async function buildShootScript(row: ShootRow): Promise<ShootScript> {
   const ids = new Set(stepIdsOf(row))
   const settings = await studioSettings(row.studioId)
   const units = settings.unitSystem as 'metric' | 'us'
+  const CAUTIONS = cautionsFor(countryOfLocale(settings.locale))
   // The plan the shoot began with (server/shoot/plan.ts); none on a shoot the planner refused.
   const first = row.state.plan?.first ?? null
   const names = new Map((row.state.plan?.steps ?? []).map((p) => [p.id, p.name]))
@@ -39,6 +40,9 @@ export async function buildShootScript(row: ShootRow): Promise<ShootScript> {
         return sc && v ? [{ scaled: sc, view: v }] : []
       })
       const allergens = [...new Set(used.flatMap((u) => (u.view.allergens?.eu ?? []) as EuAllergenId[]))].map(euAllergenLabel)
+      // The US list beside the EU one when the studio works in US units (FALCPA 2004, FASTER Act 2021).
+      const allergensUs = units === 'us' ? [...new Set(used.flatMap((u) => (u.view.allergens?.us ?? []) as UsAllergenId[]))].map(usAllergenLabel) : []
+      const allergensUnchecked = used.filter((u) => allergenStateOf(u.view as never) !== 'checked').map((u) => u.view.item)
       const plan = first?.steps[String(s.id)]
       const cautions = allergens.length && !s.cautions.includes('allergen') ? [...s.cautions, 'allergen'] : s.cautions
       steps[String(s.id)] = {
@@ -50,6 +54,8 @@ export async function buildShootScript(row: ShootRow): Promise<ShootScript> {
         segments: rendered.get(s.id)?.segments ?? [{ text: s.text }],
         ingredients: used.map((u) => ({ key: u.scaled.key, item: u.scaled.item, amount: u.scaled.text })),
         allergens,
+        allergensUs,
+        allergensUnchecked,
         plannedStartMs: plan?.startMs ?? null,
         plannedEndMs: plan?.endMs ?? null,
         name: names.get(String(s.id)) ?? null,

@@ -60,7 +60,7 @@ export async function assertPricesInStudio(studioId: number, ingredients: { pric
 
 export async function importPriceCsv(studioId: number, text: string) {
   const studio = await Studio.findByPk(studioId)
-  const { prices, errors } = parsePriceCsv(text, { defaultCurrency: studio?.currency })
+  const { prices, errors } = parsePriceCsv(text, { defaultCurrency: studio?.currency, fluid: studioFluidMeasure(studio ?? {}) })
   const sequelize = await useDb()
   const added = await sequelize.transaction(async () => {
     const rows = []

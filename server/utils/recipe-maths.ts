@@ -17,12 +17,14 @@ export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, 
   const system = units ?? (settings.unitSystem as 'metric' | 'us')
   const target = servings ?? recipe.servings
   const draft = recipeDraft(recipe)
-  const scaled = scaleRecipeIngredients(draft.ingredients, recipe.servings, target, { system, metricCups: settings.cupUnit === 'metric-cup' })
+  const display = { system, metricCups: settings.cupUnit === 'metric-cup', fluid: settings.fluidMeasure }
+  const scaled = scaleRecipeIngredients(draft.ingredients, recipe.servings, target, display)
   const byKey = new Map(recipe.ingredients.map((i) => [i.key, i]))
   const factor = target / recipe.servings
   return {
     servings: target,
     units: system,
+    fluidMeasure: settings.fluidMeasure,
     ingredients: scaled.ingredients.map((s) => {
       const ing = byKey.get(s.key)!
       return {
@@ -31,7 +33,7 @@ export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, 
       }
     }),
     steps: recipe.steps.map((step) => {
-      const rendered = renderStepText(step.text, { system, metricCups: settings.cupUnit === 'metric-cup', ingredients: draft.ingredients, fromServings: recipe.servings, toServings: target })
+      const rendered = renderStepText(step.text, { ...display, ingredients: draft.ingredients, fromServings: recipe.servings, toServings: target })
       return { id: step.id, position: step.position, text: rendered.text, segments: rendered.segments, problems: rendered.problems }
     }),
     factor,
@@ -42,11 +44,14 @@ async function pricesFor(studioId: number) {
   return (await listPrices(studioId)).map(studioPrice)
 }
 
-type CostLine = { key: string; item: string; min: number | null; max: number | null; unit: string | null; optional: boolean; priceId: number | null }
+type CostLine = {
+  key: string; item: string; min: number | null; max: number | null; unit: string | null; optional: boolean; toTaste?: boolean; priceId: number | null
+}
 
 function costInput(ingredients: CostLine[]) {
   return ingredients.map((i) => ({
-    key: i.key, item: i.item, min: i.min, max: i.max, unit: i.unit as UnitId | null, optional: i.optional, priceId: i.priceId ? String(i.priceId) : null,
+    key: i.key, item: i.item, min: i.min, max: i.max, unit: i.unit as UnitId | null, optional: i.optional, toTaste: i.toTaste === true,
+    priceId: i.priceId ? String(i.priceId) : null,
   }))
 }
 
@@ -76,6 +81,7 @@ export async function recipeCostView(recipeId: number, studioId: number, serving
     lines: cost.lines.map((l) => ({ ...l, cost: l.costMinor === null ? null : dec(l.costMinor), formatted: l.costMinor === null ? null : fmt(l.costMinor) })),
     missing: cost.missing.map((l) => ({ key: l.key, item: l.item, message: l.message })),
     problems: cost.problems.map((l) => ({ key: l.key, item: l.item, message: l.message })),
+    unmeasured: cost.unmeasured.map((l) => ({ key: l.key, item: l.item, message: l.message })),
   }
 }
 
@@ -95,6 +101,9 @@ export async function listRecipes(studioId: number, filters: { q?: string; tag?:
     return {
       id: r.id, title: r.title, summary: r.summary, servings: r.servings, tags: r.tags, photo: photoUrl(r.photo), updatedAt: r.updatedAt,
       allergens: { eu: allergens.eu.map((a: { id: string }) => a.id), us: allergens.us.map((a: { id: string }) => a.id) },
+      /** Ingredients whose allergens nobody has checked. */
+      allergensUnchecked: allergens.unchecked.length,
+      freeOf: filters.without ? recipeFreeOf(ings as never, filters.without) : null,
       cost: {
         perServing: minorToDecimal(cost.perServingMinor, cost.currency),
         perServingWithOptional: minorToDecimal(cost.perServingWithOptionalMinor, cost.currency),
@@ -104,11 +113,15 @@ export async function listRecipes(studioId: number, filters: { q?: string; tag?:
       },
     }
   })
-  const filtered = recipes.filter((r) =>
+  const others = recipes.filter((r) =>
     (!filters.tag || r.tags.includes(filters.tag))
-    && (!filters.allergen || r.allergens.eu.includes(filters.allergen) || r.allergens.us.includes(filters.allergen))
-    && (!filters.without || (!r.allergens.eu.includes(filters.without) && !r.allergens.us.includes(filters.without))))
-  return { recipes: filtered, currency: settings.currency, budgetPerServingMinor: settings.budgetPerServingMinor }
+    && (!filters.allergen || r.allergens.eu.includes(filters.allergen) || r.allergens.us.includes(filters.allergen)))
+  // "Free of" counts only checked ingredients: a recipe is listed when none contains the group and all are
+  // checked; one that lists no such group but has unchecked ingredients is named apart, with how many.
+  const filtered = others.filter((r) => !r.freeOf || r.freeOf.free)
+  const notChecked = others.filter((r) => r.freeOf && !r.freeOf.contains && !r.freeOf.free)
+    .map((r) => ({ id: r.id, title: r.title, unchecked: r.freeOf!.unchecked }))
+  return { recipes: filtered, notChecked, currency: settings.currency, budgetPerServingMinor: settings.budgetPerServingMinor }
 }
 
 export async function updateStudioSettings(studioId: number, body: z.output<typeof studioSettingsSchema>) {

@@ -18,6 +18,8 @@ export function recipeView(r: Loaded) {
   const ingredients = [...r.ingredients].sort((a, b) => a.position - b.position).map((i) => ({
     id: i.id, key: i.key, position: i.position, min: i.min, max: i.max, unit: i.unit, item: i.item, prep: i.prep,
     optional: i.optional, toTaste: i.toTaste, group: i.group, allergens: i.allergens, priceId: i.priceId,
+    allergenState: allergenStateOf(i as never), allergensCheckedBy: i.allergensCheckedBy ?? null,
+    allergensCheckedAt: i.allergensCheckedAt ? new Date(i.allergensCheckedAt).toISOString() : null,
   }))
   const steps = [...r.steps].sort((a, b) => a.position - b.position).map((s) => ({
     id: s.id, position: s.position, name: s.name ?? null, text: s.text, script: s.script, handsOn: s.handsOn,
@@ -57,12 +59,28 @@ export async function requireRecipe(event: H3Event, action: StudioAction, param 
   return { caller, recipeId: id, studioId }
 }
 
-async function writeParts(recipeId: number, body: RecipeCreateBody) {
+/** Who is saving: the name stored beside the allergens they mark checked. */
+export interface Checker { name: string }
+
+/**
+ * The allergen certainty to store: a row marked checked keeps its earlier stamp when its allergens have
+ * not changed, and is stamped with the saver's name and now otherwise; any other state has no stamp.
+ */
+function certainty(ing: RecipeCreateBody['ingredients'][number], existing: RecipeIngredient | null, checker: Checker | null) {
+  const state = allergenStateOf(ing as never)
+  if (state !== 'checked') return { allergenState: state, allergensCheckedBy: null, allergensCheckedAt: null }
+  const same = existing && existing.allergenState === 'checked' && JSON.stringify(existing.allergens) === JSON.stringify(ing.allergens)
+  if (same) return { allergenState: state, allergensCheckedBy: existing.allergensCheckedBy ?? null, allergensCheckedAt: existing.allergensCheckedAt ?? null }
+  if (!checker) throw new DomainError('invalid', `ingredients: only a signed-in person can mark "${ing.item}" as checked.`, { field: 'ingredients.allergenState' })
+  return { allergenState: state, allergensCheckedBy: checker.name, allergensCheckedAt: new Date() }
+}
+
+async function writeParts(recipeId: number, body: RecipeCreateBody, checker: Checker | null) {
   const keepIngredients = body.ingredients.map((i) => i.id).filter((x): x is number => !!x)
   await RecipeIngredient.destroy({ where: { recipeId, ...(keepIngredients.length ? { id: { [Op.notIn]: keepIngredients } } : {}) } })
   for (const [index, { id, ...ing }] of body.ingredients.entries()) {
-    const values = { ...ing, recipeId, position: index + 1, priceId: ing.priceId ?? null } as never
     const existing = id ? await RecipeIngredient.findOne({ where: { id, recipeId } }) : null
+    const values = { ...ing, ...certainty(ing, existing, checker), recipeId, position: index + 1, priceId: ing.priceId ?? null } as never
     if (existing) await existing.update(values)
     else await RecipeIngredient.create(values)
   }
@@ -81,11 +99,11 @@ function recipeFields(body: RecipeCreateBody) {
   return { title, summary, servings, yieldText, tags, notes, times }
 }
 
-export async function createRecipe(studioId: number, body: RecipeCreateBody): Promise<RecipeView> {
+export async function createRecipe(studioId: number, body: RecipeCreateBody, checker: Checker | null = null): Promise<RecipeView> {
   const sequelize = await useDb()
   const id = await sequelize.transaction(async () => {
     const recipe = await Recipe.create({ studioId, ...recipeFields(body) })
-    await writeParts(recipe.id, body)
+    await writeParts(recipe.id, body, checker)
     return recipe.id
   })
   return (await loadRecipe(id))!
@@ -95,7 +113,7 @@ export async function createRecipe(studioId: number, body: RecipeCreateBody): Pr
  * Saves only when the recipe is still at the version the editor started from. Otherwise a 409
  * that carries the newer recipe, so the page can keep the editor's text and show what changed.
  */
-export async function saveRecipe(recipeId: number, body: RecipeUpdateBody): Promise<RecipeView> {
+export async function saveRecipe(recipeId: number, body: RecipeUpdateBody, checker: Checker | null = null): Promise<RecipeView> {
   const sequelize = await useDb()
   await sequelize.transaction(async () => {
     const [changed] = await Recipe.update(
@@ -110,7 +128,7 @@ export async function saveRecipe(recipeId: number, body: RecipeUpdateBody): Prom
         { data: { current } },
       )
     }
-    await writeParts(recipeId, body)
+    await writeParts(recipeId, body, checker)
   })
   return (await loadRecipe(recipeId))!
 }
@@ -132,13 +150,14 @@ export async function studioSettings(studioId: number) {
     id: s.id, name: s.name, locale: s.locale as string, currency: s.currency as string,
     budgetPerServingMinor: (s.budgetPerServingMinor ?? null) as number | null, cupUnit: s.cupUnit as string,
     unitSystem: s.unitSystem as string, kitchen: s.kitchen as KitchenProfile,
+    fluidMeasure: studioFluidMeasure(s), fluidMeasureChosen: s.fluidMeasure === 'us' || s.fluidMeasure === 'imperial',
   }
 }
 
 /** Reads an import into a body ready to save, with what could not be understood. */
 export async function readRecipeImport(studioId: number, text: string) {
   const settings = await studioSettings(studioId)
-  const { imported, body, invalid } = await readImportOffLoop(text, { cups: settings.cupUnit === 'metric-cup' ? 'metric' : 'us' })
+  const { imported, body, invalid } = await readImportOffLoop(text, { cups: settings.cupUnit === 'metric-cup' ? 'metric' : 'us', fluid: settings.fluidMeasure })
   if (invalid) {
     throw new DomainError('invalid', `The recipe was read, but ${invalid.field}: ${invalid.message}`, { data: { field: invalid.field, draft: imported.recipe, problems: imported.problems } })
   }

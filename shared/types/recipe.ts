@@ -1,7 +1,7 @@
 // A recipe as Hobline edits, imports, exports, scales and costs it: plain, serialisable data
 // (JSON-safe: strings, numbers, booleans, null, arrays), stored by the server as it is.
 // Amounts are kept as the recipe states them (1½ cup) and converted only for display or maths.
-import type { IngredientAllergens } from '../utils/allergens'
+import type { AllergenState, IngredientAllergens } from '../utils/allergens'
 import type { CautionId } from '../utils/cautions'
 import type { UnitId } from '../utils/units'
 
@@ -25,6 +25,11 @@ export interface RecipeIngredientDraft {
   /** Ingredient group heading: "For the sauce". */
   group: string | null
   allergens: IngredientAllergens
+  /** How sure `allergens` is; absent: suggested when it lists something, else none declared. */
+  allergenState?: AllergenState
+  /** Who checked the allergens and when (ISO), for a checked ingredient. */
+  allergensCheckedBy?: string | null
+  allergensCheckedAt?: string | null
   /** The studio price this ingredient is costed with (not exported: prices belong to the studio). */
   priceId?: string | number | null
 }

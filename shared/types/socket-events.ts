@@ -41,6 +41,10 @@ export interface ShootStepDetails {
   ingredients: Array<{ key: string; item: string; amount: string }>
   /** EU allergen groups (Regulation (EU) No 1169/2011 Annex II) of those ingredients. */
   allergens: string[]
+  /** The US major food allergens of those ingredients (FALCPA, FASTER Act), in the order the step uses them, when the studio works in US units; else empty. */
+  allergensUs?: string[]
+  /** Those ingredients whose allergens nobody has checked (suggested from the name, or none declared). */
+  allergensUnchecked?: string[]
   handsOn: boolean
   durationMin: number | null
   durationMax: number | null

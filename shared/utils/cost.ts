@@ -3,6 +3,8 @@
 // each figure is rounded once. Amounts are converted to the package's unit (through the item's
 // density between mass and volume); a line that cannot be costed is listed with the reason.
 // A range ("2–3 onions") is costed at its upper end by default, so a quoted figure is never low.
+// A "to taste" line with no amount cannot be costed, so it leaves the cost incomplete (listed in
+// `unmeasured`): the figure is a lower bound until someone writes how much goes in.
 import type { UnitId } from './units'
 import { UnitConversionError, unitKind, unitLabel } from './units'
 import { convertIngredientAmount, type UserDensity } from './density'
@@ -33,10 +35,12 @@ export interface CostedIngredient {
   max: number | null
   unit: UnitId | null
   optional: boolean
+  /** "Salt, to taste": the amount is the cook's. */
+  toTaste?: boolean
   priceId?: PriceId | null
 }
 
-export type CostLineStatus = 'priced' | 'no-price' | 'no-amount' | 'cannot-convert' | 'other-currency'
+export type CostLineStatus = 'priced' | 'no-price' | 'no-amount' | 'to-taste' | 'cannot-convert' | 'other-currency'
 
 export interface CostLine {
   key: string
@@ -79,7 +83,9 @@ export interface RecipeCost {
   missing: CostLine[]
   /** Lines with a price that could not be used (unit or currency). */
   problems: CostLine[]
-  /** True when every line with an amount is priced. */
+  /** Required "to taste" lines with no amount: their cost is not in the figures. */
+  unmeasured: CostLine[]
+  /** True when every line with an amount is priced and no required line is "to taste" without an amount. */
   complete: boolean
   budget: { perServingMinor: number; over: boolean; overWithOptional: boolean } | null
 }
@@ -96,6 +102,9 @@ function amountFor(ing: CostedIngredient, rangeAt: CostOptions['rangeAt']): numb
 function costLine(ing: CostedIngredient, prices: ReadonlyMap<PriceId, StudioPrice>, o: CostOptions, scale: number): CostLine {
   const base = { key: ing.key, item: ing.item, optional: ing.optional, priceId: ing.priceId ?? null, amountUsed: null, costExact: null, costMinor: null }
   const amount = amountFor(ing, o.rangeAt)
+  if (amount === null && ing.toTaste) {
+    return { ...base, status: 'to-taste', message: `"${ing.item}" is to taste, so its cost is not counted; write how much a cook uses to cost it` }
+  }
   if (amount === null) return { ...base, status: 'no-amount', message: `"${ing.item}" has no amount, so it is not costed` }
   const price = ing.priceId != null ? prices.get(ing.priceId) : undefined
   if (!price) return { ...base, status: 'no-price', message: `"${ing.item}" has no price; link it to one in the studio price list` }
@@ -148,6 +157,7 @@ export function costRecipe(ingredients: readonly CostedIngredient[], prices: rea
   const target = options.budgetPerServingMinor
   const missing = lines.filter((l) => l.status === 'no-price')
   const problems = lines.filter((l) => l.status === 'cannot-convert' || l.status === 'other-currency')
+  const unmeasured = lines.filter((l) => l.status === 'to-taste' && !l.optional)
   return {
     currency: options.currency,
     minorDigits,
@@ -159,7 +169,8 @@ export function costRecipe(ingredients: readonly CostedIngredient[], prices: rea
     lines,
     missing,
     problems,
-    complete: missing.length === 0 && problems.length === 0,
+    unmeasured,
+    complete: missing.length === 0 && problems.length === 0 && unmeasured.length === 0,
     budget: target == null ? null : { perServingMinor: target, over: perServingMinor > target, overWithOptional: perServingWithOptionalMinor > target },
   }
 }

@@ -1,6 +1,7 @@
-// Money in integer minor units (pence, cents, yen), with the currency's number of minor-unit
-// digits and its formatting taken from Intl (ISO 4217 data as the JavaScript engine ships it:
-// GBP 2, JPY 0, KWD 3).
+// Money in integer minor units (pence, cents, yen). The number of minor-unit digits comes from one
+// table of ISO 4217 (shared/data/iso4217-minor-units.ts: GBP 2, JPY 0, KWD 3, HUF 2), the same in the
+// browser and on the server; Intl only supplies the symbol and the grouping, told how many digits to show.
+import { ISO4217_NO_MINOR_UNIT, iso4217MinorDigits } from '../data/iso4217-minor-units'
 
 export class MoneyError extends Error {
   constructor(message: string) {
@@ -23,13 +24,16 @@ export function isCurrencyCode(code: unknown): code is string {
 }
 
 function checkCurrency(currency: string): void {
+  if (ISO4217_NO_MINOR_UNIT.includes(currency)) {
+    throw new MoneyError(`"${currency}" has no minor unit in ISO 4217 (a metal, fund or test code), so it cannot price food; use a currency such as GBP, EUR or USD`)
+  }
   if (!isCurrencyCode(currency)) throw new MoneyError(`"${currency}" is not an ISO 4217 currency code; use three capital letters such as GBP, EUR, USD or JPY`)
 }
 
-/** Digits after the decimal point for a currency: 2 for GBP, 0 for JPY, 3 for KWD. */
+/** Digits after the decimal point for a currency, from ISO 4217: 2 for GBP and HUF, 0 for JPY, 3 for KWD. */
 export function currencyMinorDigits(currency: string): number {
   checkCurrency(currency)
-  return new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions().maximumFractionDigits ?? 2
+  return iso4217MinorDigits(currency)
 }
 
 /** Minor units as a decimal amount of the currency: 249 GBP → 2.49; 250 JPY → 250. */
@@ -41,7 +45,9 @@ export function minorToDecimal(minor: number, currency: string): number {
 
 /** Money for people, in the studio's locale: formatMoney(123450, 'EUR', 'de-DE') → "1.234,50 €". */
 export function formatMoney(minor: number, currency: string, locale: string): string {
-  return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(minorToDecimal(minor, currency))
+  const digits = currencyMinorDigits(currency)
+  return new Intl.NumberFormat(locale, { style: 'currency', currency, minimumFractionDigits: digits, maximumFractionDigits: digits })
+    .format(minorToDecimal(minor, currency))
 }
 
 /**

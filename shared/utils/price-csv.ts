@@ -7,6 +7,7 @@ import { parseCsv } from './csv'
 import { isCurrencyCode, parseMoneyToMinor } from './money'
 import { isUnitId, type UnitId } from './units'
 import type { StudioPrice } from './cost'
+import { fluidUnit, type FluidMeasure } from './fluid-measure'
 
 export type PriceDraft = Omit<StudioPrice, 'id'> & { line: number }
 
@@ -32,13 +33,18 @@ const EACH = new Set(['each', 'ea', 'item', 'items', 'unit', 'units', 'whole'])
 
 const norm = (h: string) => h.trim().toLowerCase().replace(/[_\-\s]+/g, ' ')
 
-/** A unit as a price list writes it: a unit id, a unit name ("grams", "fl oz"), or "each" (null). */
-export function readPriceUnit(text: string): UnitId | null | undefined {
+/**
+ * A unit as a price list writes it: a unit id, a unit name ("grams", "fl oz"), or "each" (null). A bare
+ * "pint", "quart", "gallon" or "fl oz" is the studio's (imperial in a UK studio); "US pint" and
+ * "imperial pint" say which.
+ */
+export function readPriceUnit(text: string, fluid: FluidMeasure = 'us'): UnitId | null | undefined {
   const t = text.trim()
   if (!t || EACH.has(t.toLowerCase())) return null
-  if (isUnitId(t)) return t
+  if (isUnitId(t)) return fluidUnit(t, fluid)
   const hit = UNIT_NAMES.find((u) => (u.caseSensitive ? u.name === t : u.name === t.toLowerCase().replace(/\.$/, '')))
-  return hit ? hit.id : undefined
+  if (!hit) return undefined
+  return hit.generic === 'fluid' ? fluidUnit(hit.id, fluid) : hit.id
 }
 
 function validDate(s: string): boolean {
@@ -48,7 +54,9 @@ function validDate(s: string): boolean {
   return d.getUTCFullYear() === Number(m[1]) && d.getUTCMonth() === Number(m[2]) - 1 && d.getUTCDate() === Number(m[3])
 }
 
-export function parsePriceCsv(text: string, options: { defaultCurrency?: string } = {}): { prices: PriceDraft[]; errors: PriceCsvError[] } {
+export function parsePriceCsv(
+  text: string, options: { defaultCurrency?: string; fluid?: FluidMeasure } = {},
+): { prices: PriceDraft[]; errors: PriceCsvError[] } {
   const { records, errors: csvErrors } = parseCsv(text)
   const errors: PriceCsvError[] = csvErrors.map((e) => ({ line: e.line, column: null, message: e.message }))
   const header = records[0]
@@ -84,7 +92,7 @@ export function parsePriceCsv(text: string, options: { defaultCurrency?: string 
     const packageSize = /^\d+([.,]\d+)?$/.test(sizeText) ? Number(sizeText.replace(',', '.')) : Number.NaN
     if (!(packageSize > 0)) bad('packageSize', `"${sizeText}" is not a package size; write a number above zero, like 500 or 1.5`)
     const unitText = get('unit')
-    const packageUnit = readPriceUnit(unitText)
+    const packageUnit = readPriceUnit(unitText, options.fluid)
     if (packageUnit === undefined) bad('unit', `"${unitText}" is not a unit Hobline knows; use g, kg, ml, l, oz, lb, tsp, cup, or "each"`)
     const currency = (get('currency') || options.defaultCurrency || '').toUpperCase()
     let priceMinor = Number.NaN

@@ -1,7 +1,7 @@
 // Request bodies for recipes and prices. The server validates with these; the editor can check the
 // same rules before saving. Field names follow shared/types/recipe.ts.
 import { z } from 'zod'
-import { EU_ALLERGENS, US_ALLERGENS } from './allergens'
+import { ALLERGEN_STATES, EU_ALLERGENS, US_ALLERGENS } from './allergens'
 import { CAUTION_IDS } from './cautions'
 import { INGREDIENT_KEY } from './step-text'
 import { STEP_NAME_MAX } from './step-name'
@@ -28,6 +28,7 @@ export const recipeIngredientSchema = z.object({
     eu: z.array(z.enum(EU_ALLERGENS.map((a) => a.id) as [string, ...string[]], { error: 'Unknown EU allergen group.' })).max(14),
     us: z.array(z.enum(US_ALLERGENS.map((a) => a.id) as [string, ...string[]], { error: 'Unknown US allergen.' })).max(9),
   }).default({ eu: [], us: [] }),
+  allergenState: z.enum(ALLERGEN_STATES, { error: 'allergenState must be suggested, checked or none-declared.' }).optional(),
   priceId: z.number().int().positive().nullable().optional(),
 }).refine((i) => i.min === null || i.max === null || i.min <= i.max, { message: 'The lower amount (min) must not be above the upper one (max).', path: ['min'] })
 
@@ -108,6 +109,7 @@ export const studioSettingsSchema = z.object({
   budgetPerServingMinor: z.number().int('budgetPerServingMinor must be whole minor units.').min(0).max(1e8).nullable().optional(),
   cupUnit: z.enum(['cup', 'metric-cup'], { error: 'cupUnit must be cup (US, 236.6 mL) or metric-cup (250 mL).' }).optional(),
   unitSystem: z.enum(['metric', 'us'], { error: 'unitSystem must be metric or us.' }).optional(),
+  fluidMeasure: z.enum(['us', 'imperial'], { error: 'fluidMeasure must be us (1 pint = 473 mL), imperial (568 mL) or null to follow the locale.' }).nullable().optional(),
   kitchen: z.object({
     hands: z.number({ error: 'kitchen.hands must be a number.' }).int().min(1, 'A kitchen needs at least one cook (kitchen.hands).').max(12),
     burners: z.number({ error: 'kitchen.burners must be a number.' }).int().min(0).max(16),

@@ -3,7 +3,8 @@
 // Rounding rules (common practice of US and metric kitchens; no standard covers them):
 // US volume  under 1 tbsp: teaspoons to ⅛ ¼ ½ ¾; under ¼ cup: tablespoons plus teaspoons
 //            ("1 tbsp + 1 tsp"; a range uses ½ tbsp); under 8 cups: cups to ⅛ ¼ ⅓ ½ ⅔ ¾;
-//            above: quarts to ¼. So 3 tsp shows as 1 tbsp and 16 tbsp as 1 cup.
+//            above: quarts to ¼ (imperial pints to ¼ in a studio of imperial fluid measures).
+//            So 3 tsp shows as 1 tbsp and 16 tbsp as 1 cup.
 // US mass    under 4 oz: ounces to ¼; under 1 lb: whole ounces; above: "1 lb 2 oz" (a range: lb to ¼).
 // Metric vol under 15 mL: spoons as above (spoons are used the world over); under 100 mL: 5 mL
 //            steps; under 1 L: 10 mL steps (or 250 mL metric cups to ¼ ⅓ ½ ⅔ ¾ when the studio
@@ -22,6 +23,8 @@ export interface KitchenDisplayOptions {
   system: DisplaySystem
   /** Show metric volumes from ¼ to 4 metric cups (250 mL) in cups rather than mL. */
   metricCups?: boolean
+  /** The studio's fluid measures: large US-system volumes are shown in imperial pints when 'imperial'. */
+  fluid?: 'us' | 'imperial'
 }
 
 export interface KitchenAmount {
@@ -116,6 +119,7 @@ function chooseDisplay(
     if (options.system === 'us' || ml < 15) {
       if (spoons === 'tbsp') return { unit: 'tbsp', ...conv('tbsp'), render: (v, isRange) => (isRange ? single('tbsp', 'halves')(v) : tbspAndTsp(v)) }
       if (convertAmount(min, unit!, 'cup') < 8) return { unit: 'cup', ...conv('cup'), render: single('cup', 'cups') }
+      if (options.fluid === 'imperial') return { unit: 'imp-pint', ...conv('imp-pint'), render: single('imp-pint', 'quarters') }
       return { unit: 'quart', ...conv('quart'), render: single('quart', 'quarters') }
     }
     if (options.metricCups && ml >= 62.5 && ml < 1000) return { unit: 'metric-cup', ...conv('metric-cup'), render: single('metric-cup', 'cups') }

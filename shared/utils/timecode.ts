@@ -112,11 +112,19 @@ export function timecodeToFrames(text: string, rate: TimecodeRate): number {
   return (minutes * 60 + ss) * nominal + ff - drop * (minutes - Math.floor(minutes / 10))
 }
 
+/**
+ * Within this many frames of a frame's start (33 ns at 29.97 fps), a time is that frame's start: a
+ * start time from framesToMs at 29.97 or 59.94 is a rounded binary fraction and may fall a hair short.
+ */
+const FRAME_START_TOLERANCE = 1e-6
+
 /** The frame shown at a time from the start (the frame that contains that instant). */
 export function msToFrames(ms: number, rate: TimecodeRate): number {
   const { num, den } = rateFacts({ fps: rate.fps })
   if (!Number.isFinite(ms) || ms < 0) throw new RangeError(`a time from the start is at least 0 ms (got ${ms})`)
-  return Math.floor((ms * num) / (den * 1000))
+  const exact = (ms * num) / (den * 1000)
+  const nearest = Math.round(exact)
+  return Math.abs(exact - nearest) <= FRAME_START_TOLERANCE ? nearest : Math.floor(exact)
 }
 
 /** When a frame starts, in ms from the start. */

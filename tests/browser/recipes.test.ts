@@ -63,8 +63,8 @@ describe.skipIf(!chromiumAvailable())('recipes in the browser', async () => {
     expect(await page.getByTestId('ingredient-row-5').getByLabel('Optional').isChecked()).toBe(true)
     // Allergens suggested from the names, shown as suggestions until confirmed.
     await expect(page.getByTestId('ingredient-row-2').getByText('EU · Milk').textContent()).resolves.toBe('EU · Milk')
-    await page.getByRole('button', { name: 'Confirm the allergens of whole milk' }).click()
-    expect(await page.getByRole('button', { name: 'Confirm the allergens of whole milk' }).count()).toBe(0)
+    await page.getByRole('button', { name: 'Label checked: allergens of whole milk' }).click()
+    expect(await page.getByRole('button', { name: 'Label checked: allergens of whole milk' }).count()).toBe(0)
 
     // Enter in a cell adds an empty row below; Alt+↓ moves a row (and an empty row is not saved).
     await row1.getByLabel('Prep note for plain flour').press('Enter')

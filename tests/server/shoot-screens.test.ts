@@ -42,6 +42,10 @@ describe('what the shoot screens read', async () => {
     expect(us.units).toBe('us')
     // NIST Handbook 44 Appendix C: 1 US tablespoon = 14.786 765 mL, so 30 mL = 2.03 tbsp, shown as 2 tbsp.
     expect(stepWith(us, 'Warm {{olive-oil|item}}').ingredients).toEqual([{ key: 'olive-oil', item: 'olive oil', amount: '2 tbsp' }])
+    // In US units the US list (FALCPA 2004: wheat, milk) goes beside the EU one, in the order the step uses
+    // the ingredients (flour, then yoghurt); the demo's allergens are suggestions.
+    expect(stepWith(us, '{{plain-yoghurt*5/7|item}}').allergensUs).toEqual(['Wheat', 'Milk'])
+    expect(stepWith(us, '{{plain-yoghurt*5/7|item}}').allergensUnchecked).toEqual(['self-raising flour', 'plain yoghurt'])
     expect((await producer.patch('/api/studios/1', { unitSystem: 'metric' })).status).toBe(200)
   })
 
@@ -50,8 +54,9 @@ describe('what the shoot screens read', async () => {
     // Flour is a cereal containing gluten and yoghurt is milk (Regulation (EU) No 1169/2011 Annex II,
     // items 1 and 7), in the Annex's order.
     const dough = stepWith(snap, '{{plain-yoghurt*5/7|item}}')
-    expect(dough.allergens).toEqual(['Cereals containing gluten (wheat, rye, barley, oats, spelt, kamut)', 'Milk (including lactose)'])
+    expect(dough.allergens).toEqual(['Cereals containing gluten (wheat (such as spelt and khorasan wheat), rye, barley, oats)', 'Milk (including lactose)'])
     expect(dough.cautions).toContain('allergen')
+    expect(dough.allergensUs).toEqual([]) // the studio works in metric
     expect(dough.cautionNotes.find((c) => c.id === 'allergen')).toEqual({ id: 'allergen', label: CAUTIONS.allergen.label, text: CAUTIONS.allergen.text })
     const warm = stepWith(snap, 'Warm {{olive-oil|item}}')
     expect(warm.allergens).toEqual([])

@@ -1,8 +1,9 @@
 // Cost per serving (shared/utils/cost.ts) and money (shared/utils/money.ts).
 // The formula is DESIGN.md's: Σ (amount used ÷ package size × package price) ÷ servings, in
 // integer minor units rounded once at the end. Minor-unit digits are ISO 4217's (GBP 2, JPY 0,
-// KWD 3), read through Intl; conversions by NIST Handbook 44 Appendix C; the flour density is
-// USDA SR Legacy NDB 20081 (1 cup = 125 g, from memory). Worked examples are computed by hand.
+// KWD 3), from one table (shared/data/iso4217-minor-units.ts); conversions by NIST Handbook 44
+// Appendix C; the flour density is
+// USDA SR Legacy NDB 20081 (1 cup = 125 g, checked against SR Legacy). Worked examples are computed by hand.
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
 import { costRecipe, type CostedIngredient, type StudioPrice } from '../../shared/utils/cost'
@@ -65,6 +66,24 @@ describe('costRecipe: worked example (4 servings, GBP)', () => {
     expect(six.totalMinor).toBe(283) // 188.6426 × 1.5 = 282.96
     expect(six.perServingMinor).toBe(47)
     expect(six.lines.find((l) => l.key === 'butter')!.costMinor).toBe(126)
+  })
+})
+
+describe('"to taste" lines', () => {
+  // Issue 14: a "to taste" line with no amount cannot be costed, so the cost is a lower bound, not complete.
+  const priced = [ing('butter', 100, 'g', 'p-butter')]
+  it('a required "salt, to taste" leaves the cost incomplete and says why', () => {
+    const cost = costRecipe([...priced, { ...ing('salt', null, null, null), toTaste: true }], prices, { currency: 'GBP', servings: 4 })
+    expect(cost.lines[1]!.status).toBe('to-taste')
+    expect(cost.unmeasured.map((l) => l.key)).toEqual(['salt'])
+    expect(cost.unmeasured[0]!.message).toMatch(/"salt" is to taste/)
+    expect(cost.complete).toBe(false)
+    expect(cost.totalMinor).toBe(84)
+  })
+  it('an optional to-taste line, or one with an amount, keeps it complete', () => {
+    expect(costRecipe([...priced, { ...ing('chilli flakes', null, null, null, true), toTaste: true }], prices, { currency: 'GBP', servings: 4 }).complete).toBe(true)
+    expect(costRecipe([...priced, { ...ing('butter', 10, 'g', 'p-butter'), key: 'b2', toTaste: true }], prices, { currency: 'GBP', servings: 4 }).complete).toBe(true)
+    expect(costRecipe(priced, prices, { currency: 'GBP', servings: 4 }).complete).toBe(true)
   })
 })
 
@@ -137,7 +156,7 @@ describe('costRecipe rules', () => {
 })
 
 describe('money', () => {
-  it('takes minor-unit digits from ISO 4217 through Intl: GBP 2, EUR 2, JPY 0, KWD 3', () => {
+  it('takes minor-unit digits from the ISO 4217 table: GBP 2, EUR 2, JPY 0, KWD 3', () => {
     expect(currencyMinorDigits('GBP')).toBe(2)
     expect(currencyMinorDigits('EUR')).toBe(2)
     expect(currencyMinorDigits('JPY')).toBe(0)

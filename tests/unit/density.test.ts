@@ -1,6 +1,6 @@
 // Volume ↔ mass through densities (shared/utils/density.ts, shared/data/densities.ts).
 // Gram weights: USDA FoodData Central, SR Legacy household measures (NDB numbers in the data file;
-// the figures there are from memory and say so). Cup = 236.5882365 mL (NIST Handbook 44 App. C).
+// each entry was checked against its SR Legacy NDB number, issue 14). Cup = 236.5882365 mL (NIST Handbook 44 App. C).
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
 import { DENSITIES } from '../../shared/data/densities'
@@ -13,7 +13,7 @@ describe('the SR Legacy table', () => {
   it('cites an NDB number and states its provenance for every entry', () => {
     for (const d of DENSITIES) {
       expect(d.ndb, d.id).toMatch(/^\d{5}$/)
-      expect(d.provenance, d.id).toBe(`from memory, check against FDC NDB ${d.ndb}`)
+      expect(d.provenance, d.id).toMatch(new RegExp(`^checked against SR Legacy NDB ${d.ndb}($|; )`))
       expect(d.food.length, d.id).toBeGreaterThan(3)
     }
   })
@@ -30,6 +30,31 @@ describe('the SR Legacy table', () => {
   })
   it('leaves out names that could mean several foods (rice, cream, oil)', () => {
     for (const vague of ['rice', 'cream', 'oil']) expect(findDensity(vague), vague).toBeNull()
+  })
+})
+
+// USDA SR Legacy NDB numbers, as corrected by the reading of issue 14.
+describe('the entries that cited the wrong SR Legacy food', () => {
+  const by = (id: string) => DENSITIES.find((d) => d.id === id)!
+  it('bread flour, 137 g per cup, is SR Legacy NDB 20083 (bread, enriched), not 20481 (all-purpose, unenriched)', () => {
+    expect(by('flour-bread')).toMatchObject({ ndb: '20083', food: 'Wheat flour, white, bread, enriched', grams: 137, measure: { amount: 1, unit: 'cup' } })
+  })
+  it('soy sauce, 16 g per tbsp, is SR Legacy NDB 16123 (shoyu), not 16124 (tamari, 18 g)', () => {
+    expect(by('soy-sauce')).toMatchObject({ ndb: '16123', food: 'Soy sauce made from soy and wheat (shoyu)', grams: 16, measure: { amount: 1, unit: 'tbsp' } })
+  })
+  it('short-grain rice, SR Legacy NDB 20052, reads "enriched, uncooked"', () => {
+    expect(by('rice-short-grain').food).toBe('Rice, white, short-grain, enriched, uncooked')
+  })
+  it('cornstarch, SR Legacy NDB 20027: the 8 g tablespoon is derived from the 128 g cup, and says so', () => {
+    expect(by('cornstarch')).toMatchObject({ grams: 8, measure: { amount: 1, unit: 'tbsp' } })
+    expect(by('cornstarch').provenance).toBe('checked against SR Legacy NDB 20027; the tablespoon is derived from the cup weight, 128 g ÷ 16')
+    expect(128 / 16).toBe(8)
+    expect(findDensity('cornflour')!.description).toMatch(/derived from the cup weight/)
+  })
+  it('no entry cites 20481 or 16124 any more', () => {
+    expect(DENSITIES.map((d) => d.ndb)).not.toContain('20481')
+    expect(DENSITIES.map((d) => d.ndb)).not.toContain('16124')
+    expect(DENSITIES).toHaveLength(32)
   })
 })
 
@@ -60,7 +85,7 @@ describe('conversions with SR Legacy gram weights', () => {
     expect(convertIngredientAmount(1, 'cup', 'oz', 'basmati rice')).toBeCloseTo(185 / 28.349523125, 10)
   })
   it('describes where the figure comes from', () => {
-    expect(findDensity('honey')!.description).toMatch(/USDA SR Legacy NDB 19296, Honey: 1 tbsp = 21 g \(from memory, check against FDC NDB 19296\)/)
+    expect(findDensity('honey')!.description).toMatch(/USDA SR Legacy NDB 19296, Honey: 1 tbsp = 21 g \(checked against SR Legacy NDB 19296\)/)
   })
   it('passes same-kind conversions straight through', () => {
     expect(convertIngredientAmount(3, 'tsp', 'tbsp', 'anything at all')).toBe(1)

@@ -183,6 +183,20 @@ describe('time ↔ frames at the exact rates (29.97 = 30000/1001)', () => {
       }), { numRuns: 300 })
     }
   })
+  // The exact rates 30000/1001 and 60000/1001 (SMPTE ST 12-1): a frame's start time, as framesToMs
+  // gives it, is that frame — for every one of the first 200,000 frames, with no offset added.
+  it.each([29.97, 59.94] as const)('msToFrames(framesToMs(n)) === n for all n < 200,000 at %s fps', (fps) => {
+    const wrong: number[] = []
+    for (let n = 0; n < 200_000; n++) if (msToFrames(framesToMs(n, { fps }), { fps }) !== n) wrong.push(n)
+    expect(wrong).toEqual([])
+    // n = 31 was the first to come back as 30 before the fix
+    expect(msToFrames(framesToMs(31, { fps }), { fps })).toBe(31)
+  })
+  it('a microsecond before a frame starts is still the frame before', () => {
+    for (const fps of [29.97, 59.94, 23.976] as const) {
+      for (const n of [1, 31, 1799, 17_982, 199_999]) expect(msToFrames(framesToMs(n, { fps }) - 0.001, { fps }), `${fps} ${n}`).toBe(n - 1)
+    }
+  })
   it('refuses negative times', () => {
     expect(() => msToFrames(-1, { fps: 25 })).toThrow(/at least 0 ms/)
   })

@@ -10,6 +10,7 @@ import m0006 from './0006-episodes'
 import m0007 from './0007-shoot-engine'
 import m0008 from './0008-step-names'
 import m0009 from './0009-session-version'
+import m0010 from './0010-kitchen-facts'
 
 export interface MigrationContext {
   queryInterface: QueryInterface
@@ -24,4 +25,4 @@ export interface Migration {
   down: (ctx: MigrationContext) => Promise<void>
 }
 
-export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005, m0006, m0007, m0008, m0009]
+export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005, m0006, m0007, m0008, m0009, m0010]

@@ -56,6 +56,10 @@ export class RecipeIngredient extends Model<InferAttributes<RecipeIngredient>, I
   declare toTaste: boolean
   declare group: string | null
   declare allergens: { eu: string[]; us: string[] }
+  /** 'suggested', 'checked' or 'none-declared' (shared/utils/allergens.ts). */
+  declare allergenState: CreationOptional<string>
+  declare allergensCheckedBy: CreationOptional<string | null>
+  declare allergensCheckedAt: CreationOptional<Date | null>
   declare priceId: number | null
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
@@ -109,7 +113,9 @@ export function initRecipeModels(sequelize: Sequelize) {
       id, recipeId: DataTypes.INTEGER, position: DataTypes.INTEGER, key: DataTypes.STRING(40),
       min: DataTypes.FLOAT, max: DataTypes.FLOAT, unit: DataTypes.STRING(16),
       item: DataTypes.STRING(200), prep: DataTypes.STRING(200), optional: DataTypes.BOOLEAN, toTaste: DataTypes.BOOLEAN, group: DataTypes.STRING(120),
-      allergens: json('allergens', { eu: [], us: [] }), priceId: DataTypes.INTEGER, ...stamps,
+      allergens: json('allergens', { eu: [], us: [] }), priceId: DataTypes.INTEGER,
+      allergenState: { type: DataTypes.STRING(16), defaultValue: 'suggested' }, allergensCheckedBy: DataTypes.STRING(120), allergensCheckedAt: DataTypes.DATE,
+      ...stamps,
     },
     { sequelize, tableName: 'recipe_ingredients', underscored: true },
   )

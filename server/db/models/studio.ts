@@ -11,6 +11,8 @@ export class Studio extends Model<InferAttributes<Studio>, InferCreationAttribut
   declare budgetPerServingMinor: CreationOptional<number | null>
   /** 'cup' (US, 236.6 mL) or 'metric-cup' (250 mL) for recipes that say "cup". */
   declare cupUnit: CreationOptional<string>
+  /** What a bare "pint", "quart", "gallon", "fl oz" means: 'us' or 'imperial'; null follows the locale (en-GB: imperial). */
+  declare fluidMeasure: CreationOptional<string | null>
   /** The unit system shoots and views default to: 'metric' or 'us'. */
   declare unitSystem: CreationOptional<string>
   /** The kitchen the cook plan runs against. */
@@ -30,6 +32,7 @@ export function initStudio(sequelize: Sequelize) {
       budgetPerServingMinor: DataTypes.INTEGER,
       cupUnit: { type: DataTypes.STRING(12), defaultValue: 'cup' },
       unitSystem: { type: DataTypes.STRING(8), defaultValue: 'metric' },
+      fluidMeasure: { type: DataTypes.STRING(8), allowNull: true },
       kitchen: {
         type: DataTypes.TEXT,
         get(this: Studio) {

@@ -9,7 +9,7 @@ import { IMPORT_MAX_CHARS, IMPORT_TOO_LARGE } from '../../../../../shared/utils/
 const query = z.object({ preview: z.enum(['0', '1', 'true', 'false'], { error: 'preview must be 1 or 0.' }).optional() })
 
 export default defineEventHandler(async (event) => {
-  const { studioId } = await requireStudio(event, 'recipe.edit')
+  const { studioId, user } = await requireStudio(event, 'recipe.edit')
   const { preview } = validateQuery(event, query)
   const text = await readUploadText(event, 'file', IMPORT_MAX_CHARS).catch((error) => {
     throw error instanceof DomainError && error.code === 'too-large' ? new DomainError('too-large', IMPORT_TOO_LARGE) : error
@@ -17,5 +17,5 @@ export default defineEventHandler(async (event) => {
   const result = await readRecipeImport(studioId, text)
   if (preview === '1' || preview === 'true') return result
   setResponseStatus(event, 201)
-  return { recipe: await createRecipe(studioId, result.body), problems: result.problems, images: result.images }
+  return { recipe: await createRecipe(studioId, result.body, { name: user.name }), problems: result.problems, images: result.images }
 })
