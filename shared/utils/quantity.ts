@@ -5,7 +5,8 @@
 // an optional parenthesis ("1 (400 g) can" keeps "(400 g)" with the item), an optional unit
 // (names, plurals, abbreviations: see shared/data/unit-names.ts), an optional second amount
 // of the same kind ("2 1/2 cups plus 2 tablespoons", "1 lb 4 oz"), which is added in the first
-// unit, and "of". The rest is the item, and after its first top-level comma the prep note.
+// unit, a stated equivalent in another unit ("1/2 cup (100 g)", "1 cup / 240 ml", kept as
+// `stated`: the author's own measure of the same amount), and "of". The rest is the item, and after its first top-level comma the prep note.
 // "optional" anywhere sets the optional flag, "to taste" sets toTaste and leaves no amount.
 // Nothing is dropped: words that were not understood stay in the item or prep text, and
 // anything doubtful is listed in `warnings`.
@@ -30,7 +31,16 @@ export interface ParsedQuantity {
   toTaste: boolean
   /** A compound amount as written ("2½ cups plus 2 tbsp"); empty for a simple amount. */
   parts: QuantityPart[]
+  /** The same amount as the line also states it in another unit: "½ cup (100 g)" → 100 g. */
+  stated: StatedMeasure | null
   warnings: string[]
+}
+
+/** An ingredient's amount as the recipe states it beside the main one, in another unit. */
+export interface StatedMeasure {
+  min: number
+  max: number
+  unit: UnitId
 }
 
 export interface QuantityParseOptions {
@@ -44,7 +54,7 @@ const QUALIFIERS = /(about|approx\.?|approximately|roughly|around|heaped|heaping
 const UNIT_QUALIFIERS = /(heaped|heaping|scant|level|rounded|generous|good)\s+/iy
 const RANGE = /\s?(?:-|to|or)\s?/iy
 const COMPOUND = /\s?(?:\+|plus|and)\s/iy
-const UNIT_END = /(?=$|[\s.,;:()])/y
+const UNIT_END = /(?=$|[\s.,;:()/])/y
 
 function readUnit(text: string, pos: number, options: QuantityParseOptions): { unit: UnitId; end: number } | null {
   const lower = text.toLowerCase()
@@ -77,6 +87,44 @@ function readRange(text: string, pos: number): { min: number; max: number | null
     if (second) return { min: first.value, max: second.value, end: second.end }
   }
   return { min: first.value, max: null, end: first.end }
+}
+
+/** "100 g", "about 240 ml", "100-120g": a whole piece of text read as one measure with a unit, or null. */
+function readMeasure(piece: string, options: QuantityParseOptions): StatedMeasure | null {
+  const t = piece.trim()
+  QUALIFIERS.lastIndex = 0
+  const q = QUALIFIERS.exec(t) ? QUALIFIERS.lastIndex : 0
+  const r = readRange(t, q)
+  if (!r) return null
+  const u = readUnit(t, skipSpace(t, r.end), options)
+  if (!u || u.end !== t.length || unitKind(u.unit) === 'count') return null
+  return { min: r.min, max: r.max ?? r.min, unit: u.unit }
+}
+
+/**
+ * A stated equivalent after the unit: "(100 g)", "(100 g / 3.5 oz)" or "/ 240 ml". Only a
+ * parenthesis that holds nothing but measures counts; the first one in a unit other than `unit`
+ * is the equivalent, any others go to `rest` (kept in the prep note).
+ */
+function readStated(s: string, pos: number, unit: UnitId, options: QuantityParseOptions): { stated: StatedMeasure; rest: string[]; end: number } | null {
+  const at = skipSpace(s, pos)
+  if (s[at] === '/') {
+    const after = skipSpace(s, at + 1)
+    const r = readRange(s, after)
+    if (!r) return null
+    const u = readUnit(s, skipSpace(s, r.end), options)
+    if (!u || u.unit === unit || unitKind(u.unit) === 'count') return null
+    return { stated: { min: r.min, max: r.max ?? r.min, unit: u.unit }, rest: [], end: u.end }
+  }
+  if (s[at] !== '(') return null
+  const close = s.indexOf(')', at)
+  if (close < 0 || s.slice(at + 1, close).includes('(')) return null
+  const pieces = s.slice(at + 1, close).split(/ ?[/;] ?| or /)
+  const measures = pieces.map((p) => readMeasure(p, options))
+  if (!measures.every((m) => m !== null)) return null
+  const i = measures.findIndex((m) => m!.unit !== unit)
+  if (i < 0) return null
+  return { stated: measures[i]!, rest: pieces.filter((_, k) => k !== i).map((p) => p.trim()), end: close + 1 }
 }
 
 /** Split at the first comma outside parentheses. */
@@ -121,7 +169,7 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
   const line = String(text ?? '')
   if (line.length > QUANTITY_LINE_MAX) {
     warnings.push(`An ingredient line of ${line.length} characters is longer than ${QUANTITY_LINE_MAX}; kept whole as the item, not read for an amount`)
-    return { text: line, min: null, max: null, unit: null, item: line.trim(), prep: null, optional: false, toTaste: false, parts: [], warnings }
+    return { text: line, min: null, max: null, unit: null, item: line.trim(), prep: null, optional: false, toTaste: false, parts: [], stated: null, warnings }
   }
   let s = normaliseAmountText(line)
   let optional = false
@@ -143,6 +191,7 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
   let max: number | null = null
   let unit: UnitId | null = null
   let paren = ''
+  let stated: StatedMeasure | null = null
   const parts: QuantityPart[] = []
 
   QUALIFIERS.lastIndex = 0
@@ -172,9 +221,16 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
         min! += extra
         max! += extra
       }, () => ({ min: min!, max: max! }))
-      // "1 cup (250 mL) milk": a parenthesis after the unit also stays with the item
+      // "½ cup (100 g) sugar", "1 cup / 240 ml milk": the author's own equivalent, kept as a second measure
+      const st = readStated(s, pos, unit, options)
+      if (st) {
+        stated = st.stated
+        qualifiers.push(...st.rest.map((r) => `also ${r}`))
+        pos = st.end
+      }
+      // "1 cup (room temperature) milk": any other parenthesis after the unit stays with the item
       p.lastIndex = skipSpace(s, pos)
-      const pm2 = p.exec(s)
+      const pm2 = st ? null : p.exec(s)
       if (pm2) {
         paren = [paren, pm2[0].trim()].filter(Boolean).join(' ')
         pos = p.lastIndex
@@ -211,7 +267,8 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
     } else if (max === 0) warnings.push(`The amount in "${text}" is zero`)
   }
   if (!item) warnings.push(`"${text}" names no ingredient`)
-  return { text: String(text ?? ''), min, max, unit, item, prep: prep || null, optional, toTaste, parts, warnings }
+  if (min === null) stated = null
+  return { text: String(text ?? ''), min, max, unit, item, prep: prep || null, optional, toTaste, parts, stated, warnings }
 }
 
 /** "plus 2 tablespoons", "1 lb 4 oz": a second amount of the same kind, added in the first unit. */
@@ -257,11 +314,13 @@ export interface IngredientLineParts {
   prep?: string | null
   optional?: boolean
   toTaste?: boolean
+  stated?: StatedMeasure | null
 }
 
-/** One ingredient as a line that parseQuantity reads back the same: "2 onions, thinly sliced (optional)". */
+/** One ingredient as a line that parseQuantity reads back the same: "½ cup (100 g) sugar", "2 onions, thinly sliced (optional)". */
 export function formatIngredientLine(ing: IngredientLineParts): string {
-  const amount = formatQuantityText(ing.min, ing.max, ing.unit)
+  let amount = formatQuantityText(ing.min, ing.max, ing.unit)
+  if (amount && ing.unit && ing.stated) amount += ` (${formatQuantityText(ing.stated.min, ing.stated.max, ing.stated.unit)})`
   let line = [amount, ing.item].filter(Boolean).join(' ')
   if (ing.prep) line += `, ${ing.prep}`
   if (ing.toTaste && ing.min === null) line += ', to taste'

@@ -124,7 +124,9 @@ describe('item, prep note, optional, to taste', () => {
   })
   it('keeps a parenthesis with the item and splits at the first comma outside it', () => {
     expect(parseQuantity('1 (400 g) can chopped tomatoes')).toMatchObject({ min: 1, unit: 'can', item: 'chopped tomatoes (400 g)' })
-    expect(parseQuantity('1 cup (250 ml) milk')).toMatchObject({ unit: 'cup', item: 'milk (250 ml)' })
+    // a measure in the parenthesis after the unit is the author's own equivalent, kept as `stated`
+    expect(parseQuantity('1 cup (250 ml) milk')).toMatchObject({ unit: 'cup', item: 'milk', stated: { min: 250, max: 250, unit: 'ml' } })
+    expect(parseQuantity('1 cup (room temperature) milk')).toMatchObject({ unit: 'cup', item: 'milk (room temperature)', stated: null })
     expect(parseQuantity('2 peppers (red, yellow), diced')).toMatchObject({ item: 'peppers (red, yellow)', prep: 'diced' })
   })
   it('reads "of" after a unit, and a counted unit with no number as one', () => {
