@@ -5,6 +5,16 @@ import type { IngredientAllergens } from '../utils/allergens'
 import type { CautionId } from '../utils/cautions'
 import type { UnitId } from '../utils/units'
 
+/** The same amount as the recipe also states it in another unit ("½ cup (100 g)" → 100 g): the author's own measure. */
+export interface StatedMeasure {
+  min: number
+  max: number
+  unit: UnitId
+}
+
+/** A step field an import read from the step's text, until a person confirms or changes it. */
+export type StepReadField = 'duration' | 'handsOn' | 'station'
+
 export type RecipeStation = 'burner' | 'oven' | 'counter'
 
 export interface RecipeIngredientDraft {
@@ -25,6 +35,8 @@ export interface RecipeIngredientDraft {
   /** Ingredient group heading: "For the sauce". */
   group: string | null
   allergens: IngredientAllergens
+  /** The amount as the line also states it in another unit; used for showing that system and for costing. */
+  stated?: StatedMeasure | null
   /** The studio price this ingredient is costed with (not exported: prices belong to the studio). */
   priceId?: string | number | null
 }
@@ -64,6 +76,8 @@ export interface RecipeStepDraft {
   cautions: CautionId[]
   /** Step group (a schema.org HowToSection name): "Make the sauce". */
   group: string | null
+  /** Fields read from the text by an import (step-time-read.ts), not yet confirmed by a person. */
+  readFromText?: StepReadField[]
 }
 
 export interface RecipeTimes {

@@ -119,7 +119,8 @@ function readStated(s: string, pos: number, unit: UnitId, options: QuantityParse
   if (s[at] !== '(') return null
   const close = s.indexOf(')', at)
   if (close < 0 || s.slice(at + 1, close).includes('(')) return null
-  const pieces = s.slice(at + 1, close).split(/ ?[/;] ?| or /)
+  // "100 g / 3.5 oz", "100g/3.5oz", "100 g; 3.5 oz", "100 g or 3.5 oz"; never the slash of a fraction (1/8)
+  const pieces = s.slice(at + 1, close).split(/ ?; ?| or |(?<!\d) ?\/ ?(?!\d)|(?<=\D) ?\/ ?|(?<=\d) \/ ?| ?\/ (?=\d)/)
   const measures = pieces.map((p) => readMeasure(p, options))
   if (!measures.every((m) => m !== null)) return null
   const i = measures.findIndex((m) => m!.unit !== unit)

@@ -9,6 +9,7 @@ import m0005 from './0005-recipes'
 import m0006 from './0006-episodes'
 import m0007 from './0007-shoot-engine'
 import m0008 from './0008-step-names'
+import m0011 from './0011-read-from-text'
 
 export interface MigrationContext {
   queryInterface: QueryInterface
@@ -23,4 +24,4 @@ export interface Migration {
   down: (ctx: MigrationContext) => Promise<void>
 }
 
-export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005, m0006, m0007, m0008]
+export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005, m0006, m0007, m0008, m0011]

@@ -57,6 +57,8 @@ export class RecipeIngredient extends Model<InferAttributes<RecipeIngredient>, I
   declare group: string | null
   declare allergens: { eu: string[]; us: string[] }
   declare priceId: number | null
+  /** The equivalent stated beside the unit: { min, max, unit }, or null. */
+  declare stated: CreationOptional<{ min: number; max: number; unit: string } | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 }
@@ -80,6 +82,8 @@ export class RecipeStep extends Model<InferAttributes<RecipeStep>, InferCreation
   declare cameraNote: string | null
   declare cautions: string[]
   declare group: string | null
+  /** Fields read from the step text by an import and not yet confirmed: 'duration', 'handsOn', 'station'. */
+  declare readFromText: CreationOptional<string[]>
   declare photo: CreationOptional<string | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
@@ -109,7 +113,7 @@ export function initRecipeModels(sequelize: Sequelize) {
       id, recipeId: DataTypes.INTEGER, position: DataTypes.INTEGER, key: DataTypes.STRING(40),
       min: DataTypes.FLOAT, max: DataTypes.FLOAT, unit: DataTypes.STRING(16),
       item: DataTypes.STRING(200), prep: DataTypes.STRING(200), optional: DataTypes.BOOLEAN, toTaste: DataTypes.BOOLEAN, group: DataTypes.STRING(120),
-      allergens: json('allergens', { eu: [], us: [] }), priceId: DataTypes.INTEGER, ...stamps,
+      allergens: json('allergens', { eu: [], us: [] }), priceId: DataTypes.INTEGER, stated: json('stated', null), ...stamps,
     },
     { sequelize, tableName: 'recipe_ingredients', underscored: true },
   )
@@ -117,7 +121,7 @@ export function initRecipeModels(sequelize: Sequelize) {
     {
       id, recipeId: DataTypes.INTEGER, position: DataTypes.INTEGER, name: DataTypes.STRING(40), text: DataTypes.TEXT, script: json('script', []), handsOn: DataTypes.BOOLEAN,
       durationMin: DataTypes.INTEGER, durationMax: DataTypes.INTEGER, station: DataTypes.STRING(12), after: json('after', []), links: json('links', []),
-      cameraShot: DataTypes.STRING(200), cameraNote: DataTypes.STRING(500), cautions: json('cautions', []), group: DataTypes.STRING(120), photo: DataTypes.STRING(200), ...stamps,
+      cameraShot: DataTypes.STRING(200), cameraNote: DataTypes.STRING(500), cautions: json('cautions', []), group: DataTypes.STRING(120), readFromText: json('readFromText', []), photo: DataTypes.STRING(200), ...stamps,
     },
     { sequelize, tableName: 'recipe_steps', underscored: true },
   )
