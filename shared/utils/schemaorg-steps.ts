@@ -11,14 +11,13 @@
 // A step with no time in its markup gets its time, wait (handsOn) and station read from its text
 // (step-time-read.ts), each listed in readFromText until a person confirms or changes it; what a
 // Hobline export states (hobline:handsOn, hobline:station, hobline:readFromText) is taken as stated.
-import type { RecipeImportProblem, RecipeStepDraft, StepLinkDraft } from '../types/recipe'
+import type { RecipeImportProblem, RecipeStepDraft, StepLinkDraft, StepReadField } from '../types/recipe'
 import { isCautionId, suggestStepCautions } from './cautions'
 import { parseIsoDuration } from './duration'
 import { MAX_DEPTH, MAX_LIST_READ, MAX_RECIPE_ITEMS, cleanSchemaText, hasSchemaType, isJsonObject, schemaText, type JsonObject } from './schemaorg-read'
 import { readsAsAlongside, startTogetherLink } from './step-links'
 import { importedStepName } from './step-name'
 import { readStepTime } from './step-time-read'
-import type { StepReadField } from '../types/recipe'
 
 /** Hobline's JSON-LD vocabulary for what schema.org has no property for. */
 export const HOBLINE_LD_PREFIX = 'hobline'
