@@ -27,7 +27,7 @@ export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, 
       const ing = byKey.get(s.key)!
       return {
         id: ing.id, key: s.key, item: s.item, prep: s.prep, min: s.min, max: s.max, unit: s.unit,
-        text: s.text, exactText: s.exactText, optional: s.optional, toTaste: s.toTaste, group: s.group,
+        text: s.text, exactText: s.exactText, source: s.source, sourceText: s.sourceText, optional: s.optional, toTaste: s.toTaste, group: s.group,
       }
     }),
     steps: recipe.steps.map((step) => {
@@ -55,6 +55,7 @@ export async function recipeCostView(recipeId: number, studioId: number, serving
   const settings = await studioSettings(studioId)
   const cost = costRecipe(costInput(recipe.ingredients), await pricesFor(studioId), {
     currency: settings.currency, servings: recipe.servings, forServings: servings ?? recipe.servings, budgetPerServingMinor: settings.budgetPerServingMinor,
+    densities: statedDensities(recipe.ingredients),
   })
   const dec = (minor: number) => minorToDecimal(minor, cost.currency)
   const fmt = (minor: number) => formatMoney(minor, cost.currency, settings.locale)
@@ -91,6 +92,7 @@ export async function listRecipes(studioId: number, filters: { q?: string; tag?:
     const allergens = listRecipeAllergens(ings as never)
     const cost = costRecipe(costInput(ings), prices, {
       currency: settings.currency, servings: r.servings, budgetPerServingMinor: settings.budgetPerServingMinor,
+      densities: statedDensities(ings),
     })
     return {
       id: r.id, title: r.title, summary: r.summary, servings: r.servings, tags: r.tags, photo: photoUrl(r.photo), updatedAt: r.updatedAt,
