@@ -211,6 +211,17 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
       paren = pm[0].trim()
       pos = p.lastIndex
     }
+    // "2 x 400g tins": the size of each, kept with the item as "(400g)"
+    const times = /[x×] /y
+    times.lastIndex = pos
+    if (!pm && times.test(s)) {
+      const size = readRange(s, times.lastIndex)
+      const su = size && readUnit(s, skipSpace(s, size.end), options)
+      if (su && unitKind(su.unit) !== 'count') {
+        paren = `(${s.slice(times.lastIndex, su.end).trim()})`
+        pos = skipSpace(s, su.end)
+      }
+    }
     UNIT_QUALIFIERS.lastIndex = pos
     const uq = UNIT_QUALIFIERS.exec(s)
     const u = readUnit(s, uq ? UNIT_QUALIFIERS.lastIndex : pos, options)
@@ -222,8 +233,16 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
         min! += extra
         max! += extra
       }, () => ({ min: min!, max: max! }))
-      // "½ cup (100 g) sugar", "1 cup / 240 ml milk": the author's own equivalent, kept as a second measure
-      const st = readStated(s, pos, unit, options)
+      // "1 tsp each salt and pepper", "1 tbsp each of chives and parsley"
+      const each = /\s?each(?: of)?(?= )/iy
+      each.lastIndex = pos
+      if (each.test(s)) {
+        qualifiers.push('each')
+        pos = each.lastIndex
+      }
+      // "½ cup (100 g) sugar", "1 cup / 240 ml milk": the author's own equivalent, kept as a second
+      // measure; not after a counted unit, where "2 cans (400 g)" is the size of each can
+      const st = unitKind(unit) === 'count' ? null : readStated(s, pos, unit, options)
       if (st) {
         stated = st.stated
         qualifiers.push(...st.rest.map((r) => `also ${r}`))

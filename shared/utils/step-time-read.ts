@@ -11,7 +11,8 @@
 // The kind is the cooking word nearest before the time in the same sentence (or just after it,
 // "20 minutes in the oven" has none); its station and whether it is a wait (hands-off) follow from
 // the kind: bake and roast are waits in the oven, simmer and boil waits on a burner, fry and sear
-// hands-on on a burner, rest, cool, chill, rise and marinate waits at no station. "Cook" and
+// hands-on on a burner, rest, cool, chill, rise and marinate waits at no station; grill is hands-on
+// at no station (an oven's grill or one outside: the text rarely says which). "Cook" and
 // "braise" go in the oven when the step says "oven", else on a burner. A "dutch oven" is a pot on
 // the burner, not the oven.
 //
@@ -50,6 +51,7 @@ interface KindInfo {
 // 'heat': the oven when the step says oven, else a burner.
 const KINDS: Record<string, KindInfo> = {
   bake: { station: 'oven', wait: true }, roast: { station: 'oven', wait: true }, broil: { station: 'oven', wait: false },
+  grill: { station: null, wait: false },
   simmer: { station: 'burner', wait: true }, boil: { station: 'burner', wait: true }, poach: { station: 'burner', wait: true },
   steam: { station: 'burner', wait: true }, blanch: { station: 'burner', wait: false }, reduce: { station: 'burner', wait: true },
   braise: { station: 'heat', wait: true }, stew: { station: 'heat', wait: true }, cook: { station: 'heat', wait: false },
