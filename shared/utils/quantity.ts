@@ -340,7 +340,7 @@ export interface IngredientLineParts {
 /** One ingredient as a line that parseQuantity reads back the same: "½ cup (100 g) sugar", "2 onions, thinly sliced (optional)". */
 export function formatIngredientLine(ing: IngredientLineParts): string {
   let amount = formatQuantityText(ing.min, ing.max, ing.unit)
-  if (amount && ing.unit && ing.stated) amount += ` (${formatQuantityText(ing.stated.min, ing.stated.max, ing.stated.unit)})`
+  if (amount && ing.unit && unitKind(ing.unit) !== 'count' && ing.stated) amount += ` (${formatQuantityText(ing.stated.min, ing.stated.max, ing.stated.unit)})`
   let line = [amount, ing.item].filter(Boolean).join(' ')
   if (ing.prep) line += `, ${ing.prep}`
   if (ing.toTaste && ing.min === null) line += ', to taste'

@@ -12,7 +12,7 @@ import { RecipeImportError, cleanSchemaText, extractJsonLdFromHtml, findRecipeNo
 import { HOBLINE_LD_NAMESPACE } from '../../shared/utils/schemaorg-steps'
 import { CAUTION_IDS } from '../../shared/utils/cautions'
 import { EU_ALLERGENS, US_ALLERGENS } from '../../shared/utils/allergens'
-import { UNIT_IDS } from '../../shared/utils/units'
+import { UNIT_IDS, unitKind } from '../../shared/utils/units'
 import type { RecipeDraft } from '../../shared/types/recipe'
 
 const soup = {
@@ -287,7 +287,7 @@ describe('export → import round trip (property)', () => {
       return {
         key: `ing-${n + 1}`, position: n + 1, min, max, unit: min === null ? null : i.unit, item: i.item, prep: i.prep, optional: i.optional,
         toTaste: min === null && i.toTaste, group: i.group, allergens: { eu: i.eu, us: i.us },
-        stated: min === null || i.unit === null || !i.stated || i.stated.unit === i.unit ? null
+        stated: min === null || i.unit === null || unitKind(i.unit) === 'count' || !i.stated || i.stated.unit === i.unit ? null
           : { min: Math.min(i.stated.a, i.stated.b), max: Math.max(i.stated.a, i.stated.b), unit: i.stated.unit },
       }
     }),
