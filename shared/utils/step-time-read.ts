@@ -83,8 +83,8 @@ for (const [f, k] of Object.entries({
   chilled: 'chill', chilling: 'chill', rising: 'rise', risen: 'rise', frozen: 'freeze', beaten: 'beat', beating: 'beat',
   resting: 'rest', rested: 'rest', boiling: 'boil', cooling: 'cool', standing: 'stand', broiling: 'broil', steeping: 'steep',
 })) FORMS.set(f, k)
-for (const f of ['sets', 'setted', 'seted', 'cooked', 'heated', 'warmed']) FORMS.delete(f)
-FORMS.set('cooked', 'cook')
+// Forms used as adjectives or nouns more than as the step's action ("a heated pan", "warmed plates", "sets")
+for (const f of ['sets', 'heated', 'warmed']) FORMS.delete(f)
 
 const UNITS: Record<string, number> = {
   second: 1, seconds: 1, sec: 1, secs: 1, s: 1,
@@ -241,7 +241,7 @@ export function readStepTime(text: string): StepTimeReading {
     firstKind ??= kindAt(tk, i, true)
     let alternative = false
     let skip = false
-    // qualifiers before the number: "about", "at least", "up to", "another", "a further"
+    // "every 10 minutes", "the last 10 minutes": not a time of its own
     const before = tk[i - 1]?.t
     if (before === 'every' || ((before === 'last' || before === 'final') && tk[i - 2]?.t === 'the')) skip = true
     const time = readTime(tk, i)
@@ -249,7 +249,7 @@ export function readStepTime(text: string): StepTimeReading {
       i++
       continue
     }
-    // look back over qualifiers to see whether the time follows "or" (an alternative) or "every"
+    // look back over "about", "at least", "up to", "another", "a further", "for": after "or" it is an alternative
     let k = i - 1
     while (k >= 0 && k >= i - 3 && (QUALIFIERS.has(tk[k]!.t) || LEAD.has(tk[k]!.t) || (tk[k]!.t === 'to' && tk[k - 1]?.t === 'up'))) k--
     if (k >= 0 && tk[k]!.t === 'or' && parts.length) alternative = true
