@@ -10,7 +10,7 @@
 //
 // The kind is the cooking word nearest before the time in the same sentence (or just after it,
 // "20 minutes in the oven" has none); its station and whether it is a wait (hands-off) follow from
-// the kind: bake and roast are waits in the oven, simmer and boil waits on a burner, fry and sear
+// the kind ("in the fridge" chills, "in the oven" bakes): bake and roast are waits in the oven, simmer and boil waits on a burner, fry and sear
 // hands-on on a burner, rest, cool, chill, rise and marinate waits at no station; grill is hands-on
 // at no station (an oven's grill or one outside: the text rarely says which). "Cook" and
 // "braise" go in the oven when the step says "oven", else on a burner. A "dutch oven" is a pot on
@@ -182,10 +182,18 @@ const SENTENCE_END = new Set(['.', ';', '!', '?'])
 const LOOK = 12
 
 const ARTICLES = new Set(['a', 'an', 'the', 'low', 'medium', 'high', 'medium-high', 'medium-low', 'gentle', 'moderate', 'very'])
-const NOT_A_KIND_BEFORE = new Set(['sugar', 'rice', 'butter', 'bread', 'mixer', 'mix', 'of'])
+// "boiling water", "roasting tin", "baking powder", "frying pan", "mixing bowl": a cooking word before one of these names a thing
+const NOT_A_KIND_BEFORE = new Set([
+  'sugar', 'rice', 'butter', 'bread', 'mixer', 'mix', 'of', 'water', 'salted', 'milk', 'stock', 'oil', 'tin', 'dish', 'tray', 'pan', 'bowl', 'sheet',
+  'paper', 'powder', 'soda', 'rack', 'liquid',
+])
+// Places that say the kind by themselves: "in the fridge for 2 hours" chills, "in the oven for 20 minutes" bakes
+const PLACE_KINDS: Record<string, string> = { fridge: 'chill', refrigerator: 'chill', freezer: 'freeze', oven: 'bake' }
 
 /** The kind named at token k, or null: a word used as a noun or adjective ("the heat", "a warm place", "brown sugar", "stand mixer") is not. */
-function kindAt(tk: Token[], k: number, after: boolean): string | null {
+function kindAt(tk: Token[], k: number, after: boolean, places = true): string | null {
+  const place = places ? PLACE_KINDS[tk[k]!.t] : undefined
+  if (place) return tk[k - 1]?.t === 'dutch' || tk[k - 1]?.t === 'microwave' ? null : place
   const f = FORMS.get(tk[k]!.t)
   if (!f) return null
   if (ARTICLES.has(tk[k - 1]?.t ?? '') || NOT_A_KIND_BEFORE.has(tk[k + 1]?.t ?? '')) return null
@@ -238,7 +246,7 @@ export function readStepTime(text: string): StepTimeReading {
   const parts: StepTimePart[] = []
   let firstKind: string | null = null
   for (let i = 0; i < tk.length;) {
-    firstKind ??= kindAt(tk, i, true)
+    firstKind ??= kindAt(tk, i, true, false)
     let alternative = false
     let skip = false
     // "every 10 minutes", "the last 10 minutes": not a time of its own
