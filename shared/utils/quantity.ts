@@ -89,7 +89,10 @@ function readRange(text: string, pos: number): { min: number; max: number | null
   return { min: first.value, max: null, end: first.end }
 }
 
-/** "100 g", "about 240 ml", "100-120g": a whole piece of text read as one measure with a unit, or null. */
+/**
+ * "100 g", "about 240 ml", "100-120g", "1 lb 2 oz" (added in the first unit), "1 stick": a whole
+ * piece of text read as one measure with a unit, or null.
+ */
 function readMeasure(piece: string, options: QuantityParseOptions): StatedMeasure | null {
   const t = piece.trim()
   QUALIFIERS.lastIndex = 0
@@ -97,8 +100,14 @@ function readMeasure(piece: string, options: QuantityParseOptions): StatedMeasur
   const r = readRange(t, q)
   if (!r) return null
   const u = readUnit(t, skipSpace(t, r.end), options)
-  if (!u || u.end !== t.length || unitKind(u.unit) === 'count') return null
-  return { min: r.min, max: r.max ?? r.min, unit: u.unit }
+  if (!u) return null
+  const m = { min: r.min, max: r.max ?? r.min, unit: u.unit }
+  if (u.end === t.length) return m
+  const more = r.max === null && unitKind(u.unit) !== 'count' ? readAmountAt(t, skipSpace(t, u.end)) : null
+  const u2 = more && readUnit(t, skipSpace(t, more.end), options)
+  if (!u2 || u2.end !== t.length || u2.unit === u.unit || unitKind(u2.unit) !== unitKind(u.unit)) return null
+  const sum = m.min + convertAmount(more!.value, u2.unit, u.unit)
+  return { min: sum, max: sum, unit: u.unit }
 }
 
 /**
@@ -123,7 +132,8 @@ function readStated(s: string, pos: number, unit: UnitId, options: QuantityParse
   const pieces = s.slice(at + 1, close).split(/ ?; ?| or |(?<!\d) ?\/ ?(?!\d)|(?<=\D) ?\/ ?|(?<=\d) \/ ?| ?\/ (?=\d)/)
   const measures = pieces.map((p) => readMeasure(p, options))
   if (!measures.every((m) => m !== null)) return null
-  const i = measures.findIndex((m) => m!.unit !== unit)
+  // "(113 g / 1 stick)": a counted measure is kept in the prep note, never the equivalent
+  const i = measures.findIndex((m) => m!.unit !== unit && unitKind(m!.unit) !== 'count')
   if (i < 0) return null
   return { stated: measures[i]!, rest: pieces.filter((_, k) => k !== i).map((p) => p.trim()), end: close + 1 }
 }
@@ -204,6 +214,10 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
     min = range.min
     max = range.max ?? range.min
     pos = skipSpace(s, range.end)
+    // "1/2 a lemon": a fraction of one
+    const one = /an? (?=\p{L})/iuy
+    one.lastIndex = pos
+    if (range.max === null && range.min < 1 && one.test(s)) pos = one.lastIndex
     const p = /\([^()]*\)\s?/y
     p.lastIndex = pos
     const pm = p.exec(s)
