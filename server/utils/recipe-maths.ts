@@ -53,7 +53,8 @@ function costInput(ingredients: CostLine[]) {
 export async function recipeCostView(recipeId: number, studioId: number, servings?: number) {
   const recipe = (await loadRecipe(recipeId))!
   const settings = await studioSettings(studioId)
-  const cost = costRecipe(costInput(recipe.ingredients), await pricesFor(studioId), {
+  const prices = await pricesFor(studioId)
+  const cost = costRecipe(costInput(recipe.ingredients), prices, {
     currency: settings.currency, servings: recipe.servings, forServings: servings ?? recipe.servings, budgetPerServingMinor: settings.budgetPerServingMinor,
     densities: statedDensities(recipe.ingredients),
   })
@@ -74,7 +75,11 @@ export async function recipeCostView(recipeId: number, studioId: number, serving
     },
     complete: cost.complete,
     budget: cost.budget && { ...cost.budget, perServing: dec(cost.budget.perServingMinor), formatted: fmt(cost.budget.perServingMinor) },
-    lines: cost.lines.map((l) => ({ ...l, cost: l.costMinor === null ? null : dec(l.costMinor), formatted: l.costMinor === null ? null : fmt(l.costMinor) })),
+    lines: cost.lines.map((l) => ({
+      ...l, cost: l.costMinor === null ? null : dec(l.costMinor), formatted: l.costMinor === null ? null : fmt(l.costMinor),
+      // where a volume ↔ mass conversion took its density from: the recipe's own measure, else USDA SR Legacy
+      conversion: l.status === 'priced' ? conversionSource(recipe.ingredients.find((i) => i.key === l.key)!, prices.find((p) => p.id === l.priceId)?.packageUnit) : null,
+    })),
     missing: cost.missing.map((l) => ({ key: l.key, item: l.item, message: l.message })),
     problems: cost.problems.map((l) => ({ key: l.key, item: l.item, message: l.message })),
   }

@@ -2,7 +2,8 @@
 // cup. For costing (cost.ts takes them as the user's densities, which come before the USDA table),
 // each ingredient that states a mass beside a volume, or a volume beside a mass, gives one.
 import type { StatedMeasure } from '../types/recipe'
-import type { UserDensity } from './density'
+import { findDensity, type UserDensity } from './density'
+import { formatQuantityText } from './quantity'
 import { convertAmount, isUnitId, unitKind, type UnitId } from './units'
 
 interface WithStated {
@@ -28,4 +29,18 @@ export function statedDensity(ing: WithStated): UserDensity | null {
 /** The densities a recipe's lines state, one per line that gives one. */
 export function statedDensities(ings: readonly WithStated[]): UserDensity[] {
   return ings.map(statedDensity).filter((d): d is UserDensity => d !== null)
+}
+
+/**
+ * Where a cost line's conversion between volume and mass takes its density from, in words: the
+ * recipe's own stated measure, else the USDA entry; null when the line needs no density.
+ */
+export function conversionSource(ing: WithStated, packageUnit: string | null | undefined): string | null {
+  if (!ing.unit || !packageUnit || !isUnitId(ing.unit) || !isUnitId(packageUnit)) return null
+  const kinds = [unitKind(ing.unit), unitKind(packageUnit)]
+  if (kinds[0] === kinds[1] || kinds.includes('count')) return null
+  if (statedDensity(ing) && ing.stated) {
+    return `the recipe's own measure: ${formatQuantityText(ing.min, ing.max, ing.unit)} = ${formatQuantityText(ing.stated.min, ing.stated.max, ing.stated.unit as UnitId)}`
+  }
+  return findDensity(ing.item)?.description ?? null
 }

@@ -188,6 +188,7 @@ describe('recipes', async () => {
     const cost = await producer.get(`/api/recipes/${r.id}/cost`)
     expect(cost.body.lines[0]).toMatchObject({ status: 'priced', costMinor: 30 })
     expect(cost.body.lines[0].amountUsed).toBeCloseTo(0.1, 9)
+    expect(cost.body.lines[0].conversion).toBe('the recipe\'s own measure: ½ cup = 100 g')
 
     // the cook plan names the step with no time and the steps still read from the text
     const episode = await producer.post(`/api/studios/${studioId}/episodes`, { title: 'Cake day', recipeIds: [r.id] })

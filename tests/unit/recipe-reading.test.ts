@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest'
 import { parseQuantity } from '../../shared/utils/quantity'
 import { readStepTime } from '../../shared/utils/step-time-read'
 import { formatIngredientAmount } from '../../shared/utils/scale'
-import { statedDensity } from '../../shared/utils/stated-density'
+import { conversionSource, statedDensity } from '../../shared/utils/stated-density'
 import { convertAmount } from '../../shared/utils/units'
 
 function table(name: string): string[][] {
@@ -81,6 +81,10 @@ describe('stated equivalents in use', () => {
     expect(d).toEqual({ item: 'sugar', grams: 100, amount: 0.5, unit: 'cup' })
     // 1 lb = 453.59237 g exactly (NIST Handbook 44, Appendix C; Weights and Measures Act 1985, Schedule 1)
     expect(statedDensity({ item: 'pork', min: 450, max: 450, unit: 'ml', stated: { min: 1, max: 1, unit: 'lb' } })).toEqual({ item: 'pork', grams: 453.59237, amount: 450, unit: 'ml' })
+    // and the cost line says which density it used: the recipe's own, else the USDA entry
+    expect(conversionSource({ item: 'sugar', ...sugar }, 'kg')).toBe('the recipe\'s own measure: ½ cup = 100 g')
+    expect(conversionSource({ item: 'sugar', ...sugar }, 'cup')).toBeNull()
+    expect(conversionSource({ item: 'butter', min: 1, max: 1, unit: 'cup', stated: null }, 'g')).toMatch(/^USDA SR Legacy NDB \d+/)
     // volume beside volume, or a counted unit, gives no density
     expect(statedDensity({ item: 'milk', min: 1, max: 1, unit: 'cup', stated: { min: 240, max: 240, unit: 'ml' } })).toBeNull()
   })
