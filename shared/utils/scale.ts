@@ -187,7 +187,7 @@ export function formatKitchenAmount(
 export interface ScaledIngredient extends KitchenAmount {
   /** Where the amount shown came from: the main amount as written, the equivalent stated beside it, or a conversion. */
   source: 'written' | 'stated' | 'converted'
-  /** For the hover: "stated in the recipe beside ½ cup", "converted from 1 cup"; empty when as written. */
+  /** For the hover: "stated in the recipe beside ½ cup", "converted from 1 cup" (the amount as written, scaled); empty when as written. */
   sourceText: string
   key: string
   item: string
@@ -228,7 +228,9 @@ export function formatIngredientAmount(
   ing: AmountFields, scale: (v: number) => number, options: KitchenDisplayOptions,
 ): KitchenAmount & Pick<ScaledIngredient, 'source' | 'sourceText'> {
   const s = (v: number | null) => (v === null ? null : scale(v))
-  const written = formatQuantityText(ing.min, ing.max, ing.unit)
+  // the amount as written, scaled (to 4 significant digits): what the shown amount stands beside or was converted from
+  const near = (v: number | null) => (v === null ? null : Number(scale(v).toPrecision(4)))
+  const written = formatQuantityText(near(ing.min), near(ing.max), ing.unit)
   if (ing.min !== null && ing.unit && ing.stated && useStated(ing.unit, ing.stated.unit, options.system)) {
     const shown = formatKitchenAmount(scale(ing.stated.min), scale(ing.stated.max), ing.stated.unit, options)
     return { ...shown, source: 'stated', sourceText: `stated in the recipe beside ${written}` }

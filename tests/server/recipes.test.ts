@@ -175,7 +175,7 @@ describe('recipes', async () => {
 
     // shown metric as the recipe states it, with where it came from
     const metric = await producer.get(`/api/recipes/${r.id}/scaled?units=metric&servings=16`)
-    expect(metric.body.ingredients[0]).toMatchObject({ text: '200 g', source: 'stated', sourceText: 'stated in the recipe beside ½ cup' })
+    expect(metric.body.ingredients[0]).toMatchObject({ text: '200 g', source: 'stated', sourceText: 'stated in the recipe beside 1 cup' })
     expect(metric.body.ingredients[1]).toMatchObject({ text: '480 mL', source: 'stated' })
 
     // costed with the author's density: 100 g of a 1 kg bag at £3.00 is 30p (no USDA density is known for coconut sugar)

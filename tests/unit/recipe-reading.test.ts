@@ -66,7 +66,7 @@ describe('step texts', () => {
 describe('stated equivalents in use', () => {
   const sugar = { min: 0.5, max: 0.5, unit: 'cup' as const, toTaste: false, stated: parseQuantity('½ cup (100g) sugar').stated }
   it('shows the stated grams when the display is metric, scaled, and says where they came from', () => {
-    expect(formatIngredientAmount(sugar, (v) => v * 2, { system: 'metric' })).toMatchObject({ text: '200 g', source: 'stated', sourceText: 'stated in the recipe beside ½ cup' })
+    expect(formatIngredientAmount(sugar, (v) => v * 2, { system: 'metric' })).toMatchObject({ text: '200 g', source: 'stated', sourceText: 'stated in the recipe beside 1 cup' })
     // in US units the cups are shown as written
     expect(formatIngredientAmount(sugar, (v) => v, { system: 'us' })).toMatchObject({ text: '½ cup', source: 'written', sourceText: '' })
   })
@@ -75,6 +75,11 @@ describe('stated equivalents in use', () => {
     const milk = { min: 0.5, max: 0.5, unit: 'cup' as const, toTaste: false, stated: null }
     expect(formatIngredientAmount(milk, (v) => v, { system: 'metric' })).toMatchObject({ text: '120 mL', source: 'converted', sourceText: 'converted from ½ cup' })
     expect(convertAmount(1, 'cup', 'ml')).toBeCloseTo(236.5882365, 9)
+    // the amount it came from is the written one, scaled: 300 mL for 4 is 450 mL for 6 = 1.902 US cups
+    const milk300 = { min: 300, max: 300, unit: 'ml' as const, toTaste: false, stated: null }
+    expect(formatIngredientAmount(milk300, (v) => (v * 6) / 4, { system: 'us' })).toMatchObject({
+      text: '2 cups', exactText: 'exactly 1.902 cups', sourceText: 'converted from 450 mL',
+    })
   })
   it('gives the author\'s own density for costing: 100 g in ½ US cup', () => {
     const d = statedDensity({ item: 'sugar', ...sugar })
