@@ -110,6 +110,9 @@ function readMeasure(piece: string, options: QuantityParseOptions): StatedMeasur
   return { min: sum, max: sum, unit: u.unit }
 }
 
+/** A stated measure the recipe schema keeps: above zero, at most 1e6, lower end first. */
+const statedInRange = (m: StatedMeasure) => Number.isFinite(m.min) && Number.isFinite(m.max) && m.min > 0 && m.max <= 1e6 && m.min <= m.max
+
 /**
  * A stated equivalent after the unit: "(100 g)", "(100 g / 3.5 oz)" or "/ 240 ml". Only a
  * parenthesis that holds nothing but measures counts; the first one in a unit other than `unit`
@@ -122,8 +125,9 @@ function readStated(s: string, pos: number, unit: UnitId, options: QuantityParse
     const r = readRange(s, after)
     if (!r) return null
     const u = readUnit(s, skipSpace(s, r.end), options)
-    if (!u || u.unit === unit || unitKind(u.unit) === 'count') return null
-    return { stated: { min: r.min, max: r.max ?? r.min, unit: u.unit }, rest: [], end: u.end }
+    const m = u && { min: r.min, max: r.max ?? r.min, unit: u.unit }
+    if (!m || m.unit === unit || unitKind(m.unit) === 'count' || !statedInRange(m)) return null
+    return { stated: m, rest: [], end: u!.end }
   }
   if (s[at] !== '(') return null
   const close = s.indexOf(')', at)
@@ -133,7 +137,7 @@ function readStated(s: string, pos: number, unit: UnitId, options: QuantityParse
   const measures = pieces.map((p) => readMeasure(p, options))
   if (!measures.every((m) => m !== null)) return null
   // "(113 g / 1 stick)": a counted measure is kept in the prep note, never the equivalent
-  const i = measures.findIndex((m) => m!.unit !== unit && unitKind(m!.unit) !== 'count')
+  const i = measures.findIndex((m) => m!.unit !== unit && unitKind(m!.unit) !== 'count' && statedInRange(m!))
   if (i < 0) return null
   return { stated: measures[i]!, rest: pieces.filter((_, k) => k !== i).map((p) => p.trim()), end: close + 1 }
 }

@@ -133,13 +133,17 @@ function addStep(ctx: StepContext, node: JsonObject | null, text: string, group:
   })
 }
 
+/** The longest step duration a recipe keeps (recipe-schemas.ts: at most a week). */
+const MAX_STEP_SECONDS = 7 * 24 * 3600
+
 /** What the step text says of the fields its markup leaves out: time, wait and station, each marked as read. */
 function fromText(text: string, seconds: number | null, stated: StepExtensions): Partial<RecipeStepDraft> {
   if (stated.readFromText) return {}
   const r = readStepTime(text)
   const out: Partial<RecipeStepDraft> = {}
   const read: StepReadField[] = []
-  if (seconds === null && r.durationMin !== null) {
+  // a time the recipe schema would refuse (over a week) is left for a person to give
+  if (seconds === null && r.durationMin !== null && r.durationMax! <= MAX_STEP_SECONDS) {
     out.durationMin = r.durationMin
     out.durationMax = r.durationMax
     read.push('duration')

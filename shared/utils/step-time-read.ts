@@ -90,6 +90,7 @@ const UNITS: Record<string, number> = {
   second: 1, seconds: 1, sec: 1, secs: 1, s: 1,
   minute: 60, minutes: 60, min: 60, mins: 60, m: 60,
   hour: 3600, hours: 3600, hr: 3600, hrs: 3600, h: 3600,
+  day: 86400, days: 86400,
 }
 const NUMBER_WORDS: Record<string, number> = {
   a: 1, an: 1, one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10, eleven: 11, twelve: 12,

@@ -11,6 +11,8 @@ import { readStepTime } from '../../shared/utils/step-time-read'
 import { formatIngredientAmount } from '../../shared/utils/scale'
 import { conversionSource, statedDensity } from '../../shared/utils/stated-density'
 import { convertAmount } from '../../shared/utils/units'
+import { importSchemaOrgRecipe } from '../../shared/utils/schemaorg-import'
+import { recipeCreateSchema } from '../../shared/utils/recipe-schemas'
 
 function table(name: string): string[][] {
   const rows = readFileSync(resolve(import.meta.dirname, '../fixtures', name), 'utf8').split('\n').filter((l) => l && !l.startsWith('#'))
@@ -92,5 +94,19 @@ describe('stated equivalents in use', () => {
     expect(conversionSource({ item: 'butter', min: 1, max: 1, unit: 'cup', stated: null }, 'g')).toMatch(/^USDA SR Legacy NDB \d+/)
     // volume beside volume, or a counted unit, gives no density
     expect(statedDensity({ item: 'milk', min: 1, max: 1, unit: 'cup', stated: { min: 240, max: 240, unit: 'ml' } })).toBeNull()
+  })
+})
+
+describe('what is read always fits the recipe', () => {
+  it('leaves out a stated measure or a step time the recipe would refuse, so the import is never refused for it', () => {
+    const r = importSchemaOrgRecipe(JSON.stringify({
+      '@context': 'https://schema.org', '@type': 'Recipe', name: 'Edges', recipeYield: '2',
+      recipeIngredient: ['1 cup (0 g) flour', '1 cup / 0 ml milk', '1 cup (5-2 g) oats', '1 cup (2000000 g) rice'],
+      recipeInstructions: ['Marinate for 200 hours.', 'Cure for 6 days.'],
+    }))
+    expect(r.recipe.ingredients.map((i) => i.stated)).toEqual([null, null, null, null])
+    // 200 hours is over the week a step may last (recipe-schemas.ts): left for a person; 6 days is read
+    expect(r.recipe.steps.map((s) => [s.durationMin, s.readFromText])).toEqual([[null, ['handsOn']], [6 * 86400, ['duration', 'handsOn']]])
+    expect(recipeCreateSchema.safeParse(r.recipe).success).toBe(true)
   })
 })
