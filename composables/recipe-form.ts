@@ -2,7 +2,7 @@
 // while editing), and the conversions between it, a loaded recipe and the request body.
 import type { CautionId } from '~~/shared/utils/cautions'
 import type { AllergenState, EuAllergenId, UsAllergenId } from '~~/shared/utils/allergens'
-import type { RecipeStation } from '~~/shared/types/recipe'
+import type { RecipeStation, StatedMeasure, StepReadField } from '~~/shared/types/recipe'
 import type { UnitId } from '~~/shared/utils/units'
 import type { FluidMeasure } from '~~/shared/utils/fluid-measure'
 import type { LoadedRecipe } from '~/types/api'
@@ -31,6 +31,12 @@ export interface IngredientRow {
   /** "checked by Ada Cook on 2 December 2026", as loaded; empty for a row not yet saved as checked. */
   allergenCheckedText: string
   priceId: number | null
+  /**
+   * The equivalent the recipe states beside the amount ("½ cup (100 g)"), and the amount it was
+   * stated for (min|max|unit as typed): changing the amount drops it.
+   */
+  stated: StatedMeasure | null
+  statedFor: string
 }
 
 export interface StepRow {
@@ -54,6 +60,10 @@ export interface StepRow {
   cameraNote: string
   cautions: CautionId[]
   group: string
+  /** Fields an import read from the text and no one has confirmed; one that is changed here counts as confirmed. */
+  readFromText: StepReadField[]
+  /** Their values as read, to tell a change. */
+  readValues: Pick<StepRow, 'durationMin' | 'durationMax' | 'handsOn' | 'station'>
 }
 
 export interface RecipeForm {
@@ -99,14 +109,16 @@ export function formFromRecipe(r: LoadedRecipe): RecipeForm {
       unit: (i.unit ?? '') as UnitId | '', item: i.item, prep: i.prep ?? '', optional: i.optional, toTaste: i.toTaste, group: i.group ?? '',
       allergens: { eu: [...i.allergens.eu] as EuAllergenId[], us: [...i.allergens.us] as UsAllergenId[] }, allergenState: allergenStateOf(i as never),
       allergenCheckedText: allergenStateOf(i as never) === 'checked' ? allergenCertaintyText(i as never) : '', priceId: i.priceId,
-    })),
+      stated: (i.stated ?? null) as StatedMeasure | null, statedFor: '',
+    })).map((row) => ({ ...row, statedFor: amountKey(row) })),
     steps: r.steps.map((s, index) => ({
       uid: stepUids[index]!, id: s.id, name: s.name ?? '', text: s.text, script: s.script.join('\n'), handsOn: s.handsOn,
       durationMin: minutesText(s.durationMin), durationMax: s.durationMax === s.durationMin ? '' : minutesText(s.durationMax),
       station: (s.station ?? '') as StepRow['station'], after: s.after.map((p) => stepUids[p - 1]).filter((u): u is string => !!u),
       links: (s.links ?? []).map((l) => ({ stepUid: stepUids[l.step - 1]!, kind: l.kind, lag: l.lag })).filter((l) => !!l.stepUid),
       cameraShot: s.cameraShot ?? '', cameraNote: s.cameraNote ?? '', cautions: [...s.cautions] as CautionId[], group: s.group ?? '',
-    })),
+      readFromText: [...(s.readFromText ?? [])] as StepReadField[], readValues: { durationMin: '', durationMax: '', handsOn: true, station: '' },
+    })).map((row) => ({ ...row, readValues: { durationMin: row.durationMin, durationMax: row.durationMax, handsOn: row.handsOn, station: row.station } })),
   }
 }
 
@@ -117,8 +129,23 @@ export function ingredientRow(parts: Partial<Pick<IngredientRow, 'min' | 'max' |
   return {
     uid: rowUid('ing'), key: item ? makeIngredientKey(item, takenKeys) : '', keyAuto: true, min: parts.min ?? '', max: parts.max ?? '', unit: parts.unit ?? '',
     item, prep: parts.prep ?? '', optional: parts.optional ?? false, toTaste: parts.toTaste ?? false, group: '',
-    allergens: { eu: s.eu, us: s.us }, allergenState: s.eu.length || s.us.length ? 'suggested' : 'none-declared', allergenCheckedText: '', priceId: null,
+    allergens: { eu: s.eu, us: s.us }, allergenState: s.eu.length || s.us.length ? 'suggested' : 'none-declared', allergenCheckedText: '', priceId: null, stated: null, statedFor: '',
   }
+}
+
+/** The amount of a row as typed, to tell whether a stated equivalent still belongs to it. */
+const amountKey = (r: Pick<IngredientRow, 'min' | 'max' | 'unit'>) => `${r.min.trim()}|${r.max.trim()}|${r.unit}`
+
+/** The stated equivalent of a row while its amount is still the one it was stated for, else null. */
+export const statedStillHolds = (r: IngredientRow) => (r.stated && r.statedFor === amountKey(r) ? r.stated : null)
+
+/** The fields of a step row still as an import read them (not confirmed, not changed). */
+export function stepStillRead(s: StepRow): StepReadField[] {
+  const v = s.readValues
+  const same = {
+    duration: s.durationMin === v.durationMin && s.durationMax === v.durationMax, handsOn: s.handsOn === v.handsOn, station: s.station === v.station,
+  }
+  return s.readFromText.filter((f) => same[f])
 }
 
 /** "2 1/2 cups plain flour, sifted" as a row, and what the reader was unsure of. */
@@ -129,11 +156,16 @@ export function ingredientFromLine(
   const row = ingredientRow({
     min: amountText(q.min), max: q.max === q.min ? '' : amountText(q.max), unit: q.unit ?? '', item: q.item, prep: q.prep ?? '', optional: q.optional, toTaste: q.toTaste,
   }, takenKeys)
+  row.stated = q.stated
+  row.statedFor = amountKey(row)
   return { row, warnings: q.warnings }
 }
 
 export function blankStep(): StepRow {
-  return { uid: rowUid('step'), name: '', text: '', script: '', handsOn: true, durationMin: '', durationMax: '', station: '', after: [], links: [], cameraShot: '', cameraNote: '', cautions: [], group: '' }
+  return {
+    uid: rowUid('step'), name: '', text: '', script: '', handsOn: true, durationMin: '', durationMax: '', station: '', after: [], links: [], cameraShot: '', cameraNote: '',
+    cautions: [], group: '', readFromText: [], readValues: { durationMin: '', durationMax: '', handsOn: true, station: '' },
+  }
 }
 
 /** An amount as typed ("2", "1.5", "1/2", "1 1/2", "1½"): the number, null for blank, NaN when unreadable. */
@@ -215,6 +247,7 @@ export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>;
       ...(r.id ? { id: r.id } : {}), key: r.key || makeIngredientKey(r.item || 'ingredient', form.ingredients.map((x) => x.key)),
       min: min ?? max, max: max ?? min, unit: r.unit || null, item: r.item.trim(), prep: r.prep.trim() || null, optional: r.optional, toTaste: r.toTaste,
       group: r.group.trim() || null, allergens: { eu: r.allergens.eu, us: r.allergens.us }, allergenState: r.allergenState, priceId: r.priceId,
+      stated: statedStillHolds(r),
     }
   })
   const steps = form.steps.map((s, i) => {
@@ -230,6 +263,7 @@ export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>;
         .map((l) => ({ step: form.steps.findIndex((x) => x.uid === l.stepUid) + 1, kind: l.kind, lag: l.lag }))
         .filter((l) => l.step > 0 && l.step < i + 1),
       cameraShot: s.cameraShot.trim() || null, cameraNote: s.cameraNote.trim() || null, cautions: s.cautions, group: s.group.trim() || null,
+      readFromText: stepStillRead(s),
     }
   })
   const body = {

@@ -95,9 +95,24 @@ export async function planEpisode(episodeId: number, kitchen: KitchenProfile) {
       cues: plan.cues.map((c) => ({ ...c, stepId: Number(c.stepId), during: c.during === null ? null : Number(c.during) })),
       rule: plan.rule,
       kitchen,
+      timeNotices: stepTimeNotices(info),
     }
   } catch (error) {
     if (!(error instanceof PlanError)) throw error
     throw planRefusal(error, info)
   }
+}
+
+/**
+ * Steps whose time the plan only guesses: no time at all (planned as STEP_WITHOUT_DURATION_S), or
+ * a time, wait or station an import read from the step text that no one has confirmed yet.
+ */
+export function stepTimeNotices(info: Map<string, StepInfo>) {
+  const out: { stepId: number; recipeId: number; recipeTitle: string; label: string; kind: 'no-time' | 'read-from-text'; fields: string[] }[] = []
+  for (const [id, i] of info) {
+    const base = { stepId: Number(id), recipeId: i.recipeId, recipeTitle: i.recipeTitle, label: i.label }
+    if (i.step.durationMin === null && i.step.durationMax === null) out.push({ ...base, kind: 'no-time', fields: [] })
+    else if (i.step.readFromText?.length) out.push({ ...base, kind: 'read-from-text', fields: [...i.step.readFromText] })
+  }
+  return out
 }

@@ -29,7 +29,7 @@ export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, 
       const ing = byKey.get(s.key)!
       return {
         id: ing.id, key: s.key, item: s.item, prep: s.prep, min: s.min, max: s.max, unit: s.unit,
-        text: s.text, exactText: s.exactText, optional: s.optional, toTaste: s.toTaste, group: s.group,
+        text: s.text, exactText: s.exactText, source: s.source, sourceText: s.sourceText, optional: s.optional, toTaste: s.toTaste, group: s.group,
       }
     }),
     steps: recipe.steps.map((step) => {
@@ -58,8 +58,10 @@ function costInput(ingredients: CostLine[]) {
 export async function recipeCostView(recipeId: number, studioId: number, servings?: number) {
   const recipe = (await loadRecipe(recipeId))!
   const settings = await studioSettings(studioId)
-  const cost = costRecipe(costInput(recipe.ingredients), await pricesFor(studioId), {
+  const prices = await pricesFor(studioId)
+  const cost = costRecipe(costInput(recipe.ingredients), prices, {
     currency: settings.currency, servings: recipe.servings, forServings: servings ?? recipe.servings, budgetPerServingMinor: settings.budgetPerServingMinor,
+    densities: statedDensities(recipe.ingredients),
   })
   const dec = (minor: number) => minorToDecimal(minor, cost.currency)
   const fmt = (minor: number) => formatMoney(minor, cost.currency, settings.locale)
@@ -78,7 +80,11 @@ export async function recipeCostView(recipeId: number, studioId: number, serving
     },
     complete: cost.complete,
     budget: cost.budget && { ...cost.budget, perServing: dec(cost.budget.perServingMinor), formatted: fmt(cost.budget.perServingMinor) },
-    lines: cost.lines.map((l) => ({ ...l, cost: l.costMinor === null ? null : dec(l.costMinor), formatted: l.costMinor === null ? null : fmt(l.costMinor) })),
+    lines: cost.lines.map((l) => ({
+      ...l, cost: l.costMinor === null ? null : dec(l.costMinor), formatted: l.costMinor === null ? null : fmt(l.costMinor),
+      // where a volume ↔ mass conversion took its density from: the recipe's own measure, else USDA SR Legacy
+      conversion: l.status === 'priced' ? conversionSource(recipe.ingredients.find((i) => i.key === l.key)!, prices.find((p) => p.id === l.priceId)?.packageUnit) : null,
+    })),
     missing: cost.missing.map((l) => ({ key: l.key, item: l.item, message: l.message })),
     problems: cost.problems.map((l) => ({ key: l.key, item: l.item, message: l.message })),
     unmeasured: cost.unmeasured.map((l) => ({ key: l.key, item: l.item, message: l.message })),
@@ -97,6 +103,7 @@ export async function listRecipes(studioId: number, filters: { q?: string; tag?:
     const allergens = listRecipeAllergens(ings as never)
     const cost = costRecipe(costInput(ings), prices, {
       currency: settings.currency, servings: r.servings, budgetPerServingMinor: settings.budgetPerServingMinor,
+      densities: statedDensities(ings),
     })
     return {
       id: r.id, title: r.title, summary: r.summary, servings: r.servings, tags: r.tags, photo: photoUrl(r.photo), updatedAt: r.updatedAt,

@@ -17,14 +17,14 @@ export function photoUrl(key: string | null | undefined) {
 export function recipeView(r: Loaded) {
   const ingredients = [...r.ingredients].sort((a, b) => a.position - b.position).map((i) => ({
     id: i.id, key: i.key, position: i.position, min: i.min, max: i.max, unit: i.unit, item: i.item, prep: i.prep,
-    optional: i.optional, toTaste: i.toTaste, group: i.group, allergens: i.allergens, priceId: i.priceId,
+    optional: i.optional, toTaste: i.toTaste, group: i.group, allergens: i.allergens, priceId: i.priceId, stated: i.stated ?? null,
     allergenState: allergenStateOf(i as never), allergensCheckedBy: i.allergensCheckedBy ?? null,
     allergensCheckedAt: i.allergensCheckedAt ? new Date(i.allergensCheckedAt).toISOString() : null,
   }))
   const steps = [...r.steps].sort((a, b) => a.position - b.position).map((s) => ({
     id: s.id, position: s.position, name: s.name ?? null, text: s.text, script: s.script, handsOn: s.handsOn,
     durationMin: s.durationMin, durationMax: s.durationMax, station: s.station, after: s.after, links: s.links,
-    cameraShot: s.cameraShot, cameraNote: s.cameraNote, cautions: s.cautions, group: s.group, photo: photoUrl(s.photo),
+    cameraShot: s.cameraShot, cameraNote: s.cameraNote, cautions: s.cautions, group: s.group, readFromText: s.readFromText ?? [], photo: photoUrl(s.photo),
   }))
   return {
     id: r.id, studioId: r.studioId, version: r.version, title: r.title, summary: r.summary, servings: r.servings, yieldText: r.yieldText,

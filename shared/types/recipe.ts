@@ -5,6 +5,16 @@ import type { AllergenState, IngredientAllergens } from '../utils/allergens'
 import type { CautionId } from '../utils/cautions'
 import type { UnitId } from '../utils/units'
 
+/** The same amount as the recipe also states it in another unit ("½ cup (100 g)" → 100 g): the author's own measure. */
+export interface StatedMeasure {
+  min: number
+  max: number
+  unit: UnitId
+}
+
+/** A step field an import read from the step's text, until a person confirms or changes it. */
+export type StepReadField = 'duration' | 'handsOn' | 'station'
+
 export type RecipeStation = 'burner' | 'oven' | 'counter'
 
 export interface RecipeIngredientDraft {
@@ -30,6 +40,8 @@ export interface RecipeIngredientDraft {
   /** Who checked the allergens and when (ISO), for a checked ingredient. */
   allergensCheckedBy?: string | null
   allergensCheckedAt?: string | null
+  /** The amount as the line also states it in another unit; used for showing that system and for costing. */
+  stated?: StatedMeasure | null
   /** The studio price this ingredient is costed with (not exported: prices belong to the studio). */
   priceId?: string | number | null
 }
@@ -69,6 +81,8 @@ export interface RecipeStepDraft {
   cautions: CautionId[]
   /** Step group (a schema.org HowToSection name): "Make the sauce". */
   group: string | null
+  /** Fields read from the text by an import (step-time-read.ts), not yet confirmed by a person. */
+  readFromText?: StepReadField[]
 }
 
 export interface RecipeTimes {

@@ -1,5 +1,5 @@
 // Reading and writing the numbers in ingredient lines: 2, 1.5, 1,5, 1/2, ½, 1 1/2, 1½, 1-1/2,
-// one, a, half, a quarter, two thirds, one and a half. Written back exactly: whole numbers and
+// one, a, half, a quarter, two thirds, one and a half, 1 and 1/2, half a dozen. Written back exactly: whole numbers and
 // halves, thirds, quarters and eighths as vulgar fractions (1½, ⅔, 2⅜), anything else as a decimal.
 
 const VULGAR: Record<string, [number, number]> = {
@@ -46,13 +46,16 @@ const num = (t: string) => (t in WORDS ? WORDS[t]! : Number(t))
 // at a word boundary so "a" in "almonds" or "one" in "onions" is never read as a number.
 const END = '(?![\\p{L}\\d/]|[.,]\\d)'
 const READERS: Reader[] = [
+  // "half a dozen" before the half reader, which would read it as ½ of "dozen eggs"
+  { re: new RegExp(`half a dozen${END}`, 'iuy'), value: () => 6 },
   { re: new RegExp(`(\\d+|${WORD}) and (?:a |one )?(half|quarter|third|three[ -]quarters)${END}`, 'iuy'), value: (m) => num(m[1]!.toLowerCase()) + PARTS[m[2]!.toLowerCase()]! },
+  // "1 and 1/2", "one and 3/4": a mixed number written with a word
+  { re: new RegExp(`(\\d+|${WORD}) and (\\d+)/(\\d+)${END}`, 'iuy'), value: (m) => num(m[1]!.toLowerCase()) + Number(m[2]) / Number(m[3]) },
   { re: new RegExp(`(\\d+)(?: |-)(\\d+)/(\\d+)${END}`, 'uy'), value: (m) => Number(m[1]) + Number(m[2]) / Number(m[3]) },
   { re: new RegExp(`(\\d+)/(\\d+)${END}`, 'uy'), value: (m) => Number(m[1]) / Number(m[2]) },
   { re: new RegExp(`(?:a |one )?(half|quarter|third)(?: of)?(?: an?)?${END}`, 'iuy'), value: (m) => PARTS[m[1]!.toLowerCase()]! },
   { re: new RegExp(`two thirds(?: of)?(?: an?)?${END}`, 'iuy'), value: () => 2 / 3 },
   { re: new RegExp(`three[ -]quarters(?: of)?(?: an?)?${END}`, 'iuy'), value: () => 3 / 4 },
-  { re: new RegExp(`half a dozen${END}`, 'iuy'), value: () => 6 },
   { re: new RegExp(`(?:a )?dozen${END}`, 'iuy'), value: () => 12 },
   // 1,000 and 12,500 read as thousands; 0,250 and 1,5 as decimals with a comma.
   { re: new RegExp(`([1-9]\\d{0,2}(?:,\\d{3})+(?:\\.\\d+)?)(?![\\d.,])`, 'uy'), value: (m) => Number(m[1]!.replace(/,/g, '')) },

@@ -5,7 +5,8 @@
 // an optional parenthesis ("1 (400 g) can" keeps "(400 g)" with the item), an optional unit
 // (names, plurals, abbreviations: see shared/data/unit-names.ts), an optional second amount
 // of the same kind ("2 1/2 cups plus 2 tablespoons", "1 lb 4 oz"), which is added in the first
-// unit, and "of". The rest is the item, and after its first top-level comma the prep note.
+// unit, a stated equivalent in another unit ("1/2 cup (100 g)", "1 cup / 240 ml", kept as
+// `stated`: the author's own measure of the same amount), and "of". The rest is the item, and after its first top-level comma the prep note.
 // "optional" anywhere sets the optional flag, "to taste" sets toTaste and leaves no amount.
 // Nothing is dropped: words that were not understood stay in the item or prep text, and
 // anything doubtful is listed in `warnings`.
@@ -30,7 +31,16 @@ export interface ParsedQuantity {
   toTaste: boolean
   /** A compound amount as written ("2½ cups plus 2 tbsp"); empty for a simple amount. */
   parts: QuantityPart[]
+  /** The same amount as the line also states it in another unit: "½ cup (100 g)" → 100 g. */
+  stated: StatedMeasure | null
   warnings: string[]
+}
+
+/** An ingredient's amount as the recipe states it beside the main one, in another unit. */
+export interface StatedMeasure {
+  min: number
+  max: number
+  unit: UnitId
 }
 
 export interface QuantityParseOptions {
@@ -44,7 +54,7 @@ const QUALIFIERS = /(about|approx\.?|approximately|roughly|around|heaped|heaping
 const UNIT_QUALIFIERS = /(heaped|heaping|scant|level|rounded|generous|good)\s+/iy
 const RANGE = /\s?(?:-|to|or)\s?/iy
 const COMPOUND = /\s?(?:\+|plus|and)\s/iy
-const UNIT_END = /(?=$|[\s.,;:()])/y
+const UNIT_END = /(?=$|[\s.,;:()/])/y
 
 function readUnit(text: string, pos: number, options: QuantityParseOptions): { unit: UnitId; end: number } | null {
   const lower = text.toLowerCase()
@@ -77,6 +87,59 @@ function readRange(text: string, pos: number): { min: number; max: number | null
     if (second) return { min: first.value, max: second.value, end: second.end }
   }
   return { min: first.value, max: null, end: first.end }
+}
+
+/**
+ * "100 g", "about 240 ml", "100-120g", "1 lb 2 oz" (added in the first unit), "1 stick": a whole
+ * piece of text read as one measure with a unit, or null.
+ */
+function readMeasure(piece: string, options: QuantityParseOptions): StatedMeasure | null {
+  const t = piece.trim()
+  QUALIFIERS.lastIndex = 0
+  const q = QUALIFIERS.exec(t) ? QUALIFIERS.lastIndex : 0
+  const r = readRange(t, q)
+  if (!r) return null
+  const u = readUnit(t, skipSpace(t, r.end), options)
+  if (!u) return null
+  const m = { min: r.min, max: r.max ?? r.min, unit: u.unit }
+  if (u.end === t.length) return m
+  const more = r.max === null && unitKind(u.unit) !== 'count' ? readAmountAt(t, skipSpace(t, u.end)) : null
+  const u2 = more && readUnit(t, skipSpace(t, more.end), options)
+  if (!u2 || u2.end !== t.length || u2.unit === u.unit || unitKind(u2.unit) !== unitKind(u.unit)) return null
+  const sum = m.min + convertAmount(more!.value, u2.unit, u.unit)
+  return { min: sum, max: sum, unit: u.unit }
+}
+
+/** A stated measure the recipe schema keeps: above zero, at most 1e6, lower end first. */
+const statedInRange = (m: StatedMeasure) => Number.isFinite(m.min) && Number.isFinite(m.max) && m.min > 0 && m.max <= 1e6 && m.min <= m.max
+
+/**
+ * A stated equivalent after the unit: "(100 g)", "(100 g / 3.5 oz)" or "/ 240 ml". Only a
+ * parenthesis that holds nothing but measures counts; the first one in a unit other than `unit`
+ * is the equivalent, any others go to `rest` (kept in the prep note).
+ */
+function readStated(s: string, pos: number, unit: UnitId, options: QuantityParseOptions): { stated: StatedMeasure; rest: string[]; end: number } | null {
+  const at = skipSpace(s, pos)
+  if (s[at] === '/') {
+    const after = skipSpace(s, at + 1)
+    const r = readRange(s, after)
+    if (!r) return null
+    const u = readUnit(s, skipSpace(s, r.end), options)
+    const m = u && { min: r.min, max: r.max ?? r.min, unit: u.unit }
+    if (!m || m.unit === unit || unitKind(m.unit) === 'count' || !statedInRange(m)) return null
+    return { stated: m, rest: [], end: u!.end }
+  }
+  if (s[at] !== '(') return null
+  const close = s.indexOf(')', at)
+  if (close < 0 || s.slice(at + 1, close).includes('(')) return null
+  // "100 g / 3.5 oz", "100g/3.5oz", "100 g; 3.5 oz", "100 g or 3.5 oz"; never the slash of a fraction (1/8)
+  const pieces = s.slice(at + 1, close).split(/ ?; ?| or |(?<!\d) ?\/ ?(?!\d)|(?<=\D) ?\/ ?|(?<=\d) \/ ?| ?\/ (?=\d)/)
+  const measures = pieces.map((p) => readMeasure(p, options))
+  if (!measures.every((m) => m !== null)) return null
+  // "(113 g / 1 stick)": a counted measure is kept in the prep note, never the equivalent
+  const i = measures.findIndex((m) => m!.unit !== unit && unitKind(m!.unit) !== 'count' && statedInRange(m!))
+  if (i < 0) return null
+  return { stated: measures[i]!, rest: pieces.filter((_, k) => k !== i).map((p) => p.trim()), end: close + 1 }
 }
 
 /** Split at the first comma outside parentheses. */
@@ -121,7 +184,7 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
   const line = String(text ?? '')
   if (line.length > QUANTITY_LINE_MAX) {
     warnings.push(`An ingredient line of ${line.length} characters is longer than ${QUANTITY_LINE_MAX}; kept whole as the item, not read for an amount`)
-    return { text: line, min: null, max: null, unit: null, item: line.trim(), prep: null, optional: false, toTaste: false, parts: [], warnings }
+    return { text: line, min: null, max: null, unit: null, item: line.trim(), prep: null, optional: false, toTaste: false, parts: [], stated: null, warnings }
   }
   let s = normaliseAmountText(line)
   let optional = false
@@ -143,6 +206,7 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
   let max: number | null = null
   let unit: UnitId | null = null
   let paren = ''
+  let stated: StatedMeasure | null = null
   const parts: QuantityPart[] = []
 
   QUALIFIERS.lastIndex = 0
@@ -154,12 +218,27 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
     min = range.min
     max = range.max ?? range.min
     pos = skipSpace(s, range.end)
+    // "1/2 a lemon": a fraction of one
+    const one = /an? (?=\p{L})/iuy
+    one.lastIndex = pos
+    if (range.max === null && range.min < 1 && one.test(s)) pos = one.lastIndex
     const p = /\([^()]*\)\s?/y
     p.lastIndex = pos
     const pm = p.exec(s)
     if (pm) {
       paren = pm[0].trim()
       pos = p.lastIndex
+    }
+    // "2 x 400g tins": the size of each, kept with the item as "(400g)"
+    const times = /[x×] /y
+    times.lastIndex = pos
+    if (!pm && times.test(s)) {
+      const size = readRange(s, times.lastIndex)
+      const su = size && readUnit(s, skipSpace(s, size.end), options)
+      if (su && unitKind(su.unit) !== 'count') {
+        paren = `(${s.slice(times.lastIndex, su.end).trim()})`
+        pos = skipSpace(s, su.end)
+      }
     }
     UNIT_QUALIFIERS.lastIndex = pos
     const uq = UNIT_QUALIFIERS.exec(s)
@@ -172,9 +251,24 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
         min! += extra
         max! += extra
       }, () => ({ min: min!, max: max! }))
-      // "1 cup (250 mL) milk": a parenthesis after the unit also stays with the item
+      // "1 tsp each salt and pepper", "1 tbsp each of chives and parsley"
+      const each = /\s?each(?: of)?(?= )/iy
+      each.lastIndex = pos
+      if (each.test(s)) {
+        qualifiers.push('each')
+        pos = each.lastIndex
+      }
+      // "½ cup (100 g) sugar", "1 cup / 240 ml milk": the author's own equivalent, kept as a second
+      // measure; not after a counted unit, where "2 cans (400 g)" is the size of each can
+      const st = unitKind(unit) === 'count' ? null : readStated(s, pos, unit, options)
+      if (st) {
+        stated = st.stated
+        qualifiers.push(...st.rest.map((r) => `also ${r}`))
+        pos = st.end
+      }
+      // "1 cup (room temperature) milk": any other parenthesis after the unit stays with the item
       p.lastIndex = skipSpace(s, pos)
-      const pm2 = p.exec(s)
+      const pm2 = st ? null : p.exec(s)
       if (pm2) {
         paren = [paren, pm2[0].trim()].filter(Boolean).join(' ')
         pos = p.lastIndex
@@ -211,7 +305,8 @@ export function parseQuantity(text: string, options: QuantityParseOptions = {}):
     } else if (max === 0) warnings.push(`The amount in "${text}" is zero`)
   }
   if (!item) warnings.push(`"${text}" names no ingredient`)
-  return { text: String(text ?? ''), min, max, unit, item, prep: prep || null, optional, toTaste, parts, warnings }
+  if (min === null) stated = null
+  return { text: String(text ?? ''), min, max, unit, item, prep: prep || null, optional, toTaste, parts, stated, warnings }
 }
 
 /** "plus 2 tablespoons", "1 lb 4 oz": a second amount of the same kind, added in the first unit. */
@@ -257,11 +352,13 @@ export interface IngredientLineParts {
   prep?: string | null
   optional?: boolean
   toTaste?: boolean
+  stated?: StatedMeasure | null
 }
 
-/** One ingredient as a line that parseQuantity reads back the same: "2 onions, thinly sliced (optional)". */
+/** One ingredient as a line that parseQuantity reads back the same: "½ cup (100 g) sugar", "2 onions, thinly sliced (optional)". */
 export function formatIngredientLine(ing: IngredientLineParts): string {
-  const amount = formatQuantityText(ing.min, ing.max, ing.unit)
+  let amount = formatQuantityText(ing.min, ing.max, ing.unit)
+  if (amount && ing.unit && unitKind(ing.unit) !== 'count' && ing.stated) amount += ` (${formatQuantityText(ing.stated.min, ing.stated.max, ing.stated.unit)})`
   let line = [amount, ing.item].filter(Boolean).join(' ')
   if (ing.prep) line += `, ${ing.prep}`
   if (ing.toTaste && ing.min === null) line += ', to taste'

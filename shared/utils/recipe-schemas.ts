@@ -30,6 +30,12 @@ export const recipeIngredientSchema = z.object({
   }).default({ eu: [], us: [] }),
   allergenState: z.enum(ALLERGEN_STATES, { error: 'allergenState must be suggested, checked or none-declared.' }).optional(),
   priceId: z.number().int().positive().nullable().optional(),
+  /** The equivalent stated beside the unit ("½ cup (100 g)"), the author's own measure of the same amount. */
+  stated: z.object({
+    min: z.number({ error: 'stated.min must be a number.' }).positive('stated.min must be above zero.').max(1e6),
+    max: z.number({ error: 'stated.max must be a number.' }).positive('stated.max must be above zero.').max(1e6),
+    unit: unitId,
+  }).refine((m) => m.min <= m.max, { message: 'The stated lower amount must not be above the upper one.', path: ['min'] }).nullable().default(null),
 }).refine((i) => i.min === null || i.max === null || i.min <= i.max, { message: 'The lower amount (min) must not be above the upper one (max).', path: ['min'] })
 
 /** A step's short name, for its timer and cues: trimmed, at most STEP_NAME_MAX characters, empty is none. */
@@ -57,6 +63,8 @@ export const recipeStepSchema = z.object({
   cameraNote: optionalText('cameraNote', 500),
   cautions: z.array(z.enum(CAUTION_IDS, { error: `caution must be one of: ${CAUTION_IDS.join(', ')}.` })).max(CAUTION_IDS.length).default([]),
   group: optionalText('group', 120),
+  /** Fields an import read from the step's text and no person has confirmed yet. */
+  readFromText: z.array(z.enum(['duration', 'handsOn', 'station'], { error: 'readFromText lists duration, handsOn or station.' })).max(3).default([]),
 }).refine((s) => s.durationMin === null || s.durationMax === null || s.durationMin <= s.durationMax, { message: 'The shorter duration (durationMin) must not be above the longer one (durationMax).', path: ['durationMin'] })
 
 const recipeFields = {

@@ -13,9 +13,13 @@
 // Counted    (2 onions, 3 cloves): to ¼ under 10, whole numbers above.
 // A non-zero amount is never shown as zero: below the smallest step it reads "less than ⅛ tsp".
 // The exact value (unrounded, in the unit shown) is always returned beside the text.
+// Where the recipe states the amount in the display's own system too ("½ cup (100 g)"), that
+// stated measure is shown (scaled) instead of a conversion: it is the author's own density. Each
+// amount says where it came from: as written, as stated beside the main unit, or converted.
 import { formatAmountExact, vulgarFraction } from './amount-text'
 import type { RecipeIngredientDraft } from '../types/recipe'
-import { convertAmount, unitKind, unitLabel, type UnitId } from './units'
+import { formatQuantityText } from './quantity'
+import { convertAmount, unitKind, unitLabel, unitSystem, type UnitId } from './units'
 
 export type DisplaySystem = 'metric' | 'us'
 
@@ -185,6 +189,10 @@ export function formatKitchenAmount(
 }
 
 export interface ScaledIngredient extends KitchenAmount {
+  /** Where the amount shown came from: the main amount as written, the equivalent stated beside it, or a conversion. */
+  source: 'written' | 'stated' | 'converted'
+  /** For the hover: "stated in the recipe beside ½ cup", "converted from 1 cup" (the amount as written, scaled); empty when as written. */
+  sourceText: string
   key: string
   item: string
   prep: string | null
@@ -198,12 +206,40 @@ export function scaleRecipeIngredients(
   ingredients: readonly RecipeIngredientDraft[], fromServings: number, servings: number, options: KitchenDisplayOptions,
 ): { servings: number; ingredients: ScaledIngredient[] } {
   scaleAmount(1, fromServings, servings) // refuses servings that are not above zero, even with no amounts
-  const scale = (v: number | null) => (v === null ? null : scaleAmount(v, fromServings, servings))
+  const scale = (v: number) => scaleAmount(v, fromServings, servings)
   return {
     servings,
     ingredients: [...ingredients].sort((a, b) => a.position - b.position).map((ing) => ({
       key: ing.key, item: ing.item, prep: ing.prep, optional: ing.optional, toTaste: ing.toTaste, group: ing.group,
-      ...formatKitchenAmount(scale(ing.min), scale(ing.max), ing.unit, options, ing.toTaste),
+      ...formatIngredientAmount(ing, scale, options),
     })),
   }
+}
+
+/** Show the stated measure when it is in the display's system and the main one is not. */
+function useStated(main: UnitId, stated: UnitId, system: DisplaySystem): boolean {
+  return unitSystem(stated) === system && unitSystem(main) !== system
+}
+
+type AmountFields = Pick<RecipeIngredientDraft, 'min' | 'max' | 'unit' | 'toTaste' | 'stated'>
+
+/**
+ * An ingredient's amount, scaled by `scale`, shown in the display's system: the stated equivalent
+ * when it is in that system and the main unit is not, else the main amount (converted when the
+ * display needs it), saying which.
+ */
+export function formatIngredientAmount(
+  ing: AmountFields, scale: (v: number) => number, options: KitchenDisplayOptions,
+): KitchenAmount & Pick<ScaledIngredient, 'source' | 'sourceText'> {
+  const s = (v: number | null) => (v === null ? null : scale(v))
+  // the amount as written, scaled (to 4 significant digits): what the shown amount stands beside or was converted from
+  const near = (v: number | null) => (v === null ? null : Number(scale(v).toPrecision(4)))
+  const written = formatQuantityText(near(ing.min), near(ing.max), ing.unit)
+  if (ing.min !== null && ing.unit && ing.stated && useStated(ing.unit, ing.stated.unit, options.system)) {
+    const shown = formatKitchenAmount(scale(ing.stated.min), scale(ing.stated.max), ing.stated.unit, options)
+    return { ...shown, source: 'stated', sourceText: `stated in the recipe beside ${written}` }
+  }
+  const shown = formatKitchenAmount(s(ing.min), s(ing.max), ing.unit, options, ing.toTaste)
+  const converted = ing.unit !== null && shown.unit !== null && unitSystem(shown.unit) !== unitSystem(ing.unit)
+  return { ...shown, source: converted ? 'converted' : 'written', sourceText: converted ? `converted from ${written}` : '' }
 }

@@ -35,6 +35,7 @@ function stepNode(step: RecipeStepDraft): Json {
   node[h('cameraShot')] = step.cameraShot
   node[h('cameraNote')] = step.cameraNote
   node[h('cautions')] = step.cautions
+  node[h('readFromText')] = step.readFromText ?? []
   return node
 }
 

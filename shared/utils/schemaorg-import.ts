@@ -110,7 +110,7 @@ function readIngredients(node: JsonObject, problems: RecipeImportProblem[], opti
     const allergens = readAllergens(x?.allergens) ?? (({ eu, us }) => ({ eu, us }))(suggestAllergens(p.item))
     out.push({
       key, position: out.length + 1, min: p.min, max: p.max, unit: p.unit, item: p.item, prep: p.prep, optional: p.optional,
-      toTaste: p.toTaste, group: x && (typeof x.group === 'string' || x.group === null) ? (x.group as string | null) : group, allergens,
+      toTaste: p.toTaste, stated: p.stated, group: x && (typeof x.group === 'string' || x.group === null) ? (x.group as string | null) : group, allergens,
     })
   })
   if (lines.length > read) problems.push({ field, reason: `lists ${lines.length} lines; Hobline keeps at most ${MAX_RECIPE_ITEMS} ingredients, so the lines after the first ${read} were not read` })

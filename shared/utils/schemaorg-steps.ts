@@ -8,12 +8,16 @@
 // A step from elsewhere whose text opens with "While …", "Meanwhile", "In the meantime" or "At the
 // same time" starts together with the step before it (step-links.ts); a Hobline export says its
 // links itself, so there the text is not read for them.
-import type { RecipeImportProblem, RecipeStepDraft, StepLinkDraft } from '../types/recipe'
+// A step with no time in its markup gets its time, wait (handsOn) and station read from its text
+// (step-time-read.ts), each listed in readFromText until a person confirms or changes it; what a
+// Hobline export states (hobline:handsOn, hobline:station, hobline:readFromText) is taken as stated.
+import type { RecipeImportProblem, RecipeStepDraft, StepLinkDraft, StepReadField } from '../types/recipe'
 import { isCautionId, suggestStepCautions } from './cautions'
 import { parseIsoDuration } from './duration'
 import { MAX_DEPTH, MAX_LIST_READ, MAX_RECIPE_ITEMS, cleanSchemaText, hasSchemaType, isJsonObject, schemaText, type JsonObject } from './schemaorg-read'
 import { readsAsAlongside, startTogetherLink } from './step-links'
 import { importedStepName } from './step-name'
+import { readStepTime } from './step-time-read'
 
 /** Hobline's JSON-LD vocabulary for what schema.org has no property for. */
 export const HOBLINE_LD_PREFIX = 'hobline'
@@ -97,6 +101,11 @@ function extensions(node: JsonObject, field: string, problems: RecipeImportProbl
   if (cautions === undefined) out.cautions = [...new Set(suggestStepCautions(text).map((c) => c.id))]
   else if (Array.isArray(cautions) && cautions.every(isCautionId)) out.cautions = cautions
   else bad('cautions', 'a list of caution ids')
+  const read = hoblineProperty(node, 'readFromText')
+  if (read !== undefined) {
+    if (Array.isArray(read) && read.every((f) => f === 'duration' || f === 'handsOn' || f === 'station')) out.readFromText = [...new Set(read as StepReadField[])]
+    else bad('readFromText', 'a list of "duration", "handsOn", "station"')
+  }
   const max = hoblineProperty(node, 'durationMax')
   if (max !== undefined) {
     try {
@@ -118,9 +127,37 @@ function addStep(ctx: StepContext, node: JsonObject | null, text: string, group:
   ctx.steps.push({
     position, name: node ? importedStepName(schemaText(node.name), text) : null, text, script: [], handsOn: true,
     durationMin: seconds, durationMax: durationMaxOverride ?? seconds,
-    station: null, after: [], cameraShot: null, cameraNote: null, cautions: [], group, ...fields,
+    station: null, after: [], cameraShot: null, cameraNote: null, cautions: [], group, readFromText: [],
+    ...fromText(text, seconds, fields), ...fields,
     ...(alongside ? { links: [startTogetherLink(position - 1)] } : {}),
   })
+}
+
+/** The longest step duration a recipe keeps (recipe-schemas.ts: at most a week). */
+const MAX_STEP_SECONDS = 7 * 24 * 3600
+
+/** What the step text says of the fields its markup leaves out: time, wait and station, each marked as read. */
+function fromText(text: string, seconds: number | null, stated: StepExtensions): Partial<RecipeStepDraft> {
+  if (stated.readFromText) return {}
+  const r = readStepTime(text)
+  const out: Partial<RecipeStepDraft> = {}
+  const read: StepReadField[] = []
+  // a time the recipe schema would refuse (over a week) is left for a person to give
+  if (seconds === null && r.durationMin !== null && r.durationMax! <= MAX_STEP_SECONDS) {
+    out.durationMin = r.durationMin
+    out.durationMax = r.durationMax
+    read.push('duration')
+  }
+  if (stated.handsOn === undefined && r.handsOn === false && (seconds !== null || r.durationMin !== null)) {
+    out.handsOn = false
+    read.push('handsOn')
+  }
+  if (stated.station === undefined && r.station !== null) {
+    out.station = r.station
+    read.push('station')
+  }
+  out.readFromText = read
+  return out
 }
 
 function stepFromNode(node: JsonObject, group: string | null, field: string, ctx: StepContext): void {

@@ -2,7 +2,7 @@
 // An ingredient with no amount renders as its item ("salt to taste" when it is to taste). A token
 // whose key no ingredient has is left as written and reported, so nothing is lost.
 import type { RecipeIngredientDraft } from '../types/recipe'
-import { formatKitchenAmount, scaleAmount, type KitchenDisplayOptions } from './scale'
+import { formatIngredientAmount, scaleAmount, type KitchenDisplayOptions } from './scale'
 import { segmentsText } from './step-segments'
 import { findStepTokens, stepTokenProblems, type StepTextSegment } from './step-text'
 
@@ -25,10 +25,9 @@ export function renderStepText(
     const ing = options.ingredients.find((i) => i.key === t.key)
     if (!ing || bad.has(t.raw)) continue
     if (t.start > at) segments.push({ text: text.slice(at, t.start) })
-    const share = (v: number | null) => (v === null ? null : scaleAmount(v, options.fromServings, options.toServings) * t.factor)
-    const amount = formatKitchenAmount(share(ing.min), share(ing.max), ing.unit, options, ing.toTaste)
+    const amount = formatIngredientAmount(ing, (v) => scaleAmount(v, options.fromServings, options.toServings) * t.factor, options)
     const rendered = amount.min === null ? (ing.toTaste ? `${ing.item} to taste` : ing.item) : t.withItem ? `${amount.text} ${ing.item}` : amount.text
-    segments.push({ text: rendered, ingredientKey: ing.key, ...(amount.exactText ? { exactText: amount.exactText } : {}) })
+    segments.push({ text: rendered, ingredientKey: ing.key, ...(amount.exactText ? { exactText: amount.sourceText ? `${amount.exactText}; ${amount.sourceText}` : amount.exactText } : {}) })
     at = t.end
   }
   if (at < text.length) segments.push({ text: text.slice(at) })

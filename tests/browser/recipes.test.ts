@@ -131,7 +131,8 @@ describe.skipIf(!chromiumAvailable())('recipes in the browser', async () => {
     // 300 mL × 6/4 = 450 mL = 450 / 236.5882365 = 1.902 US cups, shown as 2 cups.
     const milk = page.getByTestId('ingredient-whole-milk').getByTestId('amount')
     await expect(milk.textContent()).resolves.toBe('2 cups')
-    expect(await milk.getAttribute('title')).toBe(`exactly ${Number((450 / CUP_ML).toPrecision(4))} cups`)
+    // the hover also says the cups were converted, and from what (300 mL for 4, scaled to 6)
+    expect(await milk.getAttribute('title')).toBe(`exactly ${Number((450 / CUP_ML).toPrecision(4))} cups; converted from 450 mL`)
     // The exact value shows on keyboard focus, not only on hover.
     await flour.focus()
     await page.getByTestId('ingredient-plain-flour').getByRole('tooltip').waitFor({ state: 'visible' })

@@ -150,6 +150,55 @@ describe('recipes', async () => {
     expect(nothing.body.statusMessage).toMatch(/^body: /)
   })
 
+  it('reads step times from the text as suggestions, saved as read until confirmed, and keeps a stated equivalent', async () => {
+    const page = JSON.stringify({
+      '@context': 'https://schema.org', '@type': 'Recipe', name: 'Coconut sugar cake', recipeYield: '8',
+      recipeIngredient: ['½ cup (100g) coconut sugar', '1 cup / 240 ml milk'],
+      recipeInstructions: ['Preheat the oven to 180°C.', 'Bake for 25 to 30 minutes.', 'Leave to cool for at least 1 hour.', 'Dust with sugar.'],
+    })
+    const preview = await producer.call('POST', `/api/studios/${studioId}/recipes/import?preview=1`, page, { 'content-type': 'application/ld+json' })
+    expect(preview.status).toBe(200)
+    expect(preview.body.draft.steps.map((s: Record<string, unknown>) => [s.durationMin, s.durationMax, s.handsOn, s.station, s.readFromText])).toEqual([
+      [null, null, true, 'oven', ['station']],
+      [1500, 1800, false, 'oven', ['duration', 'handsOn', 'station']],
+      [3600, 3600, false, null, ['duration', 'handsOn']],
+      [null, null, true, null, []],
+    ])
+    // step 2 confirmed in the preview; the others stay marked
+    const saved = await producer.call('POST', `/api/studios/${studioId}/recipes/import?confirmed=2`, page, { 'content-type': 'application/ld+json' })
+    expect(saved.status).toBe(201)
+    const r = saved.body.recipe
+    expect(r.steps.map((s: { readFromText: string[] }) => s.readFromText)).toEqual([['station'], [], ['duration', 'handsOn'], []])
+    expect(r.ingredients[0]).toMatchObject({ min: 0.5, unit: 'cup', item: 'coconut sugar', stated: { min: 100, max: 100, unit: 'g' } })
+    expect(r.ingredients[1]).toMatchObject({ min: 1, unit: 'cup', item: 'milk', stated: { min: 240, max: 240, unit: 'ml' } })
+    expect((await producer.call('POST', `/api/studios/${studioId}/recipes/import?confirmed=first`, page, { 'content-type': 'application/ld+json' })).status).toBe(400)
+
+    // shown metric as the recipe states it, with where it came from
+    const metric = await producer.get(`/api/recipes/${r.id}/scaled?units=metric&servings=16`)
+    expect(metric.body.ingredients[0]).toMatchObject({ text: '200 g', source: 'stated', sourceText: 'stated in the recipe beside 1 cup' })
+    expect(metric.body.ingredients[1]).toMatchObject({ text: '480 mL', source: 'stated' })
+
+    // costed with the author's density: 100 g of a 1 kg bag at £3.00 is 30p (no USDA density is known for coconut sugar)
+    const bag = (await producer.post(`/api/studios/${studioId}/prices`, { item: 'Coconut sugar', packageSize: 1, packageUnit: 'kg', priceMinor: 300, currency: 'GBP' })).body.id
+    const withPrice = { ...r, ingredients: r.ingredients.map((i: Record<string, unknown>, n: number) => ({ ...i, priceId: n === 0 ? bag : null })) }
+    delete withPrice.id
+    const patched = await producer.patch(`/api/recipes/${r.id}`, { ...withPrice, steps: r.steps.map(({ photo: _p, ...s }: Record<string, unknown>) => s) })
+    expect(patched.status).toBe(200)
+    expect(patched.body.ingredients[0].stated).toEqual({ min: 100, max: 100, unit: 'g' })
+    const cost = await producer.get(`/api/recipes/${r.id}/cost`)
+    expect(cost.body.lines[0]).toMatchObject({ status: 'priced', costMinor: 30 })
+    expect(cost.body.lines[0].amountUsed).toBeCloseTo(0.1, 9)
+    expect(cost.body.lines[0].conversion).toBe('the recipe\'s own measure: ½ cup = 100 g')
+
+    // the cook plan names the step with no time and the steps still read from the text
+    const episode = await producer.post(`/api/studios/${studioId}/episodes`, { title: 'Cake day', recipeIds: [r.id] })
+    const plan = await producer.get(`/api/episodes/${episode.body.id}/plan`)
+    expect(plan.status).toBe(200)
+    expect(plan.body.timeNotices.map((n: { label: string; kind: string }) => [n.label, n.kind])).toEqual([
+      ['Preheat the oven to 180°C', 'no-time'], ['Leave to cool for at least 1 hour', 'read-from-text'], ['Dust with sugar', 'no-time'],
+    ])
+  })
+
   it('exports application/ld+json that imports back to the same recipe', async () => {
     const { body: r } = await producer.post(`/api/studios/${studioId}/recipes`, pasta())
     const exported = await producer.get(`/api/recipes/${r.id}/export`)

@@ -12,6 +12,7 @@ import {
   IMPORT_MAX_CHARS, MAX_PROBLEMS, MAX_RECIPE_ITEMS, RecipeImportError, TEXT_MAX_CHARS, cleanSchemaText, extractJsonLdFromHtml,
 } from '../../shared/utils/schemaorg-read'
 import { QUANTITY_LINE_MAX, parseQuantity } from '../../shared/utils/quantity'
+import { readStepTime } from '../../shared/utils/step-time-read'
 import { doublingRatio } from '../support/timing'
 
 const fixture = JSON.parse(readFileSync(resolve(import.meta.dirname, '../fixtures/recipe-fennel-orzo.jsonld'), 'utf8'))
@@ -128,10 +129,37 @@ describe('ingredient lines in time in proportion to their length (up to the 500-
     'commas and spaces': (n) => `1 cup flour${' ,'.repeat(n / 2)}x`,
     'open parentheses': (n) => `1 cup (${' '.repeat(n)}`,
     'trailing punctuation': (n) => `1 cup flour${',;:'.repeat(n / 3)}`,
+    // the stated equivalent (quantity.ts readStated): slashes and fractions in a parenthesis, one unclosed
+    'slashes in a stated parenthesis': (n) => `1 cup (${' / '.repeat(n / 3)}) flour`,
+    'fractions in an unclosed parenthesis': (n) => `1 cup (${'1/'.repeat(n / 2)}`,
+    'measures in a stated parenthesis': (n) => `1 cup (${'1 g / '.repeat(n / 5)}1 g) flour`,
+    'a slash after the unit': (n) => `1 cup /${' /'.repeat(n / 2)}`,
+    '"x" after an amount': (n) => `2 ${'x '.repeat(n / 2)}`,
+    '"each" after a unit': (n) => `1 tsp ${'each '.repeat(n / 5)}salt`,
   }
   for (const [name, make] of Object.entries(lines)) {
     it(`${name}: 240 and 480 characters`, () => {
       const t = doublingRatio(make, (line) => parseQuantity(line), 240, { reps: 300, rounds: 7 })
+      expect(t.ratio, JSON.stringify(t)).toBeLessThan(3)
+    })
+  }
+})
+
+describe('step texts read for their times in time in proportion to their length (steps hold up to 4,000 characters)', { timeout: 60_000 }, () => {
+  // step-time-read.ts: one global tokenising pass, then a bounded look ahead and back from each token
+  const texts: Record<string, (n: number) => string> = {
+    'numbers and units': (n) => '1 2 minutes '.repeat(n / 12),
+    'ranges that never end': (n) => '20 to '.repeat(n / 6),
+    'qualifiers': (n) => 'for about at least up to '.repeat(n / 25),
+    'hyphenated words': (n) => `${'a-'.repeat(n / 2)}`,
+    'fractions': (n) => '1/'.repeat(n / 2),
+    'cooking words and no time': (n) => 'bake simmer rest '.repeat(n / 17),
+    'dutch ovens': (n) => 'dutch oven '.repeat(n / 11),
+    'times in parts and alternatives': (n) => 'bake 5 minutes or 6 minutes per side, '.repeat(n / 38),
+  }
+  for (const [name, make] of Object.entries(texts)) {
+    it(`${name}: 2,000 and 4,000 characters`, () => {
+      const t = doublingRatio(make, (text) => readStepTime(text), 2000, { reps: 20, rounds: 7 })
       expect(t.ratio, JSON.stringify(t)).toBeLessThan(3)
     })
   }

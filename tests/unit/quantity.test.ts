@@ -44,6 +44,11 @@ describe('numbers (common practice)', () => {
     expect(amountOf('one and a half cups milk')).toEqual([1.5, 1.5, 'cup'])
     expect(amountOf('2 and a half cups milk')).toEqual([2.5, 2.5, 'cup'])
     expect(amountOf('a dozen eggs')).toEqual([12, 12, null])
+    // half of a dozen is six, not half of an item called "dozen eggs"
+    expect(parseQuantity('half a dozen eggs')).toMatchObject({ min: 6, max: 6, unit: null, item: 'eggs' })
+    expect(amountOf('1 and 1/2 teaspoons salt')).toEqual([1.5, 1.5, 'tsp'])
+    expect(amountOf('1 and ½ cups milk')).toEqual([1.5, 1.5, 'cup'])
+    expect(amountOf('one and 3/4 cups stock')).toEqual([1.75, 1.75, 'cup'])
   })
   it('reads "a few", "a little", "a splash" as no amount, keeping the words', () => {
     expect(parseQuantity('a few sprigs of thyme')).toMatchObject({ min: null, item: 'a few sprigs of thyme' })
@@ -119,7 +124,9 @@ describe('item, prep note, optional, to taste', () => {
   })
   it('keeps a parenthesis with the item and splits at the first comma outside it', () => {
     expect(parseQuantity('1 (400 g) can chopped tomatoes')).toMatchObject({ min: 1, unit: 'can', item: 'chopped tomatoes (400 g)' })
-    expect(parseQuantity('1 cup (250 ml) milk')).toMatchObject({ unit: 'cup', item: 'milk (250 ml)' })
+    // a measure in the parenthesis after the unit is the author's own equivalent, kept as `stated`
+    expect(parseQuantity('1 cup (250 ml) milk')).toMatchObject({ unit: 'cup', item: 'milk', stated: { min: 250, max: 250, unit: 'ml' } })
+    expect(parseQuantity('1 cup (room temperature) milk')).toMatchObject({ unit: 'cup', item: 'milk (room temperature)', stated: null })
     expect(parseQuantity('2 peppers (red, yellow), diced')).toMatchObject({ item: 'peppers (red, yellow)', prep: 'diced' })
   })
   it('reads "of" after a unit, and a counted unit with no number as one', () => {

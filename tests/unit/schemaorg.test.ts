@@ -12,7 +12,7 @@ import { RecipeImportError, cleanSchemaText, extractJsonLdFromHtml, findRecipeNo
 import { HOBLINE_LD_NAMESPACE } from '../../shared/utils/schemaorg-steps'
 import { CAUTION_IDS } from '../../shared/utils/cautions'
 import { EU_ALLERGENS, US_ALLERGENS } from '../../shared/utils/allergens'
-import { UNIT_IDS } from '../../shared/utils/units'
+import { UNIT_IDS, unitKind } from '../../shared/utils/units'
 import type { RecipeDraft } from '../../shared/types/recipe'
 
 const soup = {
@@ -247,6 +247,7 @@ describe('export → import round trip (property)', () => {
     group: fc.option(fc.constantFrom('For the sauce', 'To serve'), { nil: null }),
     eu: fc.subarray(EU_ALLERGENS.map((a) => a.id)),
     us: fc.subarray(US_ALLERGENS.map((a) => a.id)),
+    stated: fc.option(fc.record({ a: nice, b: nice, unit: fc.constantFrom('g' as const, 'ml' as const, 'oz' as const, 'cup' as const) }), { nil: null }),
   })
   const step = fc.record({
     name: fc.constantFrom(null, 'Pasta water', 'Dough rest', 'Sauce simmer'),
@@ -261,6 +262,7 @@ describe('export → import round trip (property)', () => {
     cameraNote: fc.option(fc.string(), { nil: null }),
     cautions: fc.subarray([...CAUTION_IDS]),
     group: fc.option(fc.constantFrom('Make the soup', 'To serve'), { nil: null }),
+    readFromText: fc.subarray(['duration' as const, 'handsOn' as const, 'station' as const]),
   })
   const draft: fc.Arbitrary<RecipeDraft> = fc.record({
     title: words(1, 5),
@@ -285,6 +287,8 @@ describe('export → import round trip (property)', () => {
       return {
         key: `ing-${n + 1}`, position: n + 1, min, max, unit: min === null ? null : i.unit, item: i.item, prep: i.prep, optional: i.optional,
         toTaste: min === null && i.toTaste, group: i.group, allergens: { eu: i.eu, us: i.us },
+        stated: min === null || i.unit === null || unitKind(i.unit) === 'count' || !i.stated || i.stated.unit === i.unit ? null
+          : { min: Math.min(i.stated.a, i.stated.b), max: Math.max(i.stated.a, i.stated.b), unit: i.stated.unit },
       }
     }),
     steps: d.steps.map((s, n) => ({
@@ -292,7 +296,7 @@ describe('export → import round trip (property)', () => {
       ...(s.together && n > 0 ? { links: [{ step: n, kind: 'start-start' as const, lag: 0 }] } : {}), script: s.script, handsOn: s.handsOn,
       durationMin: s.duration ? s.duration[0] : null, durationMax: s.duration ? s.duration[0] + s.duration[1] : null,
       station: s.station, after: n === 0 ? [] : [...new Set(s.afterSeed.map((x) => (x % n) + 1))].sort((x, y) => x - y),
-      cameraShot: s.cameraShot, cameraNote: s.cameraNote, cautions: s.cautions, group: s.group,
+      cameraShot: s.cameraShot, cameraNote: s.cameraNote, cautions: s.cautions, group: s.group, readFromText: s.readFromText,
     })),
   }))
   it('a recipe exported as JSON-LD imports back equal, with nothing reported', () => {
@@ -301,7 +305,9 @@ describe('export → import round trip (property)', () => {
         const back = importSchemaOrgRecipe(JSON.stringify(exportSchemaOrgRecipe(d)))
         expect(back.problems).toEqual([])
         const near = (x: number | null) => (x === null ? null : Math.round(x * 1e9) / 1e9)
-        const amounts = (r: RecipeDraft) => r.ingredients.map((i) => ({ ...i, min: near(i.min), max: near(i.max) }))
+        const amounts = (r: RecipeDraft) => r.ingredients.map((i) => ({
+          ...i, min: near(i.min), max: near(i.max), stated: i.stated ? { ...i.stated, min: near(i.stated.min), max: near(i.stated.max) } : i.stated,
+        }))
         expect(amounts(back.recipe)).toEqual(amounts(d))
         expect({ ...back.recipe, ingredients: [] }).toEqual({ ...d, ingredients: [] })
       }),

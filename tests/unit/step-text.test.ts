@@ -82,7 +82,7 @@ describe('renderStepText', () => {
     const r = render('Melt {{butter}} gently.', 6, 'us')
     expect(r.segments).toEqual([
       { text: 'Melt ' },
-      { text: '5 oz', ingredientKey: 'butter', exactText: 'exactly 5.291 oz' }, // 150 g / 28.349523125 = 5.2911 oz
+      { text: '5 oz', ingredientKey: 'butter', exactText: 'exactly 5.291 oz; converted from 150 g' }, // the hover names its source; 150 g / 28.349523125 = 5.2911 oz
       { text: ' gently.' },
     ])
   })

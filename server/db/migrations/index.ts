@@ -11,6 +11,7 @@ import m0007 from './0007-shoot-engine'
 import m0008 from './0008-step-names'
 import m0009 from './0009-session-version'
 import m0010 from './0010-kitchen-facts'
+import m0011 from './0011-read-from-text'
 
 export interface MigrationContext {
   queryInterface: QueryInterface
@@ -25,4 +26,4 @@ export interface Migration {
   down: (ctx: MigrationContext) => Promise<void>
 }
 
-export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005, m0006, m0007, m0008, m0009, m0010]
+export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005, m0006, m0007, m0008, m0009, m0010, m0011]

@@ -61,6 +61,8 @@ export class RecipeIngredient extends Model<InferAttributes<RecipeIngredient>, I
   declare allergensCheckedBy: CreationOptional<string | null>
   declare allergensCheckedAt: CreationOptional<Date | null>
   declare priceId: number | null
+  /** The equivalent stated beside the unit: { min, max, unit }, or null. */
+  declare stated: CreationOptional<{ min: number; max: number; unit: string } | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 }
@@ -84,6 +86,8 @@ export class RecipeStep extends Model<InferAttributes<RecipeStep>, InferCreation
   declare cameraNote: string | null
   declare cautions: string[]
   declare group: string | null
+  /** Fields read from the step text by an import and not yet confirmed: 'duration', 'handsOn', 'station'. */
+  declare readFromText: CreationOptional<string[]>
   declare photo: CreationOptional<string | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
@@ -113,7 +117,7 @@ export function initRecipeModels(sequelize: Sequelize) {
       id, recipeId: DataTypes.INTEGER, position: DataTypes.INTEGER, key: DataTypes.STRING(40),
       min: DataTypes.FLOAT, max: DataTypes.FLOAT, unit: DataTypes.STRING(16),
       item: DataTypes.STRING(200), prep: DataTypes.STRING(200), optional: DataTypes.BOOLEAN, toTaste: DataTypes.BOOLEAN, group: DataTypes.STRING(120),
-      allergens: json('allergens', { eu: [], us: [] }), priceId: DataTypes.INTEGER,
+      allergens: json('allergens', { eu: [], us: [] }), priceId: DataTypes.INTEGER, stated: json('stated', null),
       allergenState: { type: DataTypes.STRING(16), defaultValue: 'suggested' }, allergensCheckedBy: DataTypes.STRING(120), allergensCheckedAt: DataTypes.DATE,
       ...stamps,
     },
@@ -123,7 +127,7 @@ export function initRecipeModels(sequelize: Sequelize) {
     {
       id, recipeId: DataTypes.INTEGER, position: DataTypes.INTEGER, name: DataTypes.STRING(40), text: DataTypes.TEXT, script: json('script', []), handsOn: DataTypes.BOOLEAN,
       durationMin: DataTypes.INTEGER, durationMax: DataTypes.INTEGER, station: DataTypes.STRING(12), after: json('after', []), links: json('links', []),
-      cameraShot: DataTypes.STRING(200), cameraNote: DataTypes.STRING(500), cautions: json('cautions', []), group: DataTypes.STRING(120), photo: DataTypes.STRING(200), ...stamps,
+      cameraShot: DataTypes.STRING(200), cameraNote: DataTypes.STRING(500), cautions: json('cautions', []), group: DataTypes.STRING(120), readFromText: json('readFromText', []), photo: DataTypes.STRING(200), ...stamps,
     },
     { sequelize, tableName: 'recipe_steps', underscored: true },
   )
