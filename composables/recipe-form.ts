@@ -1,7 +1,7 @@
 // The recipe editor's form: what the inputs hold (text, so nothing typed is lost or reformatted
 // while editing), and the conversions between it, a loaded recipe and the request body.
 import type { CautionId } from '~~/shared/utils/cautions'
-import type { AllergenState, EuAllergenId, UsAllergenId } from '~~/shared/utils/allergens'
+import { allergenCertaintyText, allergenStateOf, type AllergenState, type EuAllergenId, type UsAllergenId } from '../shared/utils/allergens'
 import type { RecipeStation, StatedMeasure, StepReadField } from '~~/shared/types/recipe'
 import type { UnitId } from '~~/shared/utils/units'
 import type { FluidMeasure } from '~~/shared/utils/fluid-measure'
