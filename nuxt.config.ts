@@ -24,6 +24,9 @@ export default defineNuxtConfig({
   telemetry: false,
   modules: ['@nuxt/eslint', '@nuxtjs/tailwindcss', '@pinia/nuxt', '@vueuse/nuxt', 'nuxt-auth-utils', 'nuxt-security'],
   css: ['~/assets/css/main.css'],
+  // All CSS inlined in the server-rendered page (not only components' own): a tablet paints the
+  // prompter's text without first fetching stylesheets (the LCP benchmark in bench/screens.bench.ts).
+  features: { inlineStyles: true },
   // nuxt-auth-utils hashes with scrypt at OWASP's cost (server/db/scrypt-cost.ts).
   auth: { hash: { scrypt: { ...SCRYPT_OPTIONS } } },
   tailwindcss: { cssPath: false, configPath: 'tailwind.config.ts' },

@@ -21,6 +21,11 @@ export default {
   ],
   theme: {
     extend: {
+      // The alarm's flashing screen edge (ShootAlarmFlash): about once a second, well below WCAG 2.2
+      // SC 2.3.1's three flashes a second. A utility, so it is in the page's inlined CSS: a component's
+      // own <style> would be one more stylesheet every shoot screen waits for before it paints.
+      keyframes: { 'alarm-edge': { from: { opacity: '1' }, to: { opacity: '0.15' } } },
+      animation: { 'alarm-edge': 'alarm-edge 1s steps(2, jump-none) infinite' },
       // The set colours are CSS variables, so a screen's contrast theme is one attribute.
       colors: {
         plan: palette.plan,
