@@ -2,11 +2,12 @@
 // (timerRemainingMs in shared/utils/shoot-timers.ts): nothing here ticks, so every screen shows
 // the same time and a screen that slept, reloaded or lost the network shows the right one.
 import type { ShootTimer } from '~~/shared/types/shoot'
-import { timerRemainingMs } from '~~/shared/utils/shoot-timers'
+import { timerChecking, timerRemainingMs } from '~~/shared/utils/shoot-timers'
 import { clockTextMs } from '~~/shared/utils/clock-text'
+import { LAST_MINUTE_MS, TIMER_WORDS, timerLook } from '~~/shared/utils/shoot-words'
 
 /** The last minute of kitchen time, when a countdown turns urgent. */
-export const COUNTDOWN_URGENT_MS = 60_000
+export const COUNTDOWN_URGENT_MS = LAST_MINUTE_MS
 
 /** m:ss, or h:mm:ss from an hour, rounded up so 0:00 shows only when the time is up. */
 export function countdownText(ms: number): string {
@@ -39,7 +40,13 @@ export function useTimerCountdown(timer: MaybeRefOrGetter<ShootTimer | null | un
     return due.value && since != null ? Math.max(0, now.value - since) : 0
   })
   const label = computed(() => countdownText(remainingMs.value))
-  return { remainingMs, label, urgent, due, overdueMs }
+  /** How it looks now, in the shoot vocabulary (shared/utils/shoot-words.ts): its state's label and colour. */
+  const look = computed(() => {
+    const t = toValue(timer)
+    return t ? timerLook(t, { ringing: due.value, checking: !due.value && timerChecking(t, now.value), remainingMs: remainingMs.value }) : 'running'
+  })
+  const word = computed(() => TIMER_WORDS[look.value])
+  return { remainingMs, label, urgent, due, overdueMs, look, word }
 }
 
 /** Time gone by (the shoot clock, a marker's stamp): m:ss or h:mm:ss, rounded down. */

@@ -5,12 +5,15 @@ import { DEFAULT_KEY_MAP, normaliseKeyMap, type KeyMap } from './key-map'
 
 export const PROMPT_SIZES = ['sm', 'md', 'lg', 'xl'] as const
 export type PromptSize = (typeof PROMPT_SIZES)[number]
+/** The size names a person chooses from, on the device settings and on the screen check alike. */
+export const PROMPT_SIZE_LABELS: Record<PromptSize, string> = { sm: 'Large', md: 'Larger', lg: 'Very large', xl: 'Huge' }
 export const PROMPT_SPACINGS = ['tight', 'normal', 'loose'] as const
 export type PromptSpacing = (typeof PROMPT_SPACINGS)[number]
 /** Contrast themes of the shoot screens: the dark set look, light for daylight kitchens, and
  * maximum contrast (pure white on black) for glass and bright lights. */
 export const SET_THEMES = ['night', 'day', 'max'] as const
 export type SetTheme = (typeof SET_THEMES)[number]
+export const SET_THEME_LABELS: Record<SetTheme, string> = { night: 'Dark (studio)', day: 'Light (daylight)', max: 'Maximum contrast' }
 
 /** Scroll pace of long lines, words per minute; common speaking rates for presenters run about
  * 130–170 wpm (common practice), so the range leaves room either side. */

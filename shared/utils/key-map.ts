@@ -5,6 +5,7 @@
 // case and the space bar as "Space".
 import { SHOOT_TIMER_LABEL_MAX, SHOOT_TIMER_MAX_MS, SHOOT_TIMER_MIN_MS } from '../types/shoot'
 import { plainStepText } from './step-text'
+import { ACTION_WORDS as A } from './shoot-words'
 
 export const KEY_ACTIONS = ['next', 'previous', 'startTimer', 'startWait', 'acknowledge', 'addMinute', 'flub'] as const
 export type KeyAction = (typeof KEY_ACTIONS)[number]
@@ -14,12 +15,12 @@ export type KeyMap = Record<KeyAction, string[]>
 export const KEYS_PER_ACTION = 3
 
 export const KEY_ACTION_LABELS: Record<KeyAction, string> = {
-  next: 'Next step',
-  previous: 'Previous step',
-  startTimer: "Start this step's timer",
-  startWait: 'Start the wait that is due now',
-  acknowledge: 'Acknowledge the alarm, or call a timer done at its check',
-  addMinute: 'One more minute on the ringing (or soonest) timer',
+  next: A['step.next'].label,
+  previous: A['step.previous'].label,
+  startTimer: `${A['timer.start'].label} for this step`,
+  startWait: `${A['wait.start'].label} that is due now`,
+  acknowledge: `${A['timer.done'].label}: stop the ringing alarm, or call a timer done at its check`,
+  addMinute: `${A['timer.add'].label} on the ringing (or soonest) timer`,
   flub: 'Mark a flub',
 }
 

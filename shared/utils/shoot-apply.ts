@@ -20,6 +20,7 @@ import {
 import { clockTextMs } from './clock-text'
 import { shootCursorMoved, shootCursorRef, shootSegmentPositions, shootStepRefAt } from './shoot'
 import { isTimedWait, shootPlanStep, startWait, stepTimerOf } from './shoot-waits'
+import { actionName as press } from './shoot-words'
 
 type Failure = { ok: false; error: ShootCommandError }
 type Change = { state: ShootState; events: ShootEvent[] }
@@ -32,8 +33,8 @@ const isFailure = (o: Outcome): o is Failure => 'ok' in o
 /** Applies one well-formed command (one this code built, or one shoot-schema.ts has read). */
 export function applyKnownShootCommand(state: ShootState, command: ShootCommand, ctx: ShootCommandContext): ShootApplyResult {
   const now = ctx?.nowServerMs
-  if (typeof now !== 'number' || !Number.isFinite(now)) return fail('invalid', 'nowServerMs: the server time must be a finite number of ms', 'nowServerMs')
-  if (state.status === 'ended') return fail('shoot-ended', 'This shoot has ended, so nothing in it can change; start a new shoot to go again.')
+  if (typeof now !== 'number' || !Number.isFinite(now)) return fail('invalid', 'The server could not read its own clock; try again.', 'nowServerMs')
+  if (state.status === 'ended') return fail('shoot-ended', 'This shoot has ended, so nothing in it can change; start a new rehearsal or recording from the episode to go again.')
 
   const marked = markDueTimers(state, now)
   const base: ShootState = { ...marked.state, seq: state.seq }
@@ -67,7 +68,7 @@ function dispatch(s: ShootState, cmd: ShootCommand, ctx: ShootCommandContext, no
     case 'wait.start': return startWaitNow(s, cmd, ctx, now)
     default: {
       const unknown: never = cmd
-      return fail('invalid', `type: "${(unknown as { type: string }).type}" is not a shoot command`, 'type')
+      return fail('invalid', `This screen sent an action the shoot does not know ("${String((unknown as { type: string }).type).slice(0, 40)}"); reload the screen.`, 'type')
     }
   }
 }
@@ -100,7 +101,7 @@ function releaseHeldTimers(s: ShootState, now: number, speed: number): { timers:
 
 function startShoot(s: ShootState, ctx: ShootCommandContext, now: number): Outcome {
   if (s.status !== 'ready') {
-    return fail('already-started', s.status === 'paused' ? 'The shoot has started and is paused; resume it instead.' : 'The shoot is already running.')
+    return fail('already-started', s.status === 'paused' ? `The shoot has started and is paused; press ${press('shoot.resume')} instead.` : 'The shoot is already running.')
   }
   const clock = { ...s.clock, anchorServerMs: now, anchorShootMs: 0, running: true }
   const released = s.mode === 'rehearsal' ? releaseHeldTimers(s, now, clock.speed) : { timers: s.timers, events: [] }
@@ -122,7 +123,7 @@ function startShoot(s: ShootState, ctx: ShootCommandContext, now: number): Outco
 }
 
 function pauseShoot(s: ShootState, now: number): Outcome {
-  if (s.status === 'ready') return fail('not-started', 'The shoot has not started yet; start it first.')
+  if (s.status === 'ready') return fail('not-started', `The shoot has not started yet; press ${press('shoot.start')} first.`)
   if (s.status === 'paused') return fail('not-running', 'The shoot is already paused.')
   const held = s.mode === 'rehearsal' ? holdRunningTimers(s, now) : { timers: s.timers, events: [] }
   const next: ShootState = { ...s, status: 'paused', clock: shootClockStopped(s.clock, now), timers: held.timers }
@@ -130,8 +131,8 @@ function pauseShoot(s: ShootState, now: number): Outcome {
 }
 
 function resumeShoot(s: ShootState, now: number): Outcome {
-  if (s.status === 'ready') return fail('not-started', 'The shoot has not started yet; start it instead.')
-  if (s.status === 'running') return fail('not-paused', 'The shoot is running, not paused; there is nothing to resume.')
+  if (s.status === 'ready') return fail('not-started', `The shoot has not started yet; press ${press('shoot.start')} instead.`)
+  if (s.status === 'running') return fail('not-paused', `The shoot is running, not paused; there is nothing to resume.`)
   const released = s.mode === 'rehearsal' ? releaseHeldTimers(s, now, s.clock.speed) : { timers: s.timers, events: [] }
   const next: ShootState = { ...s, status: 'running', clock: shootClockStarted(s.clock, now), timers: released.timers }
   return { state: next, events: [statusEvent(next, now), ...released.events] }
@@ -142,7 +143,7 @@ function endShoot(s: ShootState, cmd: ShootCommandOf<'shoot.end'>, now: number):
   if (live.length > 0 && !cmd.cancelTimers) {
     const list = live.map((t) => `"${t.label}" (${t.state === 'due' ? 'ringing' : `${clockTextMs(timerRemainingMs(t, now))} left`})`).join(', ')
     return fail('timers-active', `${live.length === 1 ? '1 timer still needs' : `${live.length} timers still need`} attention: ${list}. `
-      + 'Acknowledge or cancel them first, or end with cancelTimers to cancel them all.')
+      + `Press ${press('timer.done')} or ${press('timer.cancel')} on each first, or ${press('shoot.end-cancel')}.`)
   }
   const events: ShootEvent[] = []
   const timers = s.timers.map((t) => {
@@ -186,7 +187,7 @@ function stepBy(s: ShootState, by: 1 | -1, ctx: ShootCommandContext, now: number
   let target = shootCursorMoved(s.runOrder, s.cursor, by)
   if (!target) {
     return by === 1
-      ? fail('at-last-step', 'This is the last step of the run order; there is no next step.')
+      ? fail('at-last-step', 'This is the last step of the run order; there is no next step. Press “End the shoot” when it is done.')
       : fail('at-first-step', 'This is the first step of the run order; there is no previous step.')
   }
   while (by === 1 && waitStarted(s, target)) {
@@ -200,30 +201,30 @@ function stepBy(s: ShootState, by: 1 | -1, ctx: ShootCommandContext, now: number
 function jumpTo(s: ShootState, cmd: ShootCommandOf<'step.jump'>, ctx: ShootCommandContext, now: number): Outcome {
   const ref = shootStepRefAt(s.runOrder, cmd)
   if (!ref) return fail('no-such-step', noSuchStep(s, cmd), s.runOrder[cmd.segment] ? 'step' : 'segment')
-  if (ref.segment === s.cursor.segment && ref.step === s.cursor.step) return fail('no-change', 'The cursor is already at that step.')
+  if (ref.segment === s.cursor.segment && ref.step === s.cursor.step) return fail('no-change', 'The shoot is already at that step.')
   return moveCursor(s, ref, ctx, now)
 }
 
 /** "Start it now": the host confirms a wait's cue before reaching its beat. */
 function startWaitNow(s: ShootState, cmd: ShootCommandOf<'wait.start'>, ctx: ShootCommandContext, now: number): Outcome {
-  if (s.status === 'ready') return fail('not-started', 'Start the shoot first; a wait starts on the shoot clock.')
+  if (s.status === 'ready') return fail('not-started', `Press ${press('shoot.start')} first; a wait starts on the shoot clock.`)
   const step = shootPlanStep(s, cmd.stepId)
   if (!isTimedWait(step)) {
-    return fail('no-such-step', `stepId: "${cmd.stepId}" is not a wait with a time in this shoot's cook plan; start a timer by hand instead.`, 'stepId')
+    return fail('no-such-step', `That step is not a wait with a time in this shoot's cook plan; press ${press('timer.start')} to time it by hand instead.`, 'stepId')
   }
   const started = stepTimerOf(s, step.id)
   if (started) return fail('already-started', `"${started.label}" has already been started.`)
   const waited = startWait(s, step.id, actorOf(ctx), now)
   if (waited.state === s) {
-    return fail('too-many-timers', `${SHOOT_TIMER_SLOTS} timers are live, the most a shoot runs at once; acknowledge or cancel one first.`)
+    return fail('too-many-timers', `${SHOOT_TIMER_SLOTS} timers are running, the most a shoot runs at once; press ${press('timer.done')} or ${press('timer.cancel')} on one first.`)
   }
   return waited
 }
 
 function noSuchStep(s: ShootState, at: ShootCursor): string {
   const seg = s.runOrder[at.segment]
-  if (!seg) return `segment: the run order has segments 0–${s.runOrder.length - 1}, not ${at.segment}.`
-  return `step: segment ${at.segment} has steps 0–${shootSegmentPositions(seg) - 1}, not ${at.step}.`
+  if (!seg) return `The run order has ${s.runOrder.length} segments; there is no segment ${at.segment + 1}.`
+  return `${seg.title ? `“${seg.title}”` : `Segment ${at.segment + 1}`} has ${shootSegmentPositions(seg)} steps; there is no step ${at.step + 1}.`
 }
 
 // ---- timers ------------------------------------------------------------------------------------
@@ -235,8 +236,8 @@ function actorOf(ctx: ShootCommandContext): ShootActor {
 
 function newId(given: string | undefined, ctx: ShootCommandContext, taken: (id: string) => boolean, what: string, field: string): string | Failure {
   const id = given ?? ctx.newId?.()
-  if (typeof id !== 'string' || id === '') return fail('no-id', `${field}: a new ${what} needs an id; send ${field} or give the reducer a newId maker.`, field)
-  if (taken(id)) return fail('duplicate-id', `${field}: this shoot already has a ${what} with id "${id}".`, field)
+  if (typeof id !== 'string' || id === '') return fail('no-id', `The new ${what} could not be given a name to track it by; reload the screen and try again.`, field)
+  if (taken(id)) return fail('duplicate-id', `That ${what} was already added (this screen sent it twice); nothing more to do.`, field)
   return id
 }
 
@@ -249,12 +250,12 @@ function startTimer(s: ShootState, cmd: ShootCommandOf<'timer.start'>, ctx: Shoo
   if (s.timers.length >= SHOOT_TIMER_LIMIT) return fail('too-many-timers', `This shoot has had ${SHOOT_TIMER_LIMIT} timers, the most one shoot keeps.`)
   const live = s.timers.filter(isShootTimerLive)
   if (live.length >= SHOOT_TIMER_SLOTS) {
-    return fail('too-many-timers', `${SHOOT_TIMER_SLOTS} timers are live, the most a shoot runs at once; acknowledge or cancel one first.`)
+    return fail('too-many-timers', `${SHOOT_TIMER_SLOTS} timers are running, the most a shoot runs at once; press ${press('timer.done')} or ${press('timer.cancel')} on one first.`)
   }
   let slot: number
   if (cmd.slot !== undefined) {
     const holder = live.find((t) => t.slot === cmd.slot)
-    if (holder) return fail('slot-taken', `slot: slot ${cmd.slot} is taken by "${holder.label}"; pick a free slot or leave slot out.`, 'slot')
+    if (holder) return fail('slot-taken', `Timer #${cmd.slot + 1} is already "${holder.label}"; pick another number, or leave it for Hobline to choose.`, 'slot')
     slot = cmd.slot
   } else {
     slot = lowestFreeSlot(live)!
@@ -262,7 +263,7 @@ function startTimer(s: ShootState, cmd: ShootCommandOf<'timer.start'>, ctx: Shoo
   const id = newId(cmd.timerId, ctx, (x) => s.timers.some((t) => t.id === x), 'timer', 'timerId')
   if (typeof id !== 'string') return id
   const stepRef = cmd.stepRef ? shootStepRefAt(s.runOrder, cmd.stepRef) : shootCursorRef(s)
-  if (!stepRef) return fail('no-such-step', `stepRef.${noSuchStep(s, cmd.stepRef!)}`, 'stepRef')
+  if (!stepRef) return fail('no-such-step', noSuchStep(s, cmd.stepRef!), 'stepRef')
 
   const spec = { id, slot, label: cmd.label, sound: cmd.sound ?? null, stepRef, durationMs: cmd.durationMs, origin: 'free' as const, checkLeftMs: null }
   const timer = newShootTimer(s, spec, actorOf(ctx), now)
@@ -273,14 +274,14 @@ function startTimer(s: ShootState, cmd: ShootCommandOf<'timer.start'>, ctx: Shoo
 }
 
 function findTimer(s: ShootState, timerId: string): ShootTimer | Failure {
-  return s.timers.find((t) => t.id === timerId) ?? fail('unknown-timer', `timerId: this shoot has no timer "${timerId}".`, 'timerId')
+  return s.timers.find((t) => t.id === timerId) ?? fail('unknown-timer', 'This shoot has no such timer; it may have been cancelled on another screen. Reload to see the timers as they are.', 'timerId')
 }
 
 function closedFailure(t: ShootTimer): Failure | null {
-  if (t.state === 'cancelled') return fail('timer-closed', `"${t.label}" was cancelled; start a new timer instead.`)
+  if (t.state === 'cancelled') return fail('timer-closed', `"${t.label}" was cancelled; press ${press('timer.start')} for a new one.`)
   if (t.state === 'acknowledged') {
     const by = t.acknowledgedBy?.name ?? t.acknowledgedBy?.role ?? 'someone'
-    return fail('timer-closed', `"${t.label}" has rung and was acknowledged by ${by}; start a new timer or add time to run it again.`)
+    return fail('timer-closed', `"${t.label}" is done (${by} pressed ${press('timer.done')}); press ${press('timer.start')} for a new one, or ${press('timer.add')} to run it again.`)
   }
   return null
 }
@@ -301,10 +302,10 @@ function pauseTimer(s: ShootState, cmd: ShootCommandOf<'timer.pause'>, now: numb
   if ('ok' in t) return t
   const closed = closedFailure(t)
   if (closed) return closed
-  if (t.state === 'due') return fail('timer-due', `"${t.label}" is ringing; acknowledge it, or add time to run it again.`)
+  if (t.state === 'due') return fail('timer-due', `"${t.label}" is ringing; press ${press('timer.done')}, or ${press('timer.add')} to run it again.`)
   if (t.state === 'paused') {
     return fail('timer-not-running', t.heldByShoot
-      ? `"${t.label}" is held while the rehearsal is stopped; it runs again when the rehearsal does.`
+      ? `"${t.label}" is paused with the rehearsal; it runs again when you press ${press('shoot.resume')}.`
       : `"${t.label}" is already paused.`)
   }
   return replaceTimer(s, shootTimerPausedAt(t, now))
@@ -315,10 +316,12 @@ function resumeTimer(s: ShootState, cmd: ShootCommandOf<'timer.resume'>, now: nu
   if ('ok' in t) return t
   const closed = closedFailure(t)
   if (closed) return closed
-  if (t.state === 'due') return fail('timer-due', `"${t.label}" is ringing; acknowledge it, or add time to run it again.`)
+  if (t.state === 'due') return fail('timer-due', `"${t.label}" is ringing; press ${press('timer.done')}, or ${press('timer.add')} to run it again.`)
   if (t.state === 'running') return fail('timer-not-paused', `"${t.label}" is running, not paused.`)
   if (rehearsalStopped(s)) {
-    return fail('rehearsal-stopped', `The rehearsal clock is stopped and its timers with it; ${s.status === 'ready' ? 'start' : 'resume'} the rehearsal first.`)
+    return fail('rehearsal-stopped', s.status === 'ready'
+      ? `The rehearsal has not started and its timers wait for it; press ${press('shoot.start')} first.`
+      : `The rehearsal is paused and its timers with it; press ${press('shoot.resume')} first.`)
   }
   return replaceTimer(s, shootTimerRunningFrom(t, now, t.remainingMs ?? 0, s.clock.speed))
 }
@@ -327,17 +330,17 @@ function addTime(s: ShootState, cmd: ShootCommandOf<'timer.addTime'>, now: numbe
   const t = findTimer(s, cmd.timerId)
   if ('ok' in t) return t
   if (t.state === 'cancelled') return closedFailure(t)!
-  const tooLong = () => fail('invalid', `deltaMs: that would leave more than 24 hours on "${t.label}".`, 'deltaMs')
+  const tooLong = () => fail('invalid', `That would leave more than 24 hours on "${t.label}"; a timer runs at most 24 hours.`, 'deltaMs')
 
   if (t.state === 'due' || t.state === 'acknowledged') {
     // A timer that has rung runs again for the time added ("two more minutes").
-    if (cmd.deltaMs < 0) return fail('timer-due', `"${t.label}" has already rung; there is no time left to take off. Add time to run it again.`)
+    if (cmd.deltaMs < 0) return fail('timer-due', `"${t.label}" has already rung; there is no time left to take off. Press ${press('timer.add')} to run it again.`)
     let slot = t.slot
     if (t.state === 'acknowledged') {
       const live = s.timers.filter(isShootTimerLive)
       if (live.some((o) => o.slot === slot)) {
         const free = lowestFreeSlot(live)
-        if (free === null) return fail('too-many-timers', `${SHOOT_TIMER_SLOTS} timers are live, the most a shoot runs at once; acknowledge or cancel one first.`)
+        if (free === null) return fail('too-many-timers', `${SHOOT_TIMER_SLOTS} timers are running, the most a shoot runs at once; press ${press('timer.done')} or ${press('timer.cancel')} on one first.`)
         slot = free
       }
     }
@@ -383,7 +386,7 @@ function acknowledgeTimer(s: ShootState, cmd: ShootCommandOf<'timer.acknowledge'
   if (closed) return closed
   // A wait may be called done from its "check it" moment on (the short end of its range).
   if (t.state !== 'due' && !timerChecking(t, now)) {
-    return fail('timer-not-due', `"${t.label}" has ${clockTextMs(timerRemainingMs(t, now))} left and is not ringing; cancel it to stop it early.`)
+    return fail('timer-not-due', `"${t.label}" has ${clockTextMs(timerRemainingMs(t, now))} left and is not ringing yet; press ${press('timer.cancel')} to stop it early.`)
   }
   const done: ShootTimer = {
     ...t, state: 'acknowledged', acknowledgedBy: actorOf(ctx), acknowledgedAtServerMs: now, closedAtShootMs: shootClockAt(s.clock, now),
@@ -399,7 +402,7 @@ function dueEvent(t: ShootTimer): ShootEvent {
 // ---- rolling, speed, markers -----------------------------------------------------------------------
 
 function setRolling(s: ShootState, cmd: ShootCommandOf<'rolling.set'>, now: number): Outcome {
-  if (cmd.rolling === s.rolling) return fail('no-change', s.rolling ? 'The camera is already rolling.' : 'The camera is not rolling.')
+  if (cmd.rolling === s.rolling) return fail('no-change', s.rolling ? 'The camera is already rolling.' : `The camera is not rolling; press ${press('rolling.on')} to roll.`)
   const next: ShootState = cmd.rolling
     ? { ...s, rolling: true, rollingSinceServerMs: now, rollingSinceShootMs: shootClockAt(s.clock, now) }
     : { ...s, rolling: false, rollingSinceServerMs: null, rollingSinceShootMs: null }
@@ -407,7 +410,7 @@ function setRolling(s: ShootState, cmd: ShootCommandOf<'rolling.set'>, now: numb
 }
 
 function setSpeed(s: ShootState, cmd: ShootCommandOf<'clock.speed'>, now: number): Outcome {
-  if (s.mode === 'take') return fail('take-mode', 'A take runs in real time (1×); clock speed is for rehearsals.')
+  if (s.mode === 'take') return fail('take-mode', 'A recording runs in real time (1×); rehearsal speed is for rehearsals.')
   if (cmd.speed === s.clock.speed) return fail('no-change', `The rehearsal already runs at ${cmd.speed}×.`)
   const timers = s.timers.map((t) =>
     t.state === 'running' ? shootTimerRunningFrom(t, now, timerRemainingMs(t, now), cmd.speed) : t)
@@ -418,7 +421,7 @@ function setSpeed(s: ShootState, cmd: ShootCommandOf<'clock.speed'>, now: number
 }
 
 function addMarker(s: ShootState, cmd: ShootCommandOf<'marker.add'>, ctx: ShootCommandContext, now: number): Outcome {
-  if (s.status === 'ready') return fail('not-started', 'Start the shoot before adding markers: a marker is stamped with the shoot clock.')
+  if (s.status === 'ready') return fail('not-started', `Press ${press('shoot.start')} before marking: a marker is stamped with the shoot clock.`)
   if (s.markers.length >= SHOOT_MARKER_LIMIT) return fail('too-many-markers', `This shoot has ${SHOOT_MARKER_LIMIT} markers, the most one shoot keeps.`)
   const id = newId(cmd.markerId, ctx, (x) => s.markers.some((m) => m.id === x), 'marker', 'markerId')
   if (typeof id !== 'string') return id

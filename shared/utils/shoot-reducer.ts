@@ -17,7 +17,7 @@ const KEEPS_PLAN = new Set(['marker.add', 'rolling.set'])
 export function applyShootCommand(state: ShootState, command: ShootCommand | unknown, ctx: ShootCommandContext): ShootApplyResult {
   const now = ctx?.nowServerMs
   if (typeof now !== 'number' || !Number.isFinite(now)) {
-    return { ok: false, error: { code: 'invalid', message: 'nowServerMs: the server time must be a finite number of ms', field: 'nowServerMs' } }
+    return { ok: false, error: { code: 'invalid', message: 'The server could not read its own clock; try again.', field: 'nowServerMs' } }
   }
   // The one place that decides which role may send which command (the table in shoot-commands.ts).
   const forbidden = shootCommandRefusal(ctx.actor?.role, (command as { type?: unknown } | null)?.type)

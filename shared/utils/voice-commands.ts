@@ -16,7 +16,7 @@ export const VOICE_PHRASES: Record<KeyAction, string[]> = {
   previous: ['go back', 'back', 'previous', 'previous step'],
   startTimer: ['start timer', 'start the timer'],
   startWait: ['start it', 'start the wait', 'start it now'],
-  acknowledge: ['stop alarm', 'stop the alarm', 'got it', 'acknowledge', 'done', 'it is done', "it's done"],
+  acknowledge: ['done', "it's done", 'it is done', 'stop alarm', 'stop the alarm', 'got it', 'acknowledge'],
   addMinute: ['one more minute', 'add a minute', 'add one minute', 'plus one minute'],
   flub: ['flub', 'mark flub', 'mark a flub'],
 }

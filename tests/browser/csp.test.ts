@@ -117,7 +117,7 @@ describe.skipIf(!chromiumAvailable())('no screen breaks the content security pol
     await ready(camera.page)
 
     // The host starts the shoot and moves a step: every screen redraws under the policy.
-    await host.page.getByRole('button', { name: 'Start', exact: true }).click()
+    await host.page.getByRole('button', { name: 'Start the shoot', exact: true }).click()
     await producer.page.locator('[data-testid="shoot-status"][data-status="running"]').waitFor()
     await host.page.keyboard.press('PageDown')
     for (const s of [producer, host, camera]) await s.page.locator('[data-testid="current-step"][data-step="1"]').first().waitFor()

@@ -36,6 +36,16 @@ describe.skipIf(!chromiumAvailable())('foundation screens in Chromium', async ()
     expect(offHost(requests)).toEqual([])
     expect(await axeViolations(page, { aaa: true })).toEqual([])
     await screenshot(page, 'screen-check')
+    // The same size names and every contrast theme the device settings offer.
+    for (const name of ['Large', 'Larger', 'Very large', 'Huge']) await page.locator('[data-testid^="size-"]', { hasText: name }).first().waitFor()
+    await expect(page.locator('[data-testid^="size-"]').count()).resolves.toBe(4)
+    await expect(page.locator('input[name="theme"]').count()).resolves.toBe(3)
+    // Running is mint on the check page, as it is on every running timer.
+    await expect(page.getByTestId('colour-mint').textContent()).resolves.toContain('Running')
+    await page.getByLabel('Light (daylight)').check()
+    await expect.poll(() => page.evaluate(() => document.documentElement.dataset.setTheme)).toBe('day')
+    expect(await axeViolations(page, { aaa: true })).toEqual([])
+    await screenshot(page, 'screen-check-day')
     await page.close()
   })
 

@@ -160,7 +160,7 @@ describe.skipIf(!chromiumAvailable())('a rehearsal run from the cook plan, on th
     const first = (await r.state()).plan!.first!
     if (process.env.REHEARSAL_LOG) writeFileSync(`${process.env.REHEARSAL_LOG}.state.json`, JSON.stringify(await r.state()))
     expect(first.makespanMs).toBeGreaterThan(30 * MIN)
-    await r.host.page.getByRole('button', { name: 'Start', exact: true }).click()
+    await r.host.page.getByRole('button', { name: 'Start the shoot', exact: true }).click()
     await r.desk.page.locator('[data-testid="shoot-status"][data-status="running"]').waitFor()
     // The clock as it runs from the start: nobody pauses or changes the speed, so it holds throughout.
     const clock = (await r.state()).clock

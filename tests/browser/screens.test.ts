@@ -98,7 +98,7 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     const all = [desk, host, camera]
 
     // The host starts the shoot from the tablet; PageDown (a clicker's key) moves every screen.
-    await host.page.getByRole('button', { name: 'Start', exact: true }).click()
+    await host.page.getByRole('button', { name: 'Start the shoot', exact: true }).click()
     await desk.page.locator('[data-testid="shoot-status"][data-status="running"]').waitFor()
     await expect(stepOf(host.page)).resolves.toBe('0')
     await host.page.keyboard.press('PageDown')

@@ -132,7 +132,7 @@ describe.skipIf(!chromiumAvailable())('the live shoot in two browsers', async ()
     for (const page of [producer.page, host.page]) {
       await expect(page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).resolves.toBe(0)
     }
-    await host.page.getByRole('button', { name: 'Acknowledge Flatbread rest' }).click()
+    await host.page.getByRole('button', { name: 'Done: Flatbread rest' }).click()
     await producer.page.locator('[data-testid="done-timer-Flatbread rest"][data-state="acknowledged"]').waitFor({ state: 'attached' })
     await expect(producer.page.getByTestId('timer-Flatbread rest').count()).resolves.toBe(0)
 
@@ -161,7 +161,7 @@ describe.skipIf(!chromiumAvailable())('the live shoot in two browsers', async ()
     await producer.page.locator('[data-testid="connection"]', { hasText: 'Online' }).waitFor()
     await producer.page.locator('[data-testid="current-step"][data-step="3"]').waitFor()
     const server = await (await host.page.request.get(url(`/api/shoots/${shootId}`))).json()
-    await producer.page.locator(`[data-testid="shoot-seq"]`, { hasText: new RegExp(`^${server.state.seq}$`) }).waitFor()
+    await producer.page.locator(`[data-testid="shoot-seq"]`, { hasText: new RegExp(`^${server.state.seq}$`) }).waitFor({ state: 'attached' })
     await expect(producer.page.getByTestId('offline-banner').count()).resolves.toBe(0)
     await expect(attr(producer.page, 'timer-Stew simmer', 'data-deadline')).resolves.toBe(String(server.state.timers.find((t: { label: string }) => t.label === 'Stew simmer').deadlineServerMs))
     // While offline the browser logs its failed reconnection attempts; nothing else went wrong.

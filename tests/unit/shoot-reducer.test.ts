@@ -127,7 +127,7 @@ describe('shoot.start / pause / resume / end', () => {
     const paused = run(running, { type: 'shoot.pause' }, T0 + 1)
     const ended = run(running, { type: 'shoot.end' }, T0 + 1)
     expect(refuse(running, { type: 'shoot.start' }, T0 + 1).code).toBe('already-started')
-    expect(refuse(paused, { type: 'shoot.start' }, T0 + 1).message).toMatch(/resume it instead/)
+    expect(refuse(paused, { type: 'shoot.start' }, T0 + 1).message).toMatch(/press “Resume the shoot” instead/)
     expect(refuse(ready, { type: 'shoot.pause' }, T0).code).toBe('not-started')
     expect(refuse(paused, { type: 'shoot.pause' }, T0 + 2).code).toBe('not-running')
     expect(refuse(ready, { type: 'shoot.resume' }, T0).code).toBe('not-started')
@@ -179,7 +179,7 @@ describe('step.next / step.previous / step.jump', () => {
   it('jump refuses positions outside the run order and the position it is at', () => {
     const s = runningTake()
     expect(refuse(s, { type: 'step.jump', segment: 5, step: 0 }, T0 + 1)).toMatchObject({ code: 'no-such-step', field: 'segment' })
-    expect(refuse(s, { type: 'step.jump', segment: 1, step: 3 }, T0 + 1)).toMatchObject({ code: 'no-such-step', field: 'step', message: expect.stringMatching(/steps 0–2, not 3/) })
+    expect(refuse(s, { type: 'step.jump', segment: 1, step: 3 }, T0 + 1)).toMatchObject({ code: 'no-such-step', field: 'step', message: expect.stringMatching(/has 3 steps; there is no step 4/) })
     expect(refuse(s, { type: 'step.jump', segment: 0, step: 1 }, T0 + 1).code).toBe('no-such-step') // a segment without steps is one position
     expect(refuse(s, { type: 'step.jump', segment: 0, step: 0 }, T0 + 1).code).toBe('no-change')
   })
@@ -348,7 +348,7 @@ describe('timer.cancel / timer.acknowledge', () => {
     const s = withTimer(runningTake(), 'orzo', 3 * MIN, T0)
     expect(refuse(s, { type: 'timer.acknowledge', timerId: 'orzo' }, T0 + MIN)).toMatchObject({ code: 'timer-not-due', message: expect.stringMatching(/2:00 left/) })
     const acked = run(s, { type: 'timer.acknowledge', timerId: 'orzo' }, T0 + 4 * MIN, 'host')
-    expect(refuse(acked, { type: 'timer.acknowledge', timerId: 'orzo' }, T0 + 5 * MIN)).toMatchObject({ code: 'timer-closed', message: expect.stringMatching(/acknowledged by Tomasz Reede/) })
+    expect(refuse(acked, { type: 'timer.acknowledge', timerId: 'orzo' }, T0 + 5 * MIN)).toMatchObject({ code: 'timer-closed', message: expect.stringMatching(/Tomasz Reede pressed “Done”/) })
     expect(refuse(acked, { type: 'timer.cancel', timerId: 'orzo' }, T0 + 5 * MIN).code).toBe('timer-closed')
     const gone = run(s, { type: 'timer.cancel', timerId: 'orzo' }, T0 + 1)
     expect(refuse(gone, { type: 'timer.cancel', timerId: 'orzo' }, T0 + 2).code).toBe('timer-closed')
@@ -371,7 +371,7 @@ describe('rolling.set', () => {
     expect(s).toMatchObject({ rolling: true, rollingSinceServerMs: T0 - 5000, rollingSinceShootMs: 0 })
   })
   it('refuses a change that changes nothing (a double tap)', () => {
-    expect(refuse(runningTake(), { type: 'rolling.set', rolling: false }, T0, 'camera')).toMatchObject({ code: 'no-change', message: 'The camera is not rolling.' })
+    expect(refuse(runningTake(), { type: 'rolling.set', rolling: false }, T0, 'camera')).toMatchObject({ code: 'no-change', message: 'The camera is not rolling; press “Roll” to roll.' })
     const rolling = run(runningTake(), { type: 'rolling.set', rolling: true }, T0, 'camera')
     expect(refuse(rolling, { type: 'rolling.set', rolling: true }, T0 + 1, 'camera').code).toBe('no-change')
   })

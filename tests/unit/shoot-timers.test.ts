@@ -128,7 +128,7 @@ describe('rehearsal speed scales timers', () => {
     expect(timer(s, 'stock')).toMatchObject({ state: 'paused', heldByShoot: false, remainingMs: 28 * MIN })
     expect(markDueTimers(s, T0 + 60 * MIN).due).toEqual([]) // nothing rings while held
     expect(refuse(s, { type: 'timer.resume', timerId: 'stock' }, T0 + 3 * MIN).code).toBe('rehearsal-stopped')
-    expect(refuse(s, { type: 'timer.pause', timerId: 'rice' }, T0 + 3 * MIN)).toMatchObject({ code: 'timer-not-running', message: expect.stringMatching(/held while the rehearsal is stopped/) })
+    expect(refuse(s, { type: 'timer.pause', timerId: 'rice' }, T0 + 3 * MIN)).toMatchObject({ code: 'timer-not-running', message: expect.stringMatching(/paused with the rehearsal; it runs again when you press “Resume the shoot”/) })
     s = run(s, { type: 'shoot.resume' }, T0 + 10 * MIN)
     expect(timer(s, 'rice')).toMatchObject({ state: 'running', heldByShoot: false, deadlineServerMs: T0 + 13 * MIN })
     expect(timer(s, 'stock').state).toBe('paused') // a timer paused by hand stays paused
@@ -136,7 +136,7 @@ describe('rehearsal speed scales timers', () => {
   it('timers set before the rehearsal starts wait for it', () => {
     let s = start(newShoot('rehearsal', 4), 'rice', 10 * MIN, T0 - MIN)
     expect(timer(s, 'rice')).toMatchObject({ state: 'paused', heldByShoot: true, remainingMs: 10 * MIN })
-    expect(refuse(s, { type: 'timer.resume', timerId: 'rice' }, T0).message).toMatch(/start the rehearsal first/)
+    expect(refuse(s, { type: 'timer.resume', timerId: 'rice' }, T0).message).toMatch(/has not started.*press “Start the shoot” first/)
     s = run(s, { type: 'shoot.start' }, T0)
     expect(timer(s, 'rice')).toMatchObject({ state: 'running', deadlineServerMs: T0 + 2.5 * MIN })
   })
