@@ -45,7 +45,7 @@ describe.skipIf(!chromiumAvailable())('the control desk\'s live cook plan', asyn
 
     // The demo kitchen's lanes in plain words (studio kitchen: 1 cook, 4 burners, 1 oven; server/db/demo-recipes.ts).
     const lanes = await timeline.locator('[data-lane]').allTextContents()
-    expect(lanes.map((l) => l.trim())).toEqual(['Hands', 'Burner 1', 'Burner 2', 'Burner 3', 'Burner 4', 'Oven', 'Counter', 'Aside 1'])
+    expect(lanes.map((l) => l.trim())).toEqual(['Hands', 'Burner 1', 'Burner 2', 'Burner 3', 'Burner 4', 'Oven', 'Counter', 'Resting 1'])
     const before = await server()
     const plan = before.plan!
     await expect(page.getByTestId('desk-bar').count()).resolves.toBe(plan.steps.length)

@@ -76,8 +76,8 @@ describe.skipIf(!chromiumAvailable())('cook plan timeline in the browser', async
     const tip = page.getByTestId('plan-tooltip')
     await tip.waitFor()
     await expect(tip.textContent()).resolves.toMatch(/\d+:\d\d–\d+:\d\d/)
-    await expect(tip.textContent()).resolves.toMatch(/Slack: |Critical: no slack/)
-    await expect(bars.first().getAttribute('aria-label')).resolves.toMatch(/ to .*(slack|critical)/)
+    await expect(tip.textContent()).resolves.toMatch(/Spare time: |Sets the finish time: a delay here/)
+    await expect(bars.first().getAttribute('aria-label')).resolves.toMatch(/ to .*(to spare|sets the finish time)/)
     await page.keyboard.press('Escape')
     await tip.waitFor({ state: 'detached' })
 

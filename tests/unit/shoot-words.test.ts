@@ -75,3 +75,15 @@ describe('the screens speak the vocabulary', () => {
     expect(found).toEqual([])
   })
 })
+
+describe('the planning pages speak a crew\'s words', () => {
+  // Scheduling-textbook names the plan's screens used to show, and the two names one switch had.
+  const retired = [/Critical chain/i, /Lower bound/i, /\bslack\b/i, /oven places/i, /'Aside'/, /Two recipes at once/i, /\bTrays\b/, /critical, no/i]
+  const files = [...sources('components/plan'), ...sources('components/desk'), ...sources('pages/episodes'), ...sources('shared/utils').filter((f) => /plan-(lanes|words)\.ts$/.test(f.path))]
+
+  it.each(retired.map((r) => [String(r), r] as const))('no planning screen says %s', (_name, pattern) => {
+    const shown = (line: string) => !/^\s*(\/\/|\*|<!--|\/\*\*)/.test(line) && !/\b(slack|critical)[A-Za-z]*[.:(]|\.(slack|critical)\b|'(slack|critical)'/.test(line)
+    const found = files.filter((f) => f.text.split('\n').some((line) => shown(line) && pattern.test(line))).map((f) => f.path)
+    expect(found).toEqual([])
+  })
+})
