@@ -14,5 +14,9 @@ export function useJoinCodes(shootId: number | string, options: { server?: boole
     await $fetch(`${base}/${id}`, { method: 'DELETE' }).catch(() => null)
     await refresh()
   }
-  return { data, loadError, role, pending, error, submit, revoke }
+  // The whole address a device types, from the site URL the server is set up with (the page's own
+  // origin when it has none), so a crew member reads "http://192.168.1.20:3000/join", not "/join".
+  const site = useRuntimeConfig().public.siteUrl || useRequestURL().origin
+  const joinAddress = `${String(site).replace(/\/+$/, '')}/join`
+  return { data, loadError, role, pending, error, submit, revoke, joinAddress }
 }

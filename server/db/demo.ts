@@ -7,6 +7,7 @@ export const demoStudio = {
   slug: 'brackenford',
   locale: 'en-GB',
   currency: 'GBP',
+  timeZone: 'Europe/London',
   // £1.50 a serving: the budget a weeknight cooking channel might quote (invented).
   budgetPerServingMinor: 150,
 }

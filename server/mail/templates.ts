@@ -3,6 +3,7 @@
 // styles, the system font stack behind Atkinson Hyperlegible, and no images or web fonts at all.
 // Every value put into the HTML is escaped; the text part carries the values as they are.
 import { STUDIO_ROLE_LABELS, STUDIO_ROLE_SUMMARIES, isStudioRole } from '../../shared/utils/roles'
+import { dateTimeInZone } from '../../shared/utils/time-zone'
 
 export interface RenderedMail {
   subject: string
@@ -32,15 +33,11 @@ function checkLink(link: string): string {
 }
 
 /**
- * When a link stops working, in words: "Tuesday 9 December 2026, 14:30 UTC". The mail's words are
- * English, so a locale in another language falls back to British English rather than mix languages.
+ * When a link stops working, in words and in the studio's local time: "Wednesday, 9 December 2026
+ * at 14:30 GMT" (UTC for a studio that has not chosen its zone). The crew page writes the same words.
  */
-export function formatExpiry(expiresAt: Date, locale = 'en-GB'): string {
-  const english = /^en(-|$)/i.test(locale) && Intl.DateTimeFormat.supportedLocalesOf([locale]).length > 0
-  const format = new Intl.DateTimeFormat(english ? locale : 'en-GB', {
-    weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone: 'UTC',
-  })
-  return `${format.format(expiresAt)} UTC`
+export function formatExpiry(expiresAt: Date, locale = 'en-GB', timeZone = 'UTC'): string {
+  return dateTimeInZone(expiresAt, locale, timeZone)
 }
 
 /** How long from `now` until `expiresAt`, rounded to what a reader needs: "7 days", "1 hour", "30 minutes". */
@@ -115,6 +112,8 @@ export interface InviteMailInput {
   expiresAt: Date
   /** The studio's locale, for the date (English locales only; others read as en-GB). */
   locale?: string
+  /** The studio's time zone, for the time the link stops working. */
+  timeZone?: string
   /** For the "in 7 days" figure; defaults to now. */
   now?: Date
 }
@@ -130,7 +129,7 @@ export function inviteMail(input: InviteMailInput): RenderedMail {
   const inviter = oneLine(input.inviterName)
   const link = checkLink(input.link)
   const role = roleInWords(input.role)
-  const until = formatExpiry(input.expiresAt, input.locale)
+  const until = formatExpiry(input.expiresAt, input.locale, input.timeZone)
   const within = formatDuration(input.expiresAt, input.now)
   const roleLine = role.summary ? `${role.label} — ${role.summary}.` : `${role.label}.`
 

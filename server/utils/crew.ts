@@ -1,6 +1,6 @@
 // A studio's crew: members with their roles, and invites by e-mail.
 import { Invite, Membership, Studio, User } from '../db/models'
-import { inviteMail } from '../mail/templates'
+import { formatExpiry, inviteMail } from '../mail/templates'
 import type { StudioRole } from '../../shared/utils/roles'
 import { DomainError } from '../../shared/utils/domain-error'
 
@@ -50,12 +50,14 @@ export async function removeMember(studioId: number, userId: number) {
   })
 }
 
-export function inviteView(invite: Invite) {
+export function inviteView(invite: Invite, studio: { locale: string; timeZone: string } | null) {
   return {
     id: invite.id,
     email: invite.email,
     role: invite.role,
     expiresAt: invite.expiresAt,
+    /** When the link stops working, in the studio's local time, in the words of the invitation mail. */
+    expiresText: formatExpiry(invite.expiresAt, studio?.locale, studio?.timeZone),
     expired: invite.expiresAt.getTime() < Date.now(),
     sentCount: invite.sentCount,
     lastSentAt: invite.lastSentAt,
@@ -65,7 +67,8 @@ export function inviteView(invite: Invite) {
 export async function listInvites(studioId: number) {
   await useDb()
   const rows = await Invite.findAll({ where: { studioId, acceptedAt: null, revokedAt: null }, order: [['id', 'DESC']] })
-  return rows.map(inviteView)
+  const studio = await Studio.findByPk(studioId)
+  return rows.map((r) => inviteView(r, studio))
 }
 
 /** A new link (the old one stops working), a new expiry, and the mail. */
@@ -78,9 +81,11 @@ async function sendInvite(site: string, invite: Invite, inviterName: string) {
   await invite.save()
   const studio = await Studio.findByPk(invite.studioId)
   const link = `${site}/invite/${token}`
-  const mail = inviteMail({ studioName: studio!.name, inviterName, role: invite.role, link, expiresAt: invite.expiresAt, locale: studio!.locale })
+  const mail = inviteMail({
+    studioName: studio!.name, inviterName, role: invite.role, link, expiresAt: invite.expiresAt, locale: studio!.locale, timeZone: studio!.timeZone,
+  })
   await sendMail({ ...mail, to: invite.email, kind: 'invite', studioId: invite.studioId })
-  return { invite: inviteView(invite), token }
+  return { invite: inviteView(invite, studio), token }
 }
 
 export async function inviteToStudio(site: string, studioId: number, inviter: { id: number; name: string }, email: string, role: StudioRole) {

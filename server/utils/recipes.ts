@@ -147,7 +147,7 @@ export async function studioSettings(studioId: number) {
   if (!s) throw new DomainError('not-found', 'There is no such studio.')
   // Plain values: Sequelize's CreationOptional brand must not reach the pages through the API types.
   return {
-    id: s.id, name: s.name, locale: s.locale as string, currency: s.currency as string,
+    id: s.id, name: s.name, locale: s.locale as string, currency: s.currency as string, timeZone: s.timeZone as string,
     budgetPerServingMinor: (s.budgetPerServingMinor ?? null) as number | null, cupUnit: s.cupUnit as string,
     unitSystem: s.unitSystem as string, kitchen: s.kitchen as KitchenProfile,
     fluidMeasure: studioFluidMeasure(s), fluidMeasureChosen: s.fluidMeasure === 'us' || s.fluidMeasure === 'imperial',

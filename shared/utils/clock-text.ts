@@ -23,3 +23,16 @@ export function clockTextMs(ms: number, rounding: ClockRounding = 'up', options:
   const whole = rounding === 'up' ? Math.ceil(s) : rounding === 'down' ? Math.floor(s) : Math.round(s)
   return clockText(whole, options)
 }
+
+/**
+ * Seconds from a time as a cook types it: minutes ("12", "0.5", "7,5") or a clock ("12:30",
+ * "1:02:00"); null when it is neither. Seconds and minutes after a colon run 0–59.
+ */
+export function readClockText(text: string): number | null {
+  const t = text.trim().replace(',', '.')
+  if (/^\d+(\.\d+)?$/.test(t)) return Math.round(Number(t) * 60)
+  const parts = /^(\d+):([0-5]\d)(?::([0-5]\d))?$/.exec(t)
+  if (!parts) return null
+  const [, a, b, c] = parts
+  return c === undefined ? Number(a) * 60 + Number(b) : Number(a) * 3600 + Number(b) * 60 + Number(c)
+}

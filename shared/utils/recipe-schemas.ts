@@ -5,6 +5,7 @@ import { ALLERGEN_STATES, EU_ALLERGENS, US_ALLERGENS } from './allergens'
 import { CAUTION_IDS } from './cautions'
 import { INGREDIENT_KEY } from './step-text'
 import { STEP_NAME_MAX } from './step-name'
+import { isTimeZone } from './time-zone'
 import { UNIT_IDS, type UnitId } from './units'
 
 const text = (field: string, max: number) => z.string({ error: `${field} must be text.` }).trim().max(max, `Use at most ${max} characters for ${field}.`)
@@ -114,6 +115,7 @@ export const studioSettingsSchema = z.object({
   name: text('name', 120).min(1, 'Give the studio a name.').optional(),
   locale: z.string().regex(/^[a-z]{2,3}(-[A-Z][a-z]{3})?(-[A-Z]{2}|-\d{3})?$/, 'locale must be a language tag such as en-GB.').optional(),
   currency: z.string().regex(/^[A-Z]{3}$/, 'currency must be a three-letter code such as GBP.').optional(),
+  timeZone: z.string().refine(isTimeZone, 'Time zone: choose the studio\'s time zone from the list, such as Europe/London.').optional(),
   budgetPerServingMinor: z.number().int('budgetPerServingMinor must be whole minor units.').min(0).max(1e8).nullable().optional(),
   cupUnit: z.enum(['cup', 'metric-cup'], { error: 'cupUnit must be cup (US, 236.6 mL) or metric-cup (250 mL).' }).optional(),
   unitSystem: z.enum(['metric', 'us'], { error: 'unitSystem must be metric or us.' }).optional(),

@@ -22,6 +22,8 @@ describe.skipIf(!chromiumAvailable())('joining a shoot on a tablet', async () =>
     expect(code).toMatch(/^[A-Z2-9]{3}-[A-Z2-9]{3}$/)
     await desk.getByRole('img', { name: /QR code that opens/ }).locator('svg').waitFor()
     await desk.getByText(/Expires in (29|30):\d\d/).waitFor()
+    // The whole address to type on the device, not "/join".
+    await expect(desk.getByTestId('join-address').textContent()).resolves.toBe(url('/join'))
     expect(await axeViolations(desk)).toEqual([])
     await screenshot(desk, 'join-codes')
 

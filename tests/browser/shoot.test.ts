@@ -179,7 +179,7 @@ describe.skipIf(!chromiumAvailable())('the live shoot in two browsers', async ()
     // A time the form cannot send is named on the form, not sent.
     await producer.page.getByRole('button', { name: 'Dismiss' }).click()
     await startTimerOnPage(producer.page, 'Squash roast', '0')
-    await expect(producer.page.locator('#timer-problem').textContent()).resolves.toMatch(/^Minutes: enter a number/)
+    await expect(producer.page.locator('#timer-problem').textContent()).resolves.toMatch(/^How long: write minutes such as 12/)
     await expect(producer.page.getByTestId('timer-Squash roast').count()).resolves.toBe(0)
 
     expect(producer.errors).toEqual([])

@@ -7,6 +7,8 @@ export class Studio extends Model<InferAttributes<Studio>, InferCreationAttribut
   declare slug: string
   declare locale: CreationOptional<string>
   declare currency: CreationOptional<string>
+  /** IANA time zone the studio's times are written in ("Europe/London"); UTC until chosen. */
+  declare timeZone: CreationOptional<string>
   /** Budget target per serving in minor units of the currency; null for none. */
   declare budgetPerServingMinor: CreationOptional<number | null>
   /** 'cup' (US, 236.6 mL) or 'metric-cup' (250 mL) for recipes that say "cup". */
@@ -29,6 +31,7 @@ export function initStudio(sequelize: Sequelize) {
       slug: { type: DataTypes.STRING(80), allowNull: false, unique: true },
       locale: { type: DataTypes.STRING(35), allowNull: false, defaultValue: 'en-GB' },
       currency: { type: DataTypes.STRING(3), allowNull: false, defaultValue: 'GBP' },
+      timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: 'UTC' },
       budgetPerServingMinor: DataTypes.INTEGER,
       cupUnit: { type: DataTypes.STRING(12), defaultValue: 'cup' },
       unitSystem: { type: DataTypes.STRING(8), defaultValue: 'metric' },
