@@ -88,6 +88,10 @@ describe('mail templates', () => {
     expect(mail.html).toContain('https://hobline.example/invites/tok3n?from=mail&amp;x=1')
     // A US studio reads the date the US way.
     expect(invite({ locale: 'en-US' }).text).toContain('Wednesday, December 9, 2026 at 14:30 UTC')
+    // In the studio's own time zone once it has chosen one (IANA tzdata: London is on GMT in
+    // December, New York on EST, UTC−5).
+    expect(invite({ timeZone: 'Europe/London' }).text).toContain('Wednesday, 9 December 2026 at 14:30 GMT')
+    expect(invite({ locale: 'en-US', timeZone: 'America/New_York' }).text).toContain('Wednesday, December 9, 2026 at 09:30 EST')
   })
 
   it('the reset mail says the link works once, until when, and that an unasked mail can be ignored', () => {
