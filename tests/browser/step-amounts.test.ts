@@ -3,12 +3,13 @@
 // studio is metric: 2 tbsp = 29.57 mL by NIST Handbook 44 Appendix C, 1 tbsp = 14.78676478125 mL,
 // shown to 5 mL steps as 30 mL), sees an amount that names no ingredient said in plain words, saves,
 // and finds it kept after a reload and read the same by the server's renderer.
+import { resolve } from 'node:path'
 import { createPage, url } from '@nuxt/test-utils/e2e'
 import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
-import { consoleErrorsOf, screenshot, signInOnPage } from '../support/page'
+import { artifactsDir, consoleErrorsOf, screenshot, signInOnPage } from '../support/page'
 
 const STEW = 'Smoky butter bean and tomato stew'
 
@@ -39,6 +40,8 @@ describe.skipIf(!chromiumAvailable())('amounts in step text, in the browser', as
     })
     expect(words).toContain('Insert amount')
     expect(words).not.toMatch(/\{\{|\}\}/)
+    // "Waits for" names the earlier steps with their amounts as words: "Chop onion finely…".
+    await card.getByText(/^\s*Step 1: Chop onion finely/).waitFor()
 
     // The cursor at the end of the text, a few words typed, then the picker by keyboard.
     await text.click()
@@ -81,13 +84,14 @@ describe.skipIf(!chromiumAvailable())('amounts in step text, in the browser', as
     await preview.getByText('This step mentions an ingredient that is not in the list: “lemon zest”; pick it again from Insert amount.').waitFor()
     expect(await preview.getByTestId('step-preview-text').textContent()).toBe(`${before} Add lemon zest.`)
     expect(await text.getAttribute('aria-invalid')).toBe('true')
+    await card.screenshot({ path: resolve(artifactsDir, 'step-amounts-unknown.png') })
     await text.fill(`${before} Finish with {{olive-oil|item}}.`)
     await expect.poll(() => preview.getByText('not in the list').count()).toBe(0)
     expect(await text.getAttribute('aria-invalid')).toBeNull()
 
     expect(await axeViolations(page)).toEqual([])
-    await card.scrollIntoViewIfNeeded()
-    await page.screenshot({ path: (await screenshot(page, 'step-amounts-editor')).replace('.png', '-card.png'), clip: (await card.boundingBox())! })
+    await screenshot(page, 'step-amounts-editor')
+    await card.screenshot({ path: resolve(artifactsDir, 'step-amounts-card.png') })
 
     await page.getByRole('button', { name: 'Save recipe' }).click()
     await page.getByText(/^Saved at .*\(version \d+\)\.$/).waitFor()
