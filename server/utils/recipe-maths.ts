@@ -14,10 +14,10 @@ type StudioSettings = Awaited<ReturnType<typeof studioSettings>>
 
 /** A recipe already loaded, scaled for a studio whose settings are already read. */
 export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, servings?: number, units?: 'metric' | 'us') {
-  const system = units ?? (settings.unitSystem as 'metric' | 'us')
+  const display = studioKitchenDisplay(settings, units)
+  const system = display.system
   const target = servings ?? recipe.servings
   const draft = recipeDraft(recipe)
-  const display = { system, metricCups: settings.cupUnit === 'metric-cup', fluid: settings.fluidMeasure }
   const scaled = scaleRecipeIngredients(draft.ingredients, recipe.servings, target, display)
   const byKey = new Map(recipe.ingredients.map((i) => [i.key, i]))
   const factor = target / recipe.servings

@@ -43,6 +43,16 @@ export interface KitchenAmount {
   exactText: string
 }
 
+/**
+ * How a studio shows amounts (its settings as the studio API gives them), in `units` when given:
+ * the one reading of them, for the shoot screens, the recipe page and the editor's preview alike.
+ */
+export function studioKitchenDisplay(
+  settings: { unitSystem: string; cupUnit: string; fluidMeasure: 'us' | 'imperial' }, units?: DisplaySystem,
+): KitchenDisplayOptions {
+  return { system: units ?? (settings.unitSystem === 'us' ? 'us' : 'metric'), metricCups: settings.cupUnit === 'metric-cup', fluid: settings.fluidMeasure }
+}
+
 /** value × to ÷ from servings. */
 export function scaleAmount(value: number, fromServings: number, toServings: number): number {
   for (const [name, n] of [['recipe servings', fromServings], ['servings', toServings]] as const) {

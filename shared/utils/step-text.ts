@@ -62,13 +62,35 @@ export function plainStepText(text: string): string {
   return (out + text.slice(at)).replace(/\s+/g, ' ').trim()
 }
 
+export interface StepTokenProblem {
+  token: string
+  reason: string
+  /** The key the token names, and what is wrong: no ingredient has it, or the share is not above zero. */
+  key: string
+  kind: 'missing' | 'share'
+}
+
 /** Tokens that name no ingredient or ask for an impossible share, with what to fix. */
-export function stepTokenProblems(text: string, ingredientKeys: readonly string[]): Array<{ token: string; reason: string }> {
-  return findStepTokens(text).flatMap((t) => {
-    if (!ingredientKeys.includes(t.key)) return [{ token: t.raw, reason: `No ingredient has the key "${t.key}"; use one of: ${ingredientKeys.join(', ') || '(none yet)'}` }]
-    if (!Number.isFinite(t.factor) || t.factor <= 0) return [{ token: t.raw, reason: `The share in ${t.raw} must be above zero` }]
+export function stepTokenProblems(text: string, ingredientKeys: readonly string[]): StepTokenProblem[] {
+  return findStepTokens(text).flatMap((t): StepTokenProblem[] => {
+    if (!ingredientKeys.includes(t.key)) {
+      return [{ token: t.raw, key: t.key, kind: 'missing', reason: `No ingredient has the key "${t.key}"; use one of: ${ingredientKeys.join(', ') || '(none yet)'}` }]
+    }
+    if (!Number.isFinite(t.factor) || t.factor <= 0) return [{ token: t.raw, key: t.key, kind: 'share', reason: `The share in ${t.raw} must be above zero` }]
     return []
   })
+}
+
+/**
+ * A token as the grammar above writes it: `{{key}}`, `{{key|item}}`, `{{key*1/2}}` or `{{key*1/2|item}}`.
+ * `share` is a fraction "n/d" or a decimal above zero; "1" (all of it) writes none.
+ */
+export function writeStepToken(key: string, { withItem = false, share = '1' }: { withItem?: boolean; share?: string } = {}): string {
+  if (!INGREDIENT_KEY.test(key)) throw new RangeError(`An ingredient key is 1 to 40 letters, digits, "-" or "_", not "${key}"`)
+  const token = `{{${key}${share === '1' ? '' : `*${share}`}${withItem ? '|item' : ''}}}`
+  const [read] = findStepTokens(token)
+  if (!read || read.raw !== token || !(read.factor > 0) || !Number.isFinite(read.factor)) throw new RangeError(`"${share}" is no share above zero`)
+  return token
 }
 
 export interface StepTextSegment {

@@ -89,10 +89,12 @@ describe('renderStepText', () => {
   it('leaves an unknown token as written and says what to fix', () => {
     const r = render('Fold in {{sugar}} and {{butter}}.')
     expect(r.text).toBe('Fold in {{sugar}} and 100 g.')
-    expect(r.problems).toEqual([{ token: '{{sugar}}', reason: 'No ingredient has the key "sugar"; use one of: butter, milk, eggs, salt, chives' }])
+    expect(r.problems).toEqual([
+      { token: '{{sugar}}', key: 'sugar', kind: 'missing', reason: 'No ingredient has the key "sugar"; use one of: butter, milk, eggs, salt, chives' },
+    ])
   })
   it('reports a share of zero', () => {
-    expect(stepTokenProblems('{{butter*0}}', ['butter'])[0]!.reason).toMatch(/above zero/)
+    expect(stepTokenProblems('{{butter*0}}', ['butter'])[0]).toMatchObject({ key: 'butter', kind: 'share', reason: expect.stringMatching(/above zero/) })
     expect(render('Add {{butter*0}}.').text).toBe('Add {{butter*0}}.')
   })
   it('leaves text without tokens unchanged (property)', () => {
