@@ -45,7 +45,7 @@ export async function signInOnPage(
 /** Starts a timer through a shoot screen's timer form (ShootTimerForm); minutes as typed, e.g. "0.05". */
 export async function startTimerOnPage(page: Page, label: string, minutes: string) {
   await page.getByLabel('What is cooking').fill(label)
-  await page.getByRole('spinbutton', { name: 'Minutes' }).fill(minutes)
+  await page.getByRole('textbox', { name: /^How long/ }).fill(minutes)
   await page.getByRole('button', { name: 'Start timer' }).click()
 }
 
