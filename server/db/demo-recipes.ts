@@ -2,6 +2,7 @@
 // price. Ingredient lines are written as a cook writes them and read with the app's own parser.
 import type { CautionId } from '../../shared/utils/cautions'
 import type { RecipeStation } from '../../shared/types/recipe'
+import type { DemoPhotoName } from './demo-photos'
 
 export interface DemoStep {
   /** Short name for the step's timer and cues. */
@@ -23,7 +24,7 @@ export interface DemoRecipe {
   summary: string
   servings: number
   tags: string[]
-  photo: 'plate' | 'pan' | 'loaf'
+  photo: DemoPhotoName
   /** Ingredient lines, each with the demo price it is costed with (every line has one: the demo's cost is complete). */
   lines: [string, string][]
   steps: DemoStep[]
@@ -55,7 +56,7 @@ export const demoRecipes: DemoRecipe[] = [
     summary: 'A one-pot stew for a cold evening: soft onions, smoked paprika and creamy beans.',
     servings: 4,
     tags: ['one-pot', 'vegan', 'budget'],
-    photo: 'pan',
+    photo: 'stew',
     lines: [
       ['2 tbsp olive oil', 'Olive oil'],
       ['1 onion, finely chopped', 'Onions'],
@@ -81,7 +82,7 @@ export const demoRecipes: DemoRecipe[] = [
     summary: 'Two-ingredient dough rested while the yoghurt is mixed, cooked in a dry pan.',
     servings: 4,
     tags: ['bread', 'vegetarian', 'quick'],
-    photo: 'loaf',
+    photo: 'flatbreads',
     lines: [
       ['250 g self-raising flour', 'Self-raising flour'],
       ['350 g plain yoghurt', 'Plain yoghurt'],
@@ -103,7 +104,7 @@ export const demoRecipes: DemoRecipe[] = [
     summary: 'Oven-roasted squash on lemony lentils with a loose tahini sauce.',
     servings: 4,
     tags: ['oven', 'vegan'],
-    photo: 'plate',
+    photo: 'squash',
     lines: [
       ['1 butternut squash, peeled and cut into chunks', 'Butternut squash'],
       ['3 tbsp olive oil', 'Olive oil'],

@@ -1,4 +1,4 @@
-// The logo, the favicon and the browser's theme colour use Hobline's palette (shared/utils/palette.ts,
+// The logo, the favicon, the browser's theme colour and the drawn demo photos use Hobline's palette (shared/utils/palette.ts,
 // the colours tailwind.config.ts gives the pages), not colours of their own. Colours are read as SVG 1.1
 // paints (fill, stroke, stop-color: a #rrggbb colour, none, currentColor or a url() to a gradient).
 import { readFileSync } from 'node:fs'
@@ -44,6 +44,14 @@ describe('the mark in the header (components/brand/BrandMark.vue)', () => {
       expect(theme, expr).toBeDefined()
       expect((palette as Record<string, Record<string, string>>)[theme!]![name!], expr).toMatch(/^#[0-9a-f]{6}$/)
     }
+  })
+})
+
+describe('the demo photos (scripts/make-demo-photos.ts)', () => {
+  it('are drawn with palette colours only: the script writes no colour of its own', () => {
+    const source = read('scripts/make-demo-photos.ts')
+    expect(source).toMatch(/palette/)
+    expect([...source.matchAll(/#[0-9a-f]{3,8}\b|rgba?\(|hsla?\(/gi)].map((m) => m[0])).toEqual([])
   })
 })
 
