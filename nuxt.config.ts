@@ -1,6 +1,7 @@
 // Hobline: the run-of-show for cooking on camera.
 import { fileURLToPath } from 'node:url'
 import { SCRYPT_OPTIONS } from './server/db/scrypt-cost'
+import { palette } from './shared/utils/palette'
 import { bundleWorker } from './server/workers/bundle'
 
 // Security headers (nuxt-security; DEVELOPERS.md, "Security headers", is the policy in words and
@@ -37,7 +38,8 @@ export default defineNuxtConfig({
       meta: [
         { name: 'viewport', content: 'width=device-width, initial-scale=1' },
         { name: 'description', content: 'Hobline turns recipes into a timed, shared script for a kitchen shoot.' },
-        { name: 'theme-color', content: '#14181f' },
+        // The browser's own bar in the shoot screens' background (tests/unit/brand-colours.test.ts).
+        { name: 'theme-color', content: palette.set.night },
       ],
       link: [{ rel: 'icon', type: 'image/svg+xml', href: '/favicon.svg' }],
     },

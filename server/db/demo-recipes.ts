@@ -2,6 +2,7 @@
 // price. Ingredient lines are written as a cook writes them and read with the app's own parser.
 import type { CautionId } from '../../shared/utils/cautions'
 import type { RecipeStation } from '../../shared/types/recipe'
+import type { DemoPhotoName } from './demo-photos'
 
 export interface DemoStep {
   /** Short name for the step's timer and cues. */
@@ -23,9 +24,9 @@ export interface DemoRecipe {
   summary: string
   servings: number
   tags: string[]
-  photo: 'plate' | 'pan' | 'loaf'
-  /** Ingredient lines; "@price" names the demo price an ingredient is costed with. */
-  lines: [string, string | null][]
+  photo: DemoPhotoName
+  /** Ingredient lines, each with the demo price it is costed with (every line has one: the demo's cost is complete). */
+  lines: [string, string][]
   steps: DemoStep[]
 }
 
@@ -34,18 +35,19 @@ export const demoPrices: [string, number, string, number, string][] = [
   ['Olive oil', 500, 'ml', 450, 'Marrow Lane Grocer'],
   ['Onions', 3, 'each', 60, 'Marrow Lane Grocer'],
   ['Garlic', 12, 'clove', 45, 'Marrow Lane Grocer'],
-  ['Chopped tomatoes', 400, 'g', 55, 'Brackenford Co-op'],
-  ['Butter beans', 1, 'can', 70, 'Brackenford Co-op'],
-  ['Smoked paprika', 40, 'g', 125, 'Brackenford Co-op'],
-  ['Vegetable stock', 1, 'l', 110, 'Brackenford Co-op'],
+  ['Chopped tomatoes', 400, 'g', 55, 'Tallow Yard Pantry'],
+  ['Butter beans', 1, 'can', 70, 'Tallow Yard Pantry'],
+  ['Smoked paprika', 40, 'g', 125, 'Tallow Yard Pantry'],
+  ['Vegetable stock', 1, 'l', 110, 'Tallow Yard Pantry'],
   ['Parsley', 1, 'bunch', 75, 'Marrow Lane Grocer'],
-  ['Self-raising flour', 1.5, 'kg', 110, 'Brackenford Co-op'],
-  ['Plain yoghurt', 500, 'g', 135, 'Brackenford Co-op'],
+  ['Self-raising flour', 1.5, 'kg', 110, 'Tallow Yard Pantry'],
+  ['Plain yoghurt', 500, 'g', 135, 'Tallow Yard Pantry'],
   ['Mint', 1, 'bunch', 75, 'Marrow Lane Grocer'],
   ['Butternut squash', 1, 'each', 120, 'Marrow Lane Grocer'],
-  ['Green lentils', 500, 'g', 160, 'Brackenford Co-op'],
-  ['Tahini', 300, 'g', 275, 'Brackenford Co-op'],
+  ['Green lentils', 500, 'g', 160, 'Tallow Yard Pantry'],
+  ['Tahini', 300, 'g', 275, 'Tallow Yard Pantry'],
   ['Lemons', 1, 'each', 30, 'Marrow Lane Grocer'],
+  ['Sea salt', 500, 'g', 65, 'Tallow Yard Pantry'],
 ]
 
 export const demoRecipes: DemoRecipe[] = [
@@ -54,17 +56,17 @@ export const demoRecipes: DemoRecipe[] = [
     summary: 'A one-pot stew for a cold evening: soft onions, smoked paprika and creamy beans.',
     servings: 4,
     tags: ['one-pot', 'vegan', 'budget'],
-    photo: 'pan',
+    photo: 'stew',
     lines: [
       ['2 tbsp olive oil', 'Olive oil'],
       ['1 onion, finely chopped', 'Onions'],
       ['3 cloves garlic, sliced', 'Garlic'],
-      ['1 tsp smoked paprika', 'Smoked paprika'],
+      ['1 tsp (2 g) smoked paprika', 'Smoked paprika'],
       ['800 g chopped tomatoes', 'Chopped tomatoes'],
       ['2 cans butter beans, drained', 'Butter beans'],
       ['500 ml vegetable stock', 'Vegetable stock'],
       ['1 bunch parsley, chopped (optional)', 'Parsley'],
-      ['salt, to taste', null],
+      ['1 tsp salt, or to taste', 'Sea salt'],
     ],
     steps: [
       { text: 'Chop {{onion|item}} finely and slice the garlic.', script: ['Start with the onion: small and even, so it softens at the same rate.'], handsOn: true, minutes: [4, 5], station: 'counter', shot: 'Overhead on the board', cautions: ['knife'] },
@@ -80,12 +82,12 @@ export const demoRecipes: DemoRecipe[] = [
     summary: 'Two-ingredient dough rested while the yoghurt is mixed, cooked in a dry pan.',
     servings: 4,
     tags: ['bread', 'vegetarian', 'quick'],
-    photo: 'loaf',
+    photo: 'flatbreads',
     lines: [
       ['250 g self-raising flour', 'Self-raising flour'],
       ['350 g plain yoghurt', 'Plain yoghurt'],
       ['1 bunch mint, leaves picked', 'Mint'],
-      ['1 pinch salt', null],
+      ['¼ tsp salt', 'Sea salt'],
     ],
     steps: [
       { text: 'Mix {{self-raising-flour|item}} with {{plain-yoghurt*5/7|item}} and the salt into a soft dough.', script: ['Just two things in the bowl: flour and yoghurt.'], handsOn: true, minutes: [4, 5], station: 'counter', shot: 'Overhead on the bowl', cautions: ['allergen'] },
@@ -102,14 +104,14 @@ export const demoRecipes: DemoRecipe[] = [
     summary: 'Oven-roasted squash on lemony lentils with a loose tahini sauce.',
     servings: 4,
     tags: ['oven', 'vegan'],
-    photo: 'plate',
+    photo: 'squash',
     lines: [
       ['1 butternut squash, peeled and cut into chunks', 'Butternut squash'],
       ['3 tbsp olive oil', 'Olive oil'],
       ['200 g green lentils, rinsed', 'Green lentils'],
-      ['3 tbsp tahini', 'Tahini'],
+      ['3 tbsp (45 g) tahini', 'Tahini'],
       ['1 lemon, juiced', 'Lemons'],
-      ['salt, to taste', null],
+      ['1 tsp salt, or to taste', 'Sea salt'],
     ],
     steps: [
       { text: 'Heat the oven to 200 °C. Peel and cut the squash into chunks.', script: ['A heavy knife and a flat side down — squash likes to roll.'], handsOn: true, minutes: [8, 10], station: 'counter', shot: 'Overhead on the board', cautions: ['knife'] },

@@ -15,7 +15,7 @@ export const demoStudio = {
 export const DEMO_PASSWORD = 'hob-demo-2026'
 
 export const demoCrew: { name: string; email: string; role: StudioRole }[] = [
-  { name: 'Ines Marrow', email: 'producer@brackenford.test', role: 'producer' },
+  { name: 'Ines Carrowby', email: 'producer@brackenford.test', role: 'producer' },
   { name: 'Tobiah Quill', email: 'host@brackenford.test', role: 'host' },
   { name: 'Wren Adeyemi-Holt', email: 'camera@brackenford.test', role: 'camera' },
   { name: 'Saoirse Lindqvist', email: 'viewer@brackenford.test', role: 'viewer' },

@@ -26,7 +26,7 @@ export async function seedDemoRecipes(studioId: number, currency: string) {
       const { eu, us } = suggestAllergens(q.item)
       await RecipeIngredient.create({
         recipeId: recipe.id, position: position + 1, key, min: q.min, max: q.max, unit: q.unit, item: q.item, prep: q.prep,
-        optional: q.optional, toTaste: q.toTaste, group: null, allergens: { eu, us }, priceId: price ? priceIds.get(price)! : null,
+        optional: q.optional, toTaste: q.toTaste, group: null, allergens: { eu, us }, priceId: priceIds.get(price)!, stated: q.stated,
       })
     }
     for (const [position, step] of demo.steps.entries()) {

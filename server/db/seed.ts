@@ -4,6 +4,7 @@ import type { Sequelize } from 'sequelize'
 import { DEMO_PASSWORD, demoCrew, demoStudio } from './demo'
 import { Membership, Studio, User } from './models'
 import { seedDemoRecipes } from './seed-recipes'
+import type { DemoPhotoName } from './demo-photos'
 
 export interface SeedResult {
   seeded: boolean
@@ -12,7 +13,7 @@ export interface SeedResult {
 
 export type PasswordHasher = (password: string) => Promise<string>
 /** Stores a demo photo for a recipe and returns its storage key (server/utils/photos.ts). */
-export type DemoPhotoStore = (name: 'plate' | 'pan' | 'loaf', studioId: number, recipeId: number) => Promise<string>
+export type DemoPhotoStore = (name: DemoPhotoName, studioId: number, recipeId: number) => Promise<string>
 
 export async function isEmpty(): Promise<boolean> {
   return (await Studio.count()) === 0

@@ -56,14 +56,30 @@ export async function newPasswordHash(password: string, email: string): Promise<
   return hashPassword(password)
 }
 
+/** A new studio with `userId` as its producer, in the caller's transaction: sign-up's and "Open a studio"'s. */
+export async function createStudioFor(userId: number, input: { name: string; locale?: string; currency?: string }, transaction: Transaction): Promise<Studio> {
+  const studio = await Studio.create({ name: input.name, slug: slugFor(input.name), locale: input.locale, currency: input.currency }, { transaction })
+  await Membership.create({ userId, studioId: studio.id, role: 'producer' }, { transaction })
+  return studio
+}
+
 export async function signUp(input: { name: string; email: string; password: string; studioName: string }) {
   const sequelize = await useDb()
   const passwordHash = await newPasswordHash(input.password, input.email)
   return sequelize.transaction(async (transaction) => {
     const user = await createUser({ name: input.name, email: input.email, passwordHash }, transaction)
-    const studio = await Studio.create({ name: input.studioName, slug: slugFor(input.studioName) }, { transaction })
-    await Membership.create({ userId: user.id, studioId: studio.id, role: 'producer' }, { transaction })
+    const studio = await createStudioFor(user.id, { name: input.studioName }, transaction)
     return { user: publicUser(user), studioId: studio.id, sessionVersion: user.sessionVersion ?? 0 }
+  })
+}
+
+/** A signed-in member opens another studio and becomes its producer. */
+export async function openStudio(userId: number, input: { name: string; locale: string; currency: string }) {
+  const sequelize = await useDb()
+  return sequelize.transaction(async (transaction) => {
+    if (!(await User.findByPk(userId, { attributes: ['id'], transaction }))) throw new DomainError('signed-out', 'This account no longer exists. Sign in again.')
+    const studio = await createStudioFor(userId, input, transaction)
+    return { id: studio.id, name: studio.name, locale: studio.locale, currency: studio.currency }
   })
 }
 

@@ -67,6 +67,11 @@ const rows: Row[] = [
   // the shoot, which refuses a camera that is not rolling to stop rolling (409); host and viewer get 403.
   { file: 'shoots/[id]/commands.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/commands`, body: () => ({ type: 'rolling.set', rolling: false }), expect: shoot(409, 403, 409, 403, 403, 409) },
   { file: 'join.post.ts', method: 'POST', path: () => '/api/join', body: () => ({ code: 'QQQ-QQQ' }), expect: all(404) },
+  // Any signed-in member may open a studio of their own (201); a device has no account to open it for.
+  {
+    file: 'studios/index.post.ts', method: 'POST', path: () => '/api/studios', body: () => ({ name: 'Matrix Kitchen', locale: 'en-GB', currency: 'GBP' }),
+    expect: { anon: 401, producer: 201, host: 201, camera: 201, viewer: 201, outsider: 201, hostDevice: 401, cameraDevice: 401 },
+  },
   { file: 'studios/[studioId]/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}`, expect: studio(200, 200, 200, 200) },
   { file: 'studios/[studioId]/index.patch.ts', method: 'PATCH', path: (i) => `/api/studios/${i.studio}`, body: () => ({ unitSystem: 'metric' }), expect: studio(200, 403, 403, 403) },
   { file: 'studios/[studioId]/recipes/index.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}/recipes`, expect: studio(200, 200, 200, 200) },

@@ -27,6 +27,7 @@ import { parsePriceCsv } from '../../shared/utils/price-csv'
 import { episodeCreateSchema, episodeUpdateSchema, priceBodySchema, recipeCreateSchema, recipeUpdateSchema, studioSettingsSchema } from '../../shared/utils/recipe-schemas'
 import { importSchemaOrgRecipe } from '../../shared/utils/schemaorg-import'
 import { shootCommandSchema } from '../../shared/utils/shoot-schema'
+import { newStudioBodySchema } from '../../shared/utils/studio-schemas'
 import { badIds, badImports, badPriceLists, badTokens, badUploads, jsonBodies, rawBodies } from '../support/campaign-payloads'
 import { rootDir, useBuiltApp } from '../support/app'
 import { appOrigin, type Client, demo, signedIn, uniqueEmail } from '../support/client'
@@ -84,6 +85,7 @@ const targets: Target[] = [
   { file: 'invites/[token]/accept.post.ts', method: 'POST', payloads: () => fc.tuple(badTokens, jsonBodies({ name: 'Campaign cook', password: 'a long campaign password' })).map(([t, b]) => ({ path: `/api/invites/${t}/accept`, body: { json: b } })) },
   json('join.post.ts', 'POST', () => '/api/join', () => ({ code: 'QQQ-QQQ' }), joinBodySchema),
   json('me/studio.put.ts', 'PUT', () => '/api/me/studio', (i) => ({ studioId: i.studio }), switchStudioBodySchema),
+  json('studios/index.post.ts', 'POST', () => '/api/studios', () => ({ name: 'Campaign Kitchen', locale: 'en-GB', currency: 'GBP' }), newStudioBodySchema),
   json('studios/[studioId]/index.patch.ts', 'PATCH', (i) => `/api/studios/${i.studio}`, () => ({ unitSystem: 'metric', currency: 'GBP' }), studioSettingsSchema),
   json('studios/[studioId]/invites/index.post.ts', 'POST', (i) => `/api/studios/${i.studio}/invites`, () => ({ email: uniqueEmail('campaign'), role: 'viewer' }), inviteBodySchema),
   path('studios/[studioId]/invites/[inviteId].delete.ts', 'DELETE', (b, i) => `/api/studios/${i.studio}/invites/${b}`),

@@ -1,9 +1,9 @@
-// The demo studio's photos: drawn for Hobline by scripts/make-demo-photos.ts (simple shapes in the
+// The demo studio's photos, one for each demo recipe: drawn for Hobline by scripts/make-demo-photos.ts (simple shapes in the
 // Hobline palette, no photograph of anyone's kitchen), each a JPEG with its WebP thumbnail beside it.
 // Outside the built server they are read from this folder; the server bundles them (plugin 03.photos).
 import { readFile } from 'node:fs/promises'
 
-export const DEMO_PHOTO_NAMES = ['plate', 'pan', 'loaf'] as const
+export const DEMO_PHOTO_NAMES = ['stew', 'flatbreads', 'squash'] as const
 export type DemoPhotoName = (typeof DEMO_PHOTO_NAMES)[number]
 
 export async function readDemoPhotoFile(name: DemoPhotoName): Promise<{ photo: Uint8Array; thumb: Uint8Array }> {

@@ -1,0 +1,25 @@
+// The body of "Open a studio" for a member who is already signed in (POST /api/studios): the studio's
+// name, and the locale and currency its money and dates are written in. Each message names the field
+// by the label the form gives it (pages/studios/new.vue: Studio name, Locale, Currency). Locales are BCP 47 language tags (as
+// Intl reads them); currencies ISO 4217 codes (isCurrencyCode, shared/utils/money.ts).
+import { z } from 'zod'
+import { isCurrencyCode } from './money'
+
+/** Whether a locale is a language tag Intl accepts as written, such as en-GB or de-DE. */
+export function isLocaleTag(tag: string): boolean {
+  if (!/^[a-z]{2,3}(-[A-Z][a-z]{3})?(-[A-Z]{2}|-\d{3})?$/.test(tag)) return false
+  try {
+    return Intl.getCanonicalLocales(tag)[0] === tag
+  } catch {
+    return false
+  }
+}
+
+export const newStudioBodySchema = z.object({
+  name: z.string({ error: 'Enter a studio name.' }).trim()
+    .min(1, 'Enter a studio name.').max(120, 'Use at most 120 characters for the studio name.'),
+  locale: z.string({ error: 'Enter the locale as a language tag such as en-GB.' }).trim()
+    .refine(isLocaleTag, 'Enter the locale as a language tag such as en-GB or de-DE: language, then region in capitals.'),
+  currency: z.string({ error: 'Enter the currency as a three-letter code such as GBP.' }).trim().toUpperCase()
+    .refine(isCurrencyCode, 'Enter the currency as an ISO 4217 code such as GBP, EUR or USD.'),
+})
