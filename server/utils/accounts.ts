@@ -57,8 +57,12 @@ export async function newPasswordHash(password: string, email: string): Promise<
 }
 
 /** A new studio with `userId` as its producer, in the caller's transaction: sign-up's and "Open a studio"'s. */
-export async function createStudioFor(userId: number, input: { name: string; locale?: string; currency?: string }, transaction: Transaction): Promise<Studio> {
-  const studio = await Studio.create({ name: input.name, slug: slugFor(input.name), locale: input.locale, currency: input.currency }, { transaction })
+export async function createStudioFor(
+  userId: number, input: { name: string; locale?: string; currency?: string; timeZone?: string }, transaction: Transaction,
+): Promise<Studio> {
+  const studio = await Studio.create({
+    name: input.name, slug: slugFor(input.name), locale: input.locale, currency: input.currency, timeZone: input.timeZone,
+  }, { transaction })
   await Membership.create({ userId, studioId: studio.id, role: 'producer' }, { transaction })
   return studio
 }
@@ -74,12 +78,12 @@ export async function signUp(input: { name: string; email: string; password: str
 }
 
 /** A signed-in member opens another studio and becomes its producer. */
-export async function openStudio(userId: number, input: { name: string; locale: string; currency: string }) {
+export async function openStudio(userId: number, input: { name: string; locale: string; currency: string; timeZone: string }) {
   const sequelize = await useDb()
   return sequelize.transaction(async (transaction) => {
     if (!(await User.findByPk(userId, { attributes: ['id'], transaction }))) throw new DomainError('signed-out', 'This account no longer exists. Sign in again.')
     const studio = await createStudioFor(userId, input, transaction)
-    return { id: studio.id, name: studio.name, locale: studio.locale, currency: studio.currency }
+    return { id: studio.id, name: studio.name, locale: studio.locale, currency: studio.currency, timeZone: studio.timeZone }
   })
 }
 

@@ -4,6 +4,7 @@
 // Intl reads them); currencies ISO 4217 codes (isCurrencyCode, shared/utils/money.ts).
 import { z } from 'zod'
 import { isCurrencyCode } from './money'
+import { isTimeZone } from './time-zone'
 
 /** Whether a locale is a language tag Intl accepts as written, such as en-GB or de-DE. */
 export function isLocaleTag(tag: string): boolean {
@@ -18,8 +19,10 @@ export function isLocaleTag(tag: string): boolean {
 export const newStudioBodySchema = z.object({
   name: z.string({ error: 'Enter a studio name.' }).trim()
     .min(1, 'Enter a studio name.').max(120, 'Use at most 120 characters for the studio name.'),
-  locale: z.string({ error: 'Enter the locale as a language tag such as en-GB.' }).trim()
-    .refine(isLocaleTag, 'Enter the locale as a language tag such as en-GB or de-DE: language, then region in capitals.'),
-  currency: z.string({ error: 'Enter the currency as a three-letter code such as GBP.' }).trim().toUpperCase()
-    .refine(isCurrencyCode, 'Enter the currency as an ISO 4217 code such as GBP, EUR or USD.'),
+  locale: z.string({ error: 'Choose the language and country from the list.' }).trim()
+    .refine(isLocaleTag, 'Choose the language and country from the list (written like en-GB or de-DE).'),
+  currency: z.string({ error: 'Choose the currency from the list.' }).trim().toUpperCase()
+    .refine(isCurrencyCode, 'Choose the currency from the list (a three-letter code such as GBP, EUR or USD).'),
+  timeZone: z.string({ error: 'Choose the time zone from the list.' }).refine(isTimeZone, 'Choose the time zone from the list, such as Europe/London.')
+    .optional().default('UTC'),
 })

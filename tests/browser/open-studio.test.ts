@@ -28,16 +28,17 @@ async function memberWithNoStudio(password: string): Promise<string> {
   return email
 }
 
-async function fillStudioForm(page: Page, name: string, locale: string, currency: string) {
+async function fillStudioForm(page: Page, name: string, locale: string, currency: string, timeZone?: string) {
   await page.getByLabel('Studio name').fill(name)
-  await page.getByLabel('Locale').fill(locale)
-  await page.getByLabel('Currency').fill(currency)
+  await page.getByLabel('Language and country').selectOption(locale)
+  await page.getByLabel('Currency').selectOption(currency)
+  if (timeZone) await page.getByLabel('Time zone').selectOption(timeZone)
 }
 
 describe.skipIf(!chromiumAvailable())('opening a studio when signed in', async () => {
   await useBuiltApp({ browser: true })
 
-  it('from "No studio yet": the form, a refused currency on its field, then the new studio', async () => {
+  it('from "No studio yet": the form, a refused name on its field, then the new studio', async () => {
     const password = 'a kitchen of my own'
     const email = await memberWithNoStudio(password)
     const page = await createPage(undefined, { viewport: { width: 1280, height: 800 } })
@@ -47,26 +48,28 @@ describe.skipIf(!chromiumAvailable())('opening a studio when signed in', async (
     await page.waitForURL(/\/studios\/new$/)
     // The sign-up form is not where a signed-in member is sent.
     await expect(page.getByLabel('Password').count()).resolves.toBe(0)
-    await expect(page.getByLabel('Locale').inputValue()).resolves.toBe('en-GB')
+    await expect(page.getByLabel('Language and country').inputValue()).resolves.toBe('en-GB')
     await expect(page.getByLabel('Currency').inputValue()).resolves.toBe('GBP')
+    // Named in words, not codes.
+    await expect(page.getByLabel('Currency').locator('option[value="EUR"]').textContent()).resolves.toBe('Euro (EUR)')
 
-    await fillStudioForm(page, 'Achterberg Night Kitchen', 'nl-NL', 'guilders')
+    await fillStudioForm(page, '   ', 'nl-NL', 'EUR', 'Europe/Amsterdam')
     await page.getByRole('button', { name: 'Open the studio' }).click()
-    const currency = page.getByLabel('Currency')
-    await expect.poll(() => currency.getAttribute('aria-invalid')).toBe('true')
-    await page.getByText(/currency as an ISO 4217 code such as GBP/).waitFor()
-    await expect(page.getByLabel('Studio name').inputValue()).resolves.toBe('Achterberg Night Kitchen')
+    const name = page.getByLabel('Studio name')
+    await expect.poll(() => name.getAttribute('aria-invalid')).toBe('true')
+    await page.getByText(/studio name/i).first().waitFor()
+    await expect(page.getByLabel('Currency').inputValue()).resolves.toBe('EUR')
     expect(await axeViolations(page)).toEqual([])
     await screenshot(page, 'open-studio-refused')
 
-    await currency.fill('EUR')
+    await name.fill('Achterberg Night Kitchen')
     await page.getByRole('button', { name: 'Open the studio' }).click()
     await page.waitForURL(/\/studios\/\d+$/)
     await page.getByRole('heading', { name: 'Achterberg Night Kitchen' }).waitFor()
     await expect(page.getByText('Producer', { exact: true }).count()).resolves.toBeGreaterThan(0)
     await expect(page.locator('header').innerText()).resolves.toContain('Achterberg Night Kitchen')
     const settings = await page.request.get(url(`/api/studios/${page.url().split('/').pop()}`))
-    expect(await settings.json()).toMatchObject({ name: 'Achterberg Night Kitchen', locale: 'nl-NL', currency: 'EUR' })
+    expect(await settings.json()).toMatchObject({ name: 'Achterberg Night Kitchen', locale: 'nl-NL', currency: 'EUR', timeZone: 'Europe/Amsterdam' })
     await screenshot(page, 'open-studio-done')
     await page.close()
   })
@@ -76,7 +79,7 @@ describe.skipIf(!chromiumAvailable())('opening a studio when signed in', async (
     await signInOnPage(page, demo.host)
     await page.getByRole('link', { name: 'Open another studio' }).click()
     await page.waitForURL(/\/studios\/new$/)
-    await fillStudioForm(page, 'Quill Weekend Bakes', 'en-GB', 'gbp')
+    await fillStudioForm(page, 'Quill Weekend Bakes', 'en-GB', 'GBP')
     await page.getByRole('button', { name: 'Open the studio' }).click()
     await page.waitForURL(/\/studios\/\d+$/)
     await page.getByRole('heading', { name: 'Quill Weekend Bakes' }).waitFor()

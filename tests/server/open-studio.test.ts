@@ -52,10 +52,11 @@ describe('opening another studio', async () => {
     [{ name: '   ', locale: 'en-GB', currency: 'GBP' }, 'name', /studio name/i],
     [{ locale: 'en-GB', currency: 'GBP' }, 'name', /studio name/i],
     [{ name: 'x'.repeat(121), locale: 'en-GB', currency: 'GBP' }, 'name', /120 characters for the studio name/],
-    [{ name: 'Bad Locale Kitchen', locale: 'english', currency: 'GBP' }, 'locale', /locale as a language tag such as en-GB/],
+    [{ name: 'Bad Locale Kitchen', locale: 'english', currency: 'GBP' }, 'locale', /language and country from the list/],
     [{ name: 'Bad Locale Kitchen', locale: 'en-gb', currency: 'GBP' }, 'locale', /locale/i],
-    [{ name: 'Bad Money Kitchen', locale: 'en-GB', currency: 'QQQ' }, 'currency', /currency as an ISO 4217 code/],
+    [{ name: 'Bad Money Kitchen', locale: 'en-GB', currency: 'QQQ' }, 'currency', /currency from the list/],
     [{ name: 'Bad Money Kitchen', locale: 'en-GB' }, 'currency', /currency/i],
+    [{ name: 'Bad Clock Kitchen', locale: 'en-GB', currency: 'GBP', timeZone: 'Mars/Olympus_Mons' }, 'timeZone', /time zone from the list/],
   ])('refuses %j (400) naming %s by its label', async (body, field, message) => {
     const producer = await signedIn(demo.producer)
     const before = (await producer.get('/api/me')).body.memberships.length
