@@ -159,7 +159,7 @@ export async function readRecipeImport(studioId: number, text: string) {
   const settings = await studioSettings(studioId)
   const { imported, body, invalid } = await readImportOffLoop(text, { cups: settings.cupUnit === 'metric-cup' ? 'metric' : 'us', fluid: settings.fluidMeasure })
   if (invalid) {
-    throw new DomainError('invalid', `The recipe was read, but ${invalid.field}: ${invalid.message}`, { data: { field: invalid.field, draft: imported.recipe, problems: imported.problems } })
+    throw new DomainError('invalid', `The recipe was read, but one part cannot be saved as it is. ${invalid.message}`, { data: { field: invalid.field, draft: imported.recipe, problems: imported.problems } })
   }
   return { draft: imported.recipe, body: body!, problems: imported.problems, images: imported.images }
 }
