@@ -71,7 +71,7 @@ function certainty(ing: RecipeCreateBody['ingredients'][number], existing: Recip
   if (state !== 'checked') return { allergenState: state, allergensCheckedBy: null, allergensCheckedAt: null }
   const same = existing && existing.allergenState === 'checked' && JSON.stringify(existing.allergens) === JSON.stringify(ing.allergens)
   if (same) return { allergenState: state, allergensCheckedBy: existing.allergensCheckedBy ?? null, allergensCheckedAt: existing.allergensCheckedAt ?? null }
-  if (!checker) throw new DomainError('invalid', `ingredients: only a signed-in person can mark "${ing.item}" as checked.`, { field: 'ingredients.allergenState' })
+  if (!checker) throw new DomainError('invalid', `Allergens checked: only a signed-in person can mark the allergens of "${ing.item}" as checked.`, { field: 'ingredients.allergenState' })
   return { allergenState: state, allergensCheckedBy: checker.name, allergensCheckedAt: new Date() }
 }
 
