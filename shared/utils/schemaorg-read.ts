@@ -104,7 +104,7 @@ export function extractJsonLdFromHtml(html: string): { blocks: unknown[]; proble
     try {
       blocks.push(JSON.parse(unwrapScriptText(text)))
     } catch (e) {
-      problems.push({ field: `script[${n}]`, reason: `the JSON-LD block is not valid JSON (${(e as Error).message})` })
+      problems.push({ field: `script[${n}]`, reason: `JSON-LD block ${n} is not valid JSON${jsonWhere(e)}` })
     }
   }
   readHtml(html, {
