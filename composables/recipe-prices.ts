@@ -28,14 +28,14 @@ export function priceDraftFrom(p: PriceRow): PriceFormDraft {
 /** The body for POST or PATCH, or the field to fix and what to write there. */
 export function priceBodyFrom(d: PriceFormDraft): { body?: Record<string, unknown>; field?: string; message?: string } {
   const currency = d.currency.trim().toUpperCase()
-  if (!isCurrencyCode(currency)) return { field: 'currency', message: 'currency: write a three-letter ISO 4217 code such as GBP, EUR or USD.' }
+  if (!isCurrencyCode(currency)) return { field: 'currency', message: 'Currency: write a three-letter ISO 4217 code such as GBP, EUR or USD.' }
   const size = Number(d.packageSize.trim().replace(',', '.'))
-  if (!d.packageSize.trim() || !Number.isFinite(size) || size <= 0) return { field: 'packageSize', message: 'packageSize: write the package size as a number above zero, such as 500.' }
+  if (!d.packageSize.trim() || !Number.isFinite(size) || size <= 0) return { field: 'packageSize', message: 'Package size: write the package size as a number above zero, such as 500.' }
   let priceMinor: number
   try {
     priceMinor = parseMoneyToMinor(d.price, currency)
   } catch (e) {
-    return { field: 'priceMinor', message: `price: ${(e as Error).message}.` }
+    return { field: 'priceMinor', message: `Price: ${(e as Error).message}.` }
   }
   return {
     body: {
