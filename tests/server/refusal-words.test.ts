@@ -174,6 +174,8 @@ describe('refusals in a crew\'s words', async () => {
   it('every message passes the wording check; the keys stay in `field`', async () => {
     console.log(`\n${heard.length} refusal messages heard (${new Set(heard.map((h) => h.message)).size} distinct)`
       + `${pending.length ? `; ${pending.length} from the live-shoot reducer still to be reworded, e.g. "${pending[0]!.message}"` : ''}\n`)
+    // HOBLINE_WORDS_PRINT=1 lists every distinct message, to read them as a person would.
+    if (process.env.HOBLINE_WORDS_PRINT) console.log([...new Set(heard.map((h) => h.message))].sort().join('\n'))
     expect(heard.length).toBeGreaterThan(RUNS * targets.length)
     const wrong = [...new Map(heard.map((h) => [h.message, h])).values()]
       .map((h) => ({ ...h, problem: wordsProblem(h.message) }))
