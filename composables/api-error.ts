@@ -4,8 +4,8 @@ export function apiErrorMessage(error: unknown, fallback = 'Something went wrong
   return e?.data?.statusMessage || e?.statusMessage || e?.data?.message || fallback
 }
 
-/** The field a 400 named ("email: …" or data.field), so a form can mark it. */
+/** The field a refusal named (`data.field`, the request's key such as "email" or "steps.2.text"), so a form can mark it. */
 export function apiErrorField(error: unknown): string | null {
-  const e = error as { data?: { data?: { field?: string }; statusMessage?: string } } | null
-  return e?.data?.data?.field ?? e?.data?.statusMessage?.match(/^([\w.]+):/)?.[1] ?? null
+  const e = error as { data?: { data?: { field?: string } } } | null
+  return e?.data?.data?.field ?? null
 }

@@ -2,6 +2,7 @@
 // while editing), and the conversions between it, a loaded recipe and the request body.
 import type { CautionId } from '~~/shared/utils/cautions'
 import { allergenCertaintyText, allergenStateOf, type AllergenState, type EuAllergenId, type UsAllergenId } from '../shared/utils/allergens'
+import { fieldLabel } from '../shared/utils/field-labels'
 import type { RecipeStation, StatedMeasure, StepReadField } from '~~/shared/types/recipe'
 import type { UnitId } from '~~/shared/utils/units'
 import type { FluidMeasure } from '~~/shared/utils/fluid-measure'
@@ -233,11 +234,11 @@ export function dropBlankRows(form: RecipeForm): void {
 export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>; problems: FormProblem[] } {
   const problems: FormProblem[] = []
   const num = (field: string, value: number | null, what: string) => {
-    if (Number.isNaN(value)) problems.push({ field, message: `${field}: ${what}` })
+    if (Number.isNaN(value)) problems.push({ field, message: `${fieldLabel(field)}: ${what}` })
     return Number.isNaN(value) ? null : value
   }
   const servings = Number(form.servings.trim().replace(',', '.'))
-  if (!form.servings.trim() || !Number.isFinite(servings)) problems.push({ field: 'servings', message: 'servings: write the number of servings, such as 4.' })
+  if (!form.servings.trim() || !Number.isFinite(servings)) problems.push({ field: 'servings', message: 'Servings: write the number of servings, such as 4.' })
   const minutes = (field: string, text: string) => num(field, readMinutesInput(text), 'write minutes as a number, such as 15 or 2.5.')
   const ingredients = form.ingredients.map((r, i) => {
     const amountWhat = 'write the amount as 2, 1.5, 1/2 or 1½ (or leave it empty).'
@@ -274,15 +275,3 @@ export function bodyFromForm(form: RecipeForm): { body: Record<string, unknown>;
   }
   return { body, problems }
 }
-
-/** Request field names that read differently on the form. */
-const FIELD_LABELS: Record<string, string> = { name: 'short name' }
-
-/** "steps.2.text" → "Step 3, text" for a person ("steps.2.name" → "Step 3, short name"); other fields as they are. */
-export function fieldLabel(field: string): string {
-  const m = /^(ingredients|steps)\.(\d+)\.?(.*)$/.exec(field)
-  if (!m) return field
-  const part = m[1] === 'steps' ? FIELD_LABELS[m[3]!] ?? m[3] : m[3]
-  return `${m[1] === 'steps' ? 'Step' : 'Ingredient'} ${Number(m[2]) + 1}${part ? `, ${part}` : ''}`
-}
-

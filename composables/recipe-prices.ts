@@ -30,12 +30,12 @@ export function priceBodyFrom(d: PriceFormDraft): { body?: Record<string, unknow
   const currency = d.currency.trim().toUpperCase()
   if (!isCurrencyCode(currency)) return { field: 'currency', message: 'Currency: write the three-letter code of the currency, such as GBP, EUR or USD.' }
   const size = Number(d.packageSize.trim().replace(',', '.'))
-  if (!d.packageSize.trim() || !Number.isFinite(size) || size <= 0) return { field: 'packageSize', message: 'packageSize: write the package size as a number above zero, such as 500.' }
+  if (!d.packageSize.trim() || !Number.isFinite(size) || size <= 0) return { field: 'packageSize', message: 'Package size: write the package size as a number above zero, such as 500.' }
   let priceMinor: number
   try {
     priceMinor = parseMoneyToMinor(d.price, currency)
   } catch (e) {
-    return { field: 'priceMinor', message: `price: ${(e as Error).message}.` }
+    return { field: 'priceMinor', message: `Price: ${(e as Error).message}.` }
   }
   return {
     body: {

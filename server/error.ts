@@ -7,14 +7,18 @@
 import { DomainError, isDomainError } from '../shared/utils/domain-error'
 import { sendDomainError } from './utils/errors'
 
-const TOO_LARGE = 'The request body is over 2 MB, the most any request may carry; send less (a recipe import can be up to 512 KB, a photo 8 MB).'
+/** What a request of each method asks, in words. */
+const VERBS: Record<string, string> = { GET: 'read', HEAD: 'read', POST: 'send to', PUT: 'change', PATCH: 'change', DELETE: 'delete' }
+
+const TOO_LARGE = 'The request is over 2 MB, the most any request may carry; send less (a recipe import can be up to 512 KB, a photo 8 MB).'
 
 export default defineNitroErrorHandler(async (error, event) => {
   const domain = [error, error.cause].find(isDomainError)
   if (domain) await sendDomainError(event, domain)
   else if (error.statusCode === 413) await sendDomainError(event, new DomainError('too-large', TOO_LARGE))
   else if (error.statusCode === 404 && event.path.startsWith('/api/')) {
-    const path = event.path.split('?')[0]!.slice(0, 200)
-    await sendDomainError(event, new DomainError('not-found', `No Hobline address ${path} answers ${event.method}; check the link, or the id in it.`))
+    // The address is not echoed: the words are Hobline's own, whatever was sent.
+    const verb = VERBS[event.method] ?? 'use'
+    await sendDomainError(event, new DomainError('not-found', `There is nothing at this address to ${verb}; check the link, or the number in it.`))
   }
 })

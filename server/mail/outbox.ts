@@ -4,10 +4,10 @@ import { Mail } from '../db/models'
 
 export const OUTBOX_PAGE_MAX = 100
 
-// The message follows the field's name (server/utils/validate.ts puts "limit: " in front).
+// The message follows the field's label (server/utils/validate.ts puts "How many to show: " in front).
 const wholeNumber = (min: number, max?: number) => {
   const range = max === undefined ? `${min} or more` : `from ${min} to ${max}`
-  const message = `must be a whole number ${range}.`
+  const message = `write a whole number ${range}.`
   const base = z.coerce.number({ error: message }).int(message).min(min, message)
   return max === undefined ? base : base.max(max, message)
 }

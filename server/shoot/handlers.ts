@@ -53,7 +53,7 @@ export function actorFor(caller: ShootCaller): ShootActor {
 export function shootIdOf(payload: unknown): number {
   // A number, not text or true that happens to convert to one.
   const id = (payload as { shootId?: unknown } | null)?.shootId
-  if (typeof id !== 'number' || !Number.isSafeInteger(id) || id <= 0) throw new DomainError('invalid', 'shootId: send the number of the shoot.', { field: 'shootId' })
+  if (typeof id !== 'number' || !Number.isSafeInteger(id) || id <= 0) throw new DomainError('invalid', 'This screen did not say which shoot it is on; reload the page, or open the shoot again from its episode.', { field: 'shootId' })
   return id
 }
 
@@ -131,7 +131,7 @@ export function createShootHandlers(deps: ShootHandlerDeps) {
       const shootId = shootIdOf(payload)
       const audible = (payload as { audibleWhileRolling?: unknown }).audibleWhileRolling
       if (typeof audible !== 'boolean') {
-        throw new DomainError('invalid', 'audibleWhileRolling: send true or false.', { field: 'audibleWhileRolling' })
+        throw new DomainError('invalid', 'While the camera rolls: choose whether this screen’s alarms ring (true) or stay silent (false).', { field: 'audibleWhileRolling' })
       }
       if (!presence.has(shootId, conn.id)) throw new DomainError('conflict', 'Open the shoot on this screen first.')
       await authorize(conn.session, shootId)

@@ -22,7 +22,7 @@ export function publicUser(user: User) {
 
 export function assertPasswordAllowed(password: string, email: string) {
   const problem = passwordProblem(password, email)
-  if (problem) throw new DomainError('invalid', `password: ${problem}`, { field: 'password' })
+  if (problem) throw new DomainError('invalid', `Password: ${problem.charAt(0).toLowerCase()}${problem.slice(1)}`, { field: 'password' })
 }
 
 export async function membershipsOf(userId: number): Promise<MembershipView[]> {
@@ -45,7 +45,7 @@ export function slugFor(name: string): string {
  */
 export async function createUser(input: { name: string; email: string; passwordHash: string }, transaction: Transaction): Promise<User> {
   if (await User.findOne({ where: { email: input.email }, transaction })) {
-    throw new DomainError('conflict', 'email: An account with this e-mail address already exists. Sign in instead, or reset the password.', { field: 'email' })
+    throw new DomainError('conflict', 'E-mail address: an account with this address already exists. Sign in instead, or reset the password.', { field: 'email' })
   }
   return User.create({ name: input.name, email: input.email, passwordHash: input.passwordHash }, { transaction })
 }

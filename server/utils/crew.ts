@@ -92,7 +92,7 @@ export async function inviteToStudio(site: string, studioId: number, inviter: { 
   await useDb()
   const existing = await User.findOne({ where: { email }, attributes: ['id'] })
   if (existing && (await Membership.findOne({ where: { studioId, userId: existing.id } }))) {
-    throw new DomainError('conflict', 'email: This person is already in the studio. Change their role in the crew list instead.', { field: 'email' })
+    throw new DomainError('conflict', 'E-mail to invite: this person is already in the studio. Change their role in the crew list instead.', { field: 'email' })
   }
   // Inviting the same address again renews the pending invite instead of making a second one.
   let invite = await Invite.findOne({ where: { studioId, email, acceptedAt: null, revokedAt: null } })
@@ -104,7 +104,7 @@ export async function inviteToStudio(site: string, studioId: number, inviter: { 
 async function pendingInvite(studioId: number, inviteId: number) {
   await useDb()
   const invite = await Invite.findOne({ where: { id: inviteId, studioId, acceptedAt: null, revokedAt: null } })
-  if (!invite) throw new DomainError('not-found', 'There is no pending invite with this id in the studio.')
+  if (!invite) throw new DomainError('not-found', 'There is no such invite waiting in this studio; it may have been accepted or withdrawn already.')
   return invite
 }
 
@@ -144,14 +144,14 @@ export async function acceptInvite(token: string, input: { name?: string; passwo
   const sequelize = await useDb()
   const invite = await openInvite(token)
   // Asked of everyone, account or not, so the answer does not tell which.
-  if (!input.name) throw new DomainError('invalid', 'name: Enter your name (an existing account keeps the name it has).', { field: 'name' })
+  if (!input.name) throw new DomainError('invalid', 'Your name: write your name (an existing account keeps the name it has).', { field: 'name' })
   // The password is checked or hashed before the transaction: a scrypt run takes about half a
   // second, and a transaction holds the one write queue every live shoot shares.
   const existing = await User.findOne({ where: { email: invite.email } })
   let passwordHash = ''
   if (existing) {
     if (!(await verifyPassword(existing.passwordHash, input.password))) {
-      throw new DomainError('signed-out', `password: This password was not accepted for ${invite.email}. If the address already has a Hobline account, enter that account's password, or reset it from the sign-in page.`, { field: 'password' })
+      throw new DomainError('signed-out', `Password: this password was not accepted for ${invite.email}. If the address already has a Hobline account, enter that account's password, or reset it from the sign-in page.`, { field: 'password' })
     }
     await rehashIfOld(existing, input.password)
   } else {

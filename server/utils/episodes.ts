@@ -65,9 +65,9 @@ export async function requireEpisode(event: H3Event, action: StudioAction, param
 
 async function assertRecipesInStudio(studioId: number, recipeIds: number[]) {
   const unique = [...new Set(recipeIds)]
-  if (unique.length !== recipeIds.length) throw new DomainError('invalid', 'recipeIds: a recipe appears twice; put each recipe in the episode once.', { field: 'recipeIds' })
+  if (unique.length !== recipeIds.length) throw new DomainError('invalid', 'Recipes in run order: a recipe appears twice; put each recipe in the episode once.', { field: 'recipeIds' })
   if (unique.length && (await Recipe.count({ where: { id: unique, studioId } })) !== unique.length) {
-    throw new DomainError('invalid', 'recipeIds: one of the recipes is not in this studio.', { field: 'recipeIds' })
+    throw new DomainError('invalid', 'Recipes in run order: one of the recipes is not in this studio; choose from the studio\'s recipes.', { field: 'recipeIds' })
   }
 }
 

@@ -45,7 +45,7 @@ function next() {
   timer = setTimeout(() => {
     const w = worker
     worker = null
-    fail(new DomainError('invalid', `body: the page took longer than ${IMPORT_READ_LIMIT_MS / 1000} s to read. Paste only the recipe's JSON-LD.`, { field: 'body' }))
+    fail(new DomainError('invalid', `The page took longer than ${IMPORT_READ_LIMIT_MS / 1000} s to read. Paste only the recipe's JSON-LD.`, { field: 'body' }))
     void w?.terminate()
   }, IMPORT_READ_LIMIT_MS)
   timer.unref()
@@ -64,7 +64,7 @@ function finish(reply: Reply) {
   if (busy?.id !== reply.id) return
   const task = settle()!
   if (reply.result) task.resolve(reply.result)
-  else if (reply.refused !== undefined) task.reject(new DomainError('invalid', `body: ${reply.refused}`, { field: 'body' }))
+  else if (reply.refused !== undefined) task.reject(new DomainError('invalid', reply.refused, { field: 'body' }))
   else task.reject(new Error(`The import reader failed: ${reply.failed}`))
   next()
 }

@@ -62,7 +62,7 @@ function tooBig(size?: number) {
 }
 
 function notAPhoto(detail: string) {
-  return new DomainError('unsupported-type', `photo: ${detail} Upload a ${ACCEPTED} image.`, {
+  return new DomainError('unsupported-type', `Photo: ${detail} Upload a ${ACCEPTED} image.`, {
     field: 'photo', data: { accepted: Object.values(TYPES).map((t) => t.mime) },
   })
 }
@@ -71,17 +71,17 @@ function notAPhoto(detail: string) {
 export async function readPhotoUpload(event: H3Event, field = 'photo'): Promise<Buffer> {
   const type = getRequestHeader(event, 'content-type') ?? ''
   if (!type.toLowerCase().startsWith('multipart/form-data')) {
-    throw new DomainError('invalid', `${field}: send the photo as a form upload (multipart/form-data) in a field named "${field}".`, { field: field })
+    throw new DomainError('invalid', `Photo: send it as a form upload (multipart/form-data) in a field named "${field}".`, { field: field })
   }
   const length = Number(getRequestHeader(event, 'content-length'))
   if (!Number.isFinite(length) || length <= 0) {
-    throw new DomainError('length-required', `${field}: the upload must state its size (Content-Length); send it from a form or with a Content-Length header.`, { field: field })
+    throw new DomainError('length-required', `Photo: the upload must state its size (Content-Length); send it from a form or with a Content-Length header.`, { field: field })
   }
   if (length > PHOTO_MAX_BYTES + MULTIPART_SLACK) throw tooBig(length)
   const parts = (await readMultipartFormData(event)) ?? []
   const part = parts.find((p) => p.name === field)
   if (!part || part.data.length === 0) {
-    throw new DomainError('invalid', `${field}: attach the photo in a form field named "${field}".`, { field: field })
+    throw new DomainError('invalid', `Photo: attach it in a form field named "${field}".`, { field: field })
   }
   if (part.data.length > PHOTO_MAX_BYTES) throw tooBig(part.data.length)
   return part.data
@@ -247,11 +247,11 @@ export function parsePhotoKey(raw: string | undefined): { key: string; studioId:
   try {
     key = decodeURIComponent(key)
   } catch {
-    throw new DomainError('invalid', 'photo address: it has a broken %-escape; use the address the recipe gives.')
+    throw new DomainError('invalid', 'This photo address has a broken %-escape; use the address the recipe gives.')
   }
   const segments = key.split('/')
   if (key.startsWith('/') || /^[A-Za-z]:/.test(key) || /[\\\0]/.test(key) || segments.some((s) => s === '..' || s === '.' || s === '')) {
-    throw new DomainError('invalid', 'photo address: it must stay inside the photo store (no "..", "." or empty parts, no absolute paths); use the address the recipe gives.')
+    throw new DomainError('invalid', 'This photo address leaves the photo store (no "..", "." or empty parts, no absolute paths); use the address the recipe gives.')
   }
   const m = KEY.exec(key)
   if (!m) throw new DomainError('not-found', 'There is no such photo.')

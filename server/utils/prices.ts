@@ -6,6 +6,7 @@ import type { StudioPrice } from '../../shared/utils/cost'
 import type { UnitId } from '../../shared/utils/units'
 import type { priceBodySchema } from '../../shared/utils/recipe-schemas'
 import { DomainError } from '../../shared/utils/domain-error'
+import { fieldLabel } from '../../shared/utils/field-labels'
 
 type PriceBody = z.output<typeof priceBodySchema>
 
@@ -52,9 +53,11 @@ export async function deletePrice(studioId: number, priceId: number) {
 export async function assertPricesInStudio(studioId: number, ingredients: { priceId?: number | null }[]) {
   const ids = [...new Set(ingredients.map((i) => i.priceId).filter((x): x is number => !!x))]
   if (!ids.length) return
-  const found = await Price.count({ where: { id: ids, studioId } })
-  if (found !== ids.length) {
-    throw new DomainError('invalid', 'ingredients.priceId: an ingredient links to a price that is not in this studio\'s price list.', { field: 'ingredients.priceId' })
+  const found = new Set((await Price.findAll({ where: { id: ids, studioId }, attributes: ['id'] })).map((p) => p.id))
+  const at = ingredients.findIndex((i) => !!i.priceId && !found.has(i.priceId))
+  if (at >= 0) {
+    const field = `ingredients.${at}.priceId`
+    throw new DomainError('invalid', `${fieldLabel(field)}: choose a price from this studio's price list; the one linked is not in it.`, { field })
   }
 }
 
@@ -86,12 +89,12 @@ export async function readUploadText(event: H3Event, field: string, maxBytes: nu
   if (type.startsWith('multipart/form-data')) {
     const parts = (await readMultipartFormData(event)) ?? []
     const part = parts.find((p) => p.name === field)
-    if (!part) throw new DomainError('invalid', `${field}: attach the file in a form field named "${field}".`, { field: field })
+    if (!part) throw new DomainError('invalid', `Attach the file in a form field named "${field}", or send the text itself.`, { field: field })
     if (part.data.length > maxBytes) throw tooBig()
     return part.data.toString('utf8')
   }
   const raw = await readRawBody(event, 'utf8')
-  if (!raw || !raw.trim()) throw new DomainError('invalid', 'body: the upload is empty; paste or attach the file.', { field: 'body' })
+  if (!raw || !raw.trim()) throw new DomainError('invalid', 'The upload is empty; paste or attach the file.', { field: 'body' })
   if (Buffer.byteLength(raw) > maxBytes) throw tooBig()
   return raw
 }

@@ -71,7 +71,7 @@ function certainty(ing: RecipeCreateBody['ingredients'][number], existing: Recip
   if (state !== 'checked') return { allergenState: state, allergensCheckedBy: null, allergensCheckedAt: null }
   const same = existing && existing.allergenState === 'checked' && JSON.stringify(existing.allergens) === JSON.stringify(ing.allergens)
   if (same) return { allergenState: state, allergensCheckedBy: existing.allergensCheckedBy ?? null, allergensCheckedAt: existing.allergensCheckedAt ?? null }
-  if (!checker) throw new DomainError('invalid', `ingredients: only a signed-in person can mark "${ing.item}" as checked.`, { field: 'ingredients.allergenState' })
+  if (!checker) throw new DomainError('invalid', `Allergens checked: only a signed-in person can mark the allergens of "${ing.item}" as checked.`, { field: 'ingredients.allergenState' })
   return { allergenState: state, allergensCheckedBy: checker.name, allergensCheckedAt: new Date() }
 }
 
@@ -159,7 +159,7 @@ export async function readRecipeImport(studioId: number, text: string) {
   const settings = await studioSettings(studioId)
   const { imported, body, invalid } = await readImportOffLoop(text, { cups: settings.cupUnit === 'metric-cup' ? 'metric' : 'us', fluid: settings.fluidMeasure })
   if (invalid) {
-    throw new DomainError('invalid', `The recipe was read, but ${invalid.field}: ${invalid.message}`, { data: { field: invalid.field, draft: imported.recipe, problems: imported.problems } })
+    throw new DomainError('invalid', `The recipe was read, but one part cannot be saved as it is. ${invalid.message}`, { data: { field: invalid.field, draft: imported.recipe, problems: imported.problems } })
   }
   return { draft: imported.recipe, body: body!, problems: imported.problems, images: imported.images }
 }

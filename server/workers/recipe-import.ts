@@ -6,16 +6,16 @@ import { importSchemaOrgRecipe } from '../../shared/utils/schemaorg-import'
 import { RecipeImportError } from '../../shared/utils/schemaorg-read'
 import type { QuantityParseOptions } from '../../shared/utils/quantity'
 import { recipeCreateSchema } from '../../shared/utils/recipe-schemas'
+import { checkInput } from '../../shared/utils/input-words'
 
 export interface ImportTask { id: number; text: string; options: QuantityParseOptions }
 
 /** The import, and the recipe it gives checked as a new recipe would be (the first problem, if any). */
 function readImport(text: string, options: QuantityParseOptions) {
   const imported = importSchemaOrgRecipe(text, options)
-  const parsed = recipeCreateSchema.safeParse(imported.recipe)
-  if (parsed.success) return { imported, body: parsed.data }
-  const issue = parsed.error.issues[0]!
-  return { imported, invalid: { field: issue.path.join('.'), message: issue.message } }
+  const checked = checkInput(recipeCreateSchema, imported.recipe)
+  if (checked.ok) return { imported, body: checked.data }
+  return { imported, invalid: { field: checked.field, message: checked.message } }
 }
 export type ImportRead = ReturnType<typeof readImport>
 

@@ -1,25 +1,27 @@
 // Request bodies for accounts, crew and join codes; the server validates with these, and the forms
-// can check the same rules before sending.
+// can check the same rules before sending. Messages are instructions: the refusal puts the form's
+// label in front ("E-mail address: write an e-mail address such as name@example.com.").
 import { z } from 'zod'
 import { DEVICE_ROLES, STUDIO_ROLES } from './roles'
 import { PASSWORD_MAX } from './password-policy'
+import { typed } from './input-words'
 
 const email = z
-  .string({ error: 'Enter an e-mail address.' })
+  .string({ error: typed('write an e-mail address such as name@example.com.') })
   .trim()
   .toLowerCase()
-  .max(254, 'An e-mail address has at most 254 characters.')
-  .pipe(z.email({ error: 'Enter an e-mail address like name@example.com.' }))
+  .max(254, 'write at most 254 characters: an e-mail address is no longer.')
+  .pipe(z.email({ error: 'write an e-mail address such as name@example.com.' }))
 
-const name = z.string({ error: 'Enter a name.' }).trim().min(1, 'Enter a name.').max(80, 'Use at most 80 characters for the name.')
-const password = z.string({ error: 'Enter a password.' }).min(1, 'Enter a password.').max(PASSWORD_MAX, `Use at most ${PASSWORD_MAX} characters for the password.`)
-const studioRole = z.enum(STUDIO_ROLES, { error: `Choose a role: ${STUDIO_ROLES.join(', ')}.` })
+const name = z.string({ error: typed('write your name as text.') }).trim().min(1, 'write your name.').max(80, 'write at most 80 characters.')
+const password = z.string({ error: typed('write the password as text.') }).min(1, 'write a password.').max(PASSWORD_MAX, `write at most ${PASSWORD_MAX} characters.`)
+const studioRole = z.enum(STUDIO_ROLES, { error: `choose one of: ${STUDIO_ROLES.join(', ')}.` })
 
 export const signupBodySchema = z.object({
   name,
   email,
   password,
-  studioName: z.string({ error: 'Enter a studio name.' }).trim().min(1, 'Enter a studio name.').max(120, 'Use at most 120 characters for the studio name.'),
+  studioName: z.string({ error: typed('write the studio name as text.') }).trim().min(1, 'write a name for the studio.').max(120, 'write at most 120 characters.'),
 })
 
 export const loginBodySchema = z.object({ email, password })
@@ -36,13 +38,20 @@ export const acceptInviteBodySchema = z.object({
 export const resetRequestBodySchema = z.object({ email })
 export const resetBodySchema = z.object({ password })
 
+const MINUTES = 'write a whole number of minutes from 1 to 240, such as 60.'
+
+/** The desk words a join code's role as "Device for". */
+export const JOIN_CODE_LABELS = { role: 'Device for' }
+
 export const joinCodeBodySchema = z.object({
-  role: z.enum(DEVICE_ROLES, { error: `A join code is for one role: ${DEVICE_ROLES.join(' or ')}.` }),
-  minutes: z.number({ error: 'minutes must be a number.' }).int('minutes must be a whole number.').min(1, 'A join code lasts at least 1 minute.').max(240, 'A join code lasts at most 240 minutes.').optional(),
+  role: z.enum(DEVICE_ROLES, { error: `choose ${DEVICE_ROLES.join(' or ')}: a join code is for one kind of device.` }),
+  minutes: z.number({ error: MINUTES }).int(MINUTES).min(1, MINUTES).max(240, MINUTES).optional(),
 })
 
 export const joinBodySchema = z.object({
-  code: z.string({ error: 'Enter the join code shown on the control desk.' }).trim().min(1, 'Enter the join code shown on the control desk.').max(32, 'A join code has 6 letters and digits.'),
+  code: z.string({ error: typed('write the join code shown on the control desk.') }).trim().min(1, 'write the join code shown on the control desk.')
+    .max(32, 'write the 6 letters and digits of the code shown on the control desk.'),
 })
 
-export const switchStudioBodySchema = z.object({ studioId: z.number({ error: 'studioId must be a number.' }).int().positive() })
+const STUDIO = 'choose one of your studios from the list (a whole number such as 12).'
+export const switchStudioBodySchema = z.object({ studioId: z.number({ error: typed(STUDIO) }).int(STUDIO).positive(STUDIO) })

@@ -4,6 +4,7 @@
 // the pair's offset exact; such ties are the only cycles the network may hold, so its strongly
 // connected components are the groups of steps that have to be placed together.
 import { planCheckAcyclic, planCsr, planRecipeOrder, planStronglyConnected, planTopoRanks, type PlanEdge } from './plan-graph'
+import { fieldLabel } from './field-labels'
 import { PlanError, type PlanInput, type PlanLinkKind, type PlanStation } from './plan-types'
 
 export const PLAN_HANDS = 0
@@ -60,7 +61,7 @@ function countOf(kitchen: Record<string, unknown>, key: string, fallback: number
   const value = kitchen[key]
   if (value === undefined || value === null) return fallback
   if (typeof value !== 'number' || !Number.isInteger(value) || value < 0) {
-    throw new PlanError('bad-input', `The kitchen's ${key} must be a whole number of zero or more (got ${String(value)}).`)
+    throw new PlanError('bad-input', `${fieldLabel(['kitchen', key])}: write a whole number of zero or more.`)
   }
   return value
 }
@@ -78,7 +79,7 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
   const racks = countOf(kitchen, 'racksPerOven', 1)
   const counters = countOf(kitchen, 'counters', Infinity)
   const parallel = kitchen.parallelRecipes ?? true
-  if (typeof parallel !== 'boolean') throw new PlanError('bad-input', 'The kitchen’s parallelRecipes must be true or false.')
+  if (typeof parallel !== 'boolean') throw new PlanError('bad-input', 'Two recipes at once: choose yes or no (true or false).')
   const cap = [handsCap, burners, ovens * racks, counters]
 
   const steps = input.steps
@@ -133,11 +134,11 @@ export function planBuildNetwork(input: PlanInput): PlanNet {
     const label = labels[j]!
     const links: { from: unknown; kind?: unknown; lag?: unknown }[] = []
     if (step.after !== undefined) {
-      if (!Array.isArray(step.after)) throw new PlanError('bad-input', `“${label}”: after must be a list of step ids.`, [ids[j]!])
+      if (!Array.isArray(step.after)) throw new PlanError('bad-input', `“${label}” waits for something that is not a list of steps.`, [ids[j]!])
       for (const from of step.after) links.push({ from })
     }
     if (step.links !== undefined) {
-      if (!Array.isArray(step.links)) throw new PlanError('bad-input', `“${label}”: links must be a list.`, [ids[j]!])
+      if (!Array.isArray(step.links)) throw new PlanError('bad-input', `“${label}” has links that are not a list.`, [ids[j]!])
       for (const link of step.links) {
         if (!link || typeof link !== 'object') throw new PlanError('bad-input', `“${label}” has a link that is not a link.`, [ids[j]!])
         links.push(link)

@@ -14,6 +14,12 @@ import type { RecipeImportProblem } from '../types/recipe'
 /** The most text an import reads (512 KB): a recipe's JSON-LD is a few KB, a whole page rarely more. */
 export const IMPORT_MAX_CHARS = 512 * 1024
 /** What an import over the cap is told. */
+/** Where JSON.parse stopped, in words (" near character 120"), without its own programmer wording. */
+function jsonWhere(error: unknown): string {
+  const at = /position (\d+)/.exec(error instanceof Error ? error.message : '')?.[1]
+  return at ? ` (it stops making sense near character ${Number(at) + 1})` : ''
+}
+
 export const IMPORT_TOO_LARGE = 'The import is larger than 512 KB. Paste only the recipe\'s JSON-LD (the text of the page\'s '
   + '<script type="application/ld+json"> block) instead of the whole page, or save the page without its images and styles.'
 /** The most characters read from one text value (a name, a description, a step): above every field's own limit. */
@@ -98,7 +104,7 @@ export function extractJsonLdFromHtml(html: string): { blocks: unknown[]; proble
     try {
       blocks.push(JSON.parse(unwrapScriptText(text)))
     } catch (e) {
-      problems.push({ field: `script[${n}]`, reason: `the JSON-LD block is not valid JSON (${(e as Error).message})` })
+      problems.push({ field: `script[${n}]`, reason: `JSON-LD block ${n} is not valid JSON${jsonWhere(e)}` })
     }
   }
   readHtml(html, {
@@ -142,7 +148,7 @@ export function readRecipeInput(input: unknown): { recipes: JsonObject[]; proble
       try {
         data = JSON.parse(text)
       } catch (e) {
-        throw new RecipeImportError(`The text looks like JSON but is not valid JSON: ${(e as Error).message}`)
+        throw new RecipeImportError(`The text looks like JSON but is not valid JSON${jsonWhere(e)}; copy the whole JSON-LD again, from its first { to its last }`)
       }
       return readRecipeInput(data)
     }

@@ -17,12 +17,12 @@ export function isLocaleTag(tag: string): boolean {
 }
 
 export const newStudioBodySchema = z.object({
-  name: z.string({ error: 'Enter a studio name.' }).trim()
-    .min(1, 'Enter a studio name.').max(120, 'Use at most 120 characters for the studio name.'),
-  locale: z.string({ error: 'Choose the language and country from the list.' }).trim()
-    .refine(isLocaleTag, 'Choose the language and country from the list (written like en-GB or de-DE).'),
-  currency: z.string({ error: 'Choose the currency from the list.' }).trim().toUpperCase()
-    .refine(isCurrencyCode, 'Choose the currency from the list (a three-letter code such as GBP, EUR or USD).'),
-  timeZone: z.string({ error: 'Choose the time zone from the list.' }).refine(isTimeZone, 'Choose the time zone from the list, such as Europe/London.')
+  name: z.string({ error: 'give the studio a name.' }).trim()
+    .min(1, 'give the studio a name.').max(120, 'write at most 120 characters.'),
+  locale: z.string({ error: 'choose the language and country from the list.' }).trim()
+    .refine(isLocaleTag, 'choose the language and country from the list (written like en-GB or de-DE).'),
+  currency: z.string({ error: 'choose the currency from the list.' }).trim().toUpperCase()
+    .refine(isCurrencyCode, 'choose the currency from the list (a three-letter code such as GBP, EUR or USD).'),
+  timeZone: z.string({ error: 'choose the time zone from the list.' }).refine(isTimeZone, 'choose the time zone from the list, such as Europe/London.')
     .optional().default('UTC'),
 })

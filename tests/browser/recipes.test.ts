@@ -152,7 +152,7 @@ describe.skipIf(!chromiumAvailable())('recipes in the browser', async () => {
     await add.getByLabel('Unit').selectOption('kg')
     await add.getByLabel('Price').fill('1,15x')
     await add.getByRole('button', { name: 'Add price' }).click()
-    await page.getByText(/^price: "1,15x" is not a price/).waitFor()
+    await page.getByText(/^Price: "1,15x" is not a price/).waitFor()
     await add.getByLabel('Price').fill('1.15')
     await add.getByLabel('Shop').fill('Corner shop')
     await add.getByRole('button', { name: 'Add price' }).click()

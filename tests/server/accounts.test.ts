@@ -67,11 +67,12 @@ describe('accounts', async () => {
     const email = uniqueEmail('rule')
     const short = await new Client().post('/api/auth/signup', { name: 'A', email, password: 'short', studioName: 'S' })
     expect(short.status).toBe(400)
-    expect(short.body.statusMessage).toBe('password: Use at least 10 characters for the password.')
+    expect(short.body.statusMessage).toBe('Password: use at least 10 characters for the password.')
+    expect(short.body.data.field).toBe('password')
     const local = email.split('@')[0]
     const same = await new Client().post('/api/auth/signup', { name: 'A', email, password: `${local}!!`, studioName: 'S' })
     expect(same.status).toBe(400)
-    expect(same.body.statusMessage).toMatch(/^password: .*e-mail/)
+    expect(same.body.statusMessage).toMatch(/^Password: .*e-mail/)
   })
 
   it('a second sign-up with the same address is a 409, and nothing is overwritten', async () => {

@@ -95,7 +95,8 @@ describe('crew and invites', async () => {
     const producer = await signedIn(demo.producer)
     const res = await producer.post(`/api/studios/${await studioOf(producer)}/invites`, { email: demo.host, role: 'viewer' })
     expect(res.status).toBe(409)
-    expect(res.body.statusMessage).toMatch(/^email: /)
+    expect(res.body.statusMessage).toMatch(/^E-mail to invite: this person is already in the studio/)
+    expect(res.body.data.field).toBe('email')
   })
 
   it('roles change at once, and the last producer can neither be demoted nor removed', async () => {

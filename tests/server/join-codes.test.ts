@@ -71,6 +71,7 @@ describe('join codes', async () => {
     const producer = await signedIn(demo.producer)
     const bad = await producer.post(`/api/shoots/${shootId}/join-codes`, { role: 'producer' })
     expect(bad.status).toBe(400)
-    expect(bad.body.statusMessage).toMatch(/^role: /)
+    expect(bad.body.statusMessage).toBe('Device for: choose host or camera: a join code is for one kind of device.')
+    expect(bad.body.data.field).toBe('role')
   })
 })

@@ -64,7 +64,7 @@ describe('kitchen facts', async () => {
     bad.ingredients[0]!.allergenState = 'probably' as never
     const res = await producer.post(`/api/studios/${studioId}/recipes`, bad)
     expect(res.status).toBe(400)
-    expect(res.body.statusMessage).toMatch(/allergenState must be suggested, checked or none-declared/)
+    expect(res.body.statusMessage).toBe('Ingredient 1, allergens checked: choose suggested, checked or none-declared.')
   })
 
   it('"Free of" counts only checked ingredients and says how many are unchecked', async () => {
@@ -106,7 +106,7 @@ describe('kitchen facts', async () => {
     expect(usPreview.body.body.ingredients[0]).toMatchObject({ unit: 'pint' })
     const bad = await producer.patch(`/api/studios/${studioId}`, { fluidMeasure: 'pub' })
     expect(bad.status).toBe(400)
-    expect(bad.body.statusMessage).toMatch(/fluidMeasure must be us .* imperial/)
+    expect(bad.body.statusMessage).toMatch(/^What a bare “pint” means: choose us .* imperial/)
     expect((await producer.patch(`/api/studios/${studioId}`, { fluidMeasure: null })).body).toMatchObject({ fluidMeasure: 'imperial', fluidMeasureChosen: false })
   })
 

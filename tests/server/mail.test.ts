@@ -211,11 +211,11 @@ describe('local SMTP catcher', () => {
     expect(outboxQuerySchema.parse({})).toEqual({ limit: 50, offset: 0 })
     expect(outboxQuerySchema.parse({ limit: '5', offset: '10' })).toEqual({ limit: 5, offset: 10 })
     for (const [query, message] of [
-      [{ limit: '0' }, 'must be a whole number from 1 to 100.'],
-      [{ limit: '101' }, 'must be a whole number from 1 to 100.'],
-      [{ limit: 'lots' }, 'must be a whole number from 1 to 100.'],
-      [{ offset: '-1' }, 'must be a whole number 0 or more.'],
-      [{ offset: '1.5' }, 'must be a whole number 0 or more.'],
+      [{ limit: '0' }, 'write a whole number from 1 to 100.'],
+      [{ limit: '101' }, 'write a whole number from 1 to 100.'],
+      [{ limit: 'lots' }, 'write a whole number from 1 to 100.'],
+      [{ offset: '-1' }, 'write a whole number 0 or more.'],
+      [{ offset: '1.5' }, 'write a whole number 0 or more.'],
     ] as const) {
       const result = outboxQuerySchema.safeParse(query)
       expect(result.success).toBe(false)
@@ -268,9 +268,11 @@ describe('built app: mail catcher and outbox routes', async () => {
     }
   })
 
-  it('answers a studio id that is not a number with 400 naming the field', async () => {
+  it('answers a studio id that is not a number with 400 saying what the address should hold', async () => {
     const res = await fetch('/api/studios/abc/outbox')
     expect(res.status).toBe(400)
-    expect((await res.json()).message).toBe('studioId: must be a positive whole number, got "abc".')
+    const body = await res.json()
+    expect(body.message).toBe('This address names no studio: the studio number in it must be a whole number such as 12. Check the link.')
+    expect(body.data.field).toBe('studioId')
   })
 })

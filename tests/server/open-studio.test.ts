@@ -51,7 +51,7 @@ describe('opening another studio', async () => {
   it.each([
     [{ name: '   ', locale: 'en-GB', currency: 'GBP' }, 'name', /studio name/i],
     [{ locale: 'en-GB', currency: 'GBP' }, 'name', /studio name/i],
-    [{ name: 'x'.repeat(121), locale: 'en-GB', currency: 'GBP' }, 'name', /120 characters for the studio name/],
+    [{ name: 'x'.repeat(121), locale: 'en-GB', currency: 'GBP' }, 'name', /^Studio name: write at most 120 characters/],
     [{ name: 'Bad Locale Kitchen', locale: 'english', currency: 'GBP' }, 'locale', /language and country from the list/],
     [{ name: 'Bad Locale Kitchen', locale: 'en-gb', currency: 'GBP' }, 'locale', /locale/i],
     [{ name: 'Bad Money Kitchen', locale: 'en-GB', currency: 'QQQ' }, 'currency', /currency from the list/],

@@ -168,7 +168,7 @@ describe('photos in the photo folder', async () => {
     for (const [bytes, name, type] of refusals) {
       const res = await send(producer, `/api/recipes/${recipe.id}/photo`, bytes, name, type)
       expect(res.status, name).toBe(415)
-      expect(res.body.statusMessage, name).toMatch(/^photo: .*JPEG, PNG or WebP/)
+      expect(res.body.statusMessage, name).toMatch(/^Photo: .*JPEG, PNG or WebP/)
     }
     expect((await producer.get(`/api/recipes/${recipe.id}`)).body.photo).toBeNull()
   })
@@ -183,7 +183,7 @@ describe('photos in the photo folder', async () => {
 
     const wrongField = await upload(url, producer.cookie, `/api/recipes/${recipe.id}/photo`, await halves(40, 40).jpeg().toBuffer(), 'a.jpg', 'image/jpeg', 'file')
     expect(wrongField.status).toBe(400)
-    expect(wrongField.body.statusMessage).toMatch(/^photo: attach the photo in a form field named "photo"/)
+    expect(wrongField.body.statusMessage).toMatch(/^Photo: attach it in a form field named "photo"/)
     const json = await producer.post(`/api/recipes/${recipe.id}/photo`, { photo: 'dish.jpg' })
     expect(json.status).toBe(400)
     expect(json.body.statusMessage).toMatch(/multipart\/form-data/)
@@ -307,7 +307,7 @@ describe('photos in the photo folder', async () => {
     for (const path of tricks) {
       const res = await raw(path)
       expect(res.status, path).toBe(400)
-      expect(JSON.parse(res.body).statusMessage, path).toMatch(/^photo address: /)
+      expect(JSON.parse(res.body).statusMessage, path).toMatch(/^This photo address /)
     }
     for (const path of [`/api/photos/studio-${studioId}/recipe-1/notes.txt`, `/api/photos/studio-${studioId}/recipe-1/abcdefghijkl.thumb.webp`, `/api/photos/studio-${studioId}/recipe-1/abcdefghijkl.jpg`]) {
       expect((await raw(path)).status, path).toBe(404)

@@ -109,8 +109,8 @@ describe('same-origin checks', async () => {
       const form = await producer.call('POST', `/api/studios/${studioId}/episodes`, 'title=Form+episode', { 'content-type': 'application/x-www-form-urlencoded' })
       expect(form.status).toBe(415)
       expect(form.body.data).toMatchObject({ code: 'unsupported-type', field: 'body', accepted: ['application/json'] })
-      expect(form.body.message).toBe('body: this route reads JSON only; send it with Content-Type: application/json '
-        + '(got "application/x-www-form-urlencoded"; form posts are refused).')
+      expect(form.body.message).toBe('This address reads JSON only: send it with Content-Type: application/json '
+        + '(this was "application/x-www-form-urlencoded"; form posts are refused).')
       // A text/plain form can carry a body that reads as JSON; it is refused all the same.
       const plain = await producer.call('POST', `/api/studios/${studioId}/episodes`, '{"title":"Plain episode"}', { 'content-type': 'text/plain' })
       expect(plain.status).toBe(415)

@@ -308,7 +308,7 @@ describe('refusals', () => {
       [{ steps: [{ id: 'a', duration: 5, handsOn: true, station: 'toString' as never }] }, /unknown station/, ['a']],
       [{ steps: [step('a', 1, true, null), step('b', 1, true, null, { links: [{ from: 'a', lag: -60 }] })] }, /zero or more seconds/, ['a', 'b']],
       [{ steps: [step('a', 1, true, null), step('b', 1, true, null, { links: [{ from: 'a', kind: 'sideways' as never }] })] }, /unknown kind/, ['b']],
-      [{ steps: [step('a', 1, true, null)], kitchen: { burners: 2.5 } }, /burners must be a whole number/, []],
+      [{ steps: [step('a', 1, true, null)], kitchen: { burners: 2.5 } }, /^Burners: write a whole number of zero or more/, []],
       [{ steps: 'soup' as never }, /list of steps/, []],
     ]
     for (const [input, message, stepIds] of cases) {

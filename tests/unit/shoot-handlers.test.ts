@@ -121,7 +121,7 @@ describe('shoot handlers', () => {
 
   it('refuses bad input, strangers and unknown shoots in the same shape', async () => {
     await expect(handlers.command(host, { type: 'step.next' })).resolves.toEqual({
-      ok: false, error: { code: 'invalid', message: 'shootId: send the number of the shoot.', field: 'shootId' },
+      ok: false, error: { code: 'invalid', message: 'This screen did not say which shoot it is on; reload the page, or open the shoot again from its episode.', field: 'shootId' },
     })
     await expect(handlers.command(host, { shootId: shoot, type: 'timer.start', label: 'Rest', durationMs: 'ten' }))
       .resolves.toMatchObject({ ok: false, error: { code: 'invalid', field: 'durationMs' } })

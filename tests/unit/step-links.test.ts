@@ -8,7 +8,7 @@ import { exportSchemaOrgRecipe } from '../../shared/utils/schemaorg-export'
 import { readsAsAlongside, setStartsWithStepBefore, startsWithStepBefore, type EditorStepLinks } from '../../shared/utils/step-links'
 import { cleanStepName, importedStepName, stepNameProblem } from '../../shared/utils/step-name'
 import { recipeCreateSchema } from '../../shared/utils/recipe-schemas'
-import { fieldLabel } from '../../composables/recipe-form'
+import { fieldLabel } from '../../shared/utils/field-labels'
 
 const recipe = (recipeInstructions: unknown) => ({
   '@context': 'https://schema.org', '@type': 'Recipe', name: 'Brackenford weeknight rigatoni', recipeYield: '4 servings',
@@ -107,7 +107,7 @@ describe('saving a short name', () => {
     expect(parse('x'.repeat(40))).toHaveLength(40)
     const bad = recipeCreateSchema.safeParse(body('x'.repeat(41)))
     expect(bad.success).toBe(false)
-    expect(bad.error!.issues[0]).toMatchObject({ path: ['steps', 0, 'name'], message: 'Keep the short name to 40 characters, such as "Pasta water".' })
+    expect(bad.error!.issues[0]).toMatchObject({ path: ['steps', 0, 'name'], message: 'keep it to 40 characters, such as "Pasta water".' })
   })
   it('the editor says what to fix, naming the field by its label', () => {
     expect(stepNameProblem('The big pot of salted water for the rigatoni', 3)).toBe('Step 3, short name: keep it to 40 characters (it has 44).')
@@ -115,7 +115,7 @@ describe('saving a short name', () => {
     expect(cleanStepName('  Pasta  water ')).toBe('Pasta water')
     expect(cleanStepName('   ')).toBeNull()
     expect(fieldLabel('steps.2.name')).toBe('Step 3, short name')
-    expect(fieldLabel('steps.2.text')).toBe('Step 3, text')
+    expect(fieldLabel('steps.2.text')).toBe('Step 3, what to do')
   })
 })
 

@@ -3,7 +3,7 @@
 // from the request, and browsers are told not to guess another.
 import { z } from 'zod'
 
-const query = z.object({ size: z.enum(['full', 'thumb'], { error: 'size must be thumb, or left out for the full photo.' }).optional() })
+const query = z.object({ size: z.enum(['full', 'thumb'], { error: 'ask for thumb, or leave it out for the full photo.' }).optional() })
 
 export default defineEventHandler(async (event) => {
   const { key, studioId } = parsePhotoKey(getRouterParam(event, 'key'))

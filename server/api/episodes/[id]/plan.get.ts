@@ -1,13 +1,16 @@
 // The cook plan for the episode against the studio's kitchen, or a what-if kitchen from the query.
 import { z } from 'zod'
 
-const count = (name: string, min: number, max: number) => z.coerce.number({ error: `${name} must be a number.` }).int(`${name} must be a whole number.`).min(min, `${name} is at least ${min}.`).max(max, `${name} is at most ${max}.`).optional()
+const count = (min: number, max: number) => {
+  const words = `write a whole number from ${min} to ${max}.`
+  return z.coerce.number({ error: words }).int(words).min(min, words).max(max, words).optional()
+}
 const query = z.object({
-  hands: count('hands', 1, 12),
-  burners: count('burners', 0, 16),
-  ovens: count('ovens', 0, 6),
-  racks: count('racks', 1, 6),
-  parallel: z.enum(['0', '1'], { error: 'parallel must be 1 or 0.' }).optional(),
+  hands: count(1, 12),
+  burners: count(0, 16),
+  ovens: count(0, 6),
+  racks: count(1, 6),
+  parallel: z.enum(['0', '1'], { error: 'write 1 for yes or 0 for no.' }).optional(),
 })
 
 export default defineEventHandler(async (event) => {

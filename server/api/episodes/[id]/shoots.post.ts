@@ -3,7 +3,7 @@
 import { z } from 'zod'
 import { planShoot } from '../../../shoot/plan'
 
-const body = z.object({ mode: z.enum(['rehearsal', 'take'], { error: 'mode must be rehearsal or take.' }) })
+const body = z.object({ mode: z.enum(['rehearsal', 'take'], { error: 'choose rehearsal or take.' }) })
 
 export default defineEventHandler(async (event) => {
   const { episodeId, studioId, caller } = await requireEpisode(event, 'shoot.create')

@@ -2,7 +2,7 @@
 import { z } from 'zod'
 
 const query = z.object({
-  servings: z.coerce.number({ error: 'servings must be a number.' }).positive('servings must be above zero.').max(1000, 'servings is at most 1000.').optional(),
+  servings: z.coerce.number({ error: 'write the number of servings, such as 4.' }).positive('write a number above 0, such as 4.').max(1000, 'write at most 1000.').optional(),
 })
 
 export default defineEventHandler(async (event) => {

@@ -9,8 +9,8 @@ import { DomainError } from '../../../../../shared/utils/domain-error'
 import { IMPORT_MAX_CHARS, IMPORT_TOO_LARGE } from '../../../../../shared/utils/schemaorg-read'
 
 const query = z.object({
-  preview: z.enum(['0', '1', 'true', 'false'], { error: 'preview must be 1 or 0.' }).optional(),
-  confirmed: z.string().regex(/^(?:all|\d{1,3}(?:,\d{1,3}){0,199})$/, 'confirmed lists step positions such as 1,3, or all.').optional(),
+  preview: z.enum(['0', '1', 'true', 'false'], { error: 'write 1 to preview only, or 0 to save.' }).optional(),
+  confirmed: z.string().regex(/^(?:all|\d{1,3}(?:,\d{1,3}){0,199})$/, 'list the step numbers such as 1,3, or write all.').optional(),
 })
 
 export default defineEventHandler(async (event) => {

@@ -2,7 +2,7 @@
 import { z } from 'zod'
 
 const query = z.object({
-  q: z.string().trim().max(100, 'q: search at most 100 characters.').optional(),
+  q: z.string().trim().max(100, 'search for at most 100 characters.').optional(),
   tag: z.string().trim().max(40).optional(),
   allergen: z.string().trim().max(40).optional(),
   without: z.string().trim().max(40).optional(),
