@@ -103,7 +103,7 @@ export const ACTION_WORDS = {
   'shoot.end-cancel': { label: 'End and cancel timers', colour: 'ember' },
   'step.next': { label: 'Next step', colour: 'bone' },
   'step.previous': { label: 'Previous step', colour: 'bone' },
-  'step.jump': { label: 'Go to step', colour: 'bone' },
+  'step.jump': { label: 'Go', colour: 'bone' },
   'wait.start': { label: 'Start the wait', colour: 'mint' },
   'timer.start': { label: 'Start timer', colour: 'mint' },
   'timer.pause': { label: 'Pause timer', colour: 'sky' },

@@ -16,6 +16,9 @@ export function isLocaleTag(tag: string): boolean {
   }
 }
 
+/** The new-studio form's labels where they differ from the shared table (shared/utils/field-labels.ts). */
+export const NEW_STUDIO_LABELS = { name: 'Studio name' }
+
 export const newStudioBodySchema = z.object({
   name: z.string({ error: 'give the studio a name.' }).trim()
     .min(1, 'give the studio a name.').max(120, 'write at most 120 characters.'),

@@ -132,7 +132,7 @@ describe.skipIf(!chromiumAvailable())('the live shoot in two browsers', async ()
     for (const page of [producer.page, host.page]) {
       await expect(page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).resolves.toBe(0)
     }
-    await host.page.getByRole('button', { name: 'Done: Flatbread rest' }).click()
+    await host.page.getByRole('button', { name: /^Done\W+Flatbread rest$/ }).click()
     await producer.page.locator('[data-testid="done-timer-Flatbread rest"][data-state="acknowledged"]').waitFor({ state: 'attached' })
     await expect(producer.page.getByTestId('timer-Flatbread rest').count()).resolves.toBe(0)
 
