@@ -88,10 +88,13 @@ export const liveFieldSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('total-time'), recipeId }).strict(),
 ], { error: 'choose a live field from the list: servings, amount, cost, budget, oven or total-time.' })
 
-export const scriptPieceSchema = z.union([
-  z.object({ text: z.string({ error: typed('write it as text.') }).max(SCRIPT_TEXT_MAX, `write at most ${SCRIPT_TEXT_MAX} characters.`) }).strict(),
-  z.object({ field: liveFieldSchema }).strict(),
-], { error: 'send words or a live field chosen from the list.' })
+/** Words or a live field: exactly one of the two, so a problem inside a field is named where it is. */
+export const scriptPieceSchema = z.object({
+  text: z.string({ error: typed('write it as text.') }).max(SCRIPT_TEXT_MAX, `write at most ${SCRIPT_TEXT_MAX} characters.`).optional(),
+  field: liveFieldSchema.optional(),
+}, { error: 'send words or a live field chosen from the list.' }).strict().superRefine((p, ctx) => {
+  if ((p.text === undefined) === (p.field === undefined)) ctx.addIssue({ code: 'custom', message: 'send either words or one live field chosen from the list.' })
+}).transform((p): ScriptPiece => (p.field ? { field: p.field as LiveField } : { text: p.text! }))
 
 const SEGMENT_ID = 'send the id Hobline gave the segment: letters, digits, "-" and "_", at most 40.'
 
