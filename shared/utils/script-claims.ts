@@ -139,8 +139,8 @@ function costClaims(text: string, data: ShowData, ids: readonly number[]): Found
   const out: Found[] = []
   for (const m of text.matchAll(COST_RE)) {
     const mode = m[1] ? MODES[m[1].toLowerCase()]! : 'eq'
-    const unitWord = (m[2] ?? m[4] ?? m[6]!).toLowerCase()
-    const amountText = m[3] ?? m[5] ?? m[7]!
+    const unitWord = (m[2] ?? m[5] ?? m[7]!).toLowerCase()
+    const amountText = m[3] ?? m[4] ?? m[6]!
     out.push({
       start: m.index!, end: m.index! + m[0].length, text: m[0], kind: 'cost',
       check: () => {
