@@ -62,6 +62,13 @@ describe('cost per serving', () => {
     expect(one('under $3 a serving', [1])).toMatchObject({ verdict: 'unknown', detail: 'It is said in dollars, but the episode is costed in GBP.' })
     expect(one('under £2 a serving', [])).toMatchObject({ verdict: 'unknown' })
   })
+  it('"under" is strictly below, "no more than" allows the figure itself', () => {
+    const d = episode()
+    d.recipes[2]!.cost = { perServingMinor: 200, perServingWithOptionalMinor: 200, complete: true, gaps: [] }
+    expect(one('under £2 a serving', [3], d).verdict).toBe('false') // 200 is not < 200
+    expect(one('no more than £2 a serving', [3], d).verdict).toBe('true') // 200 ≤ 200
+    expect(one('over £1.99 a serving', [3], d).verdict).toBe('true') // 200 > 199
+  })
   it('false beats unknown: one recipe over budget is enough', () => {
     const d = episode()
     d.recipes[0]!.cost = null
