@@ -16,6 +16,7 @@ const ENTRY_NOUNS: Record<string, string> = {
   eu: 'EU allergen',
   us: 'US allergen',
   readFromText: 'read-from-text entry',
+  segments: 'Segment',
 }
 
 /** Top-level fields, as the forms label them (sign-up, settings, prices, episodes, the plan's kitchen, join codes). */
@@ -66,6 +67,7 @@ const TOP: Record<string, string> = {
   racks: 'Dishes per oven',
   parallel: 'Recipes side by side',
   mode: 'Rehearsal or recording',
+  segments: 'Run order',
   // Lists and searches
   q: 'Search',
   tag: 'Tag',
@@ -115,6 +117,10 @@ const INNER: Record<string, Record<string, string>> = {
   times: { prep: 'Prep time', cook: 'Cook time', total: 'Total time' },
   kitchen: { hands: 'Cooks’ hands', burners: 'Burners', ovens: 'Ovens', racksPerOven: 'Dishes per oven', parallelRecipes: 'Two recipes at once' },
   stepRef: { segment: 'recipe in the run order', step: 'step' },
+  segments: {
+    id: 'segment id', kind: 'kind of segment', title: 'title', recipeId: 'recipe', text: 'words', field: 'live field',
+    ingredientKey: 'ingredient', withOptional: 'with the optional ingredients', celsius: 'oven temperature',
+  },
 }
 
 /** Groups whose inner fields stand alone ("Prep time", not "Times, prep time"). */
