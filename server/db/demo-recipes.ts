@@ -23,6 +23,8 @@ export interface DemoRecipe {
   title: string
   summary: string
   servings: number
+  /** Start to finish in minutes, as the recipe card states it. */
+  totalMinutes: number
   tags: string[]
   photo: DemoPhotoName
   /** Ingredient lines, each with the demo price it is costed with (every line has one: the demo's cost is complete). */
@@ -53,6 +55,7 @@ export const demoPrices: [string, number, string, number, string][] = [
 export const demoRecipes: DemoRecipe[] = [
   {
     title: 'Smoky butter bean and tomato stew',
+    totalMinutes: 45,
     summary: 'A one-pot stew for a cold evening: soft onions, smoked paprika and creamy beans.',
     servings: 4,
     tags: ['one-pot', 'vegan', 'budget'],
@@ -79,6 +82,7 @@ export const demoRecipes: DemoRecipe[] = [
   },
   {
     title: 'Pan flatbreads with mint yoghurt',
+    totalMinutes: 35,
     summary: 'Two-ingredient dough rested while the yoghurt is mixed, cooked in a dry pan.',
     servings: 4,
     tags: ['bread', 'vegetarian', 'quick'],
@@ -101,6 +105,7 @@ export const demoRecipes: DemoRecipe[] = [
   },
   {
     title: 'Roast squash with lentils and tahini',
+    totalMinutes: 55,
     summary: 'Oven-roasted squash on lemony lentils with a loose tahini sauce.',
     servings: 4,
     tags: ['oven', 'vegan'],

@@ -4,9 +4,11 @@ import { parseQuantity } from '../../shared/utils/quantity'
 import { suggestAllergens } from '../../shared/utils/allergens'
 import { makeIngredientKey, stepTokenProblems } from '../../shared/utils/step-text'
 import { demoEpisode, demoPrices, demoRecipes, type DemoRecipe } from './demo-recipes'
+import { demoShow, demoShowSettings } from './demo-show'
 import { Episode, EpisodeSegment, Price, Recipe, RecipeIngredient, RecipeStep } from './models'
 
-export async function seedDemoRecipes(studioId: number, currency: string) {
+/** The demo dishes, prices and episode; `hostId` presents the episode. */
+export async function seedDemoRecipes(studioId: number, currency: string, hostId: number | null = null) {
   const priceIds = new Map<string, number>()
   for (const [item, packageSize, packageUnit, priceMinor, shop] of demoPrices) {
     const row = await Price.create({ studioId, item, packageSize, packageUnit, priceMinor, currency, shop, boughtOn: '2026-11-24' })
@@ -16,7 +18,7 @@ export async function seedDemoRecipes(studioId: number, currency: string) {
   for (const demo of demoRecipes) {
     const recipe = await Recipe.create({
       studioId, title: demo.title, summary: demo.summary, servings: demo.servings, yieldText: null, tags: demo.tags, notes: null,
-      times: { prep: null, cook: null, total: null },
+      times: { prep: null, cook: null, total: demo.totalMinutes * 60 },
     })
     const keys: string[] = []
     for (const [position, [line, price]] of demo.lines.entries()) {
@@ -41,7 +43,11 @@ export async function seedDemoRecipes(studioId: number, currency: string) {
     }
     recipes.push({ recipe, photo: demo.photo })
   }
-  const episode = await Episode.create({ studioId, title: demoEpisode.title })
-  for (const [i, { recipe }] of recipes.entries()) await EpisodeSegment.create({ episodeId: episode.id, position: i + 1, kind: 'recipe', recipeId: recipe.id, title: null })
+  const episode = await Episode.create({ studioId, title: demoEpisode.title, ...demoShowSettings, hostId })
+  const show = demoShow(recipes.map((r) => r.recipe.id))
+  await EpisodeSegment.bulkCreate(show.map((s, i) => ({
+    episodeId: episode.id, segKey: s.id, position: i + 1, kind: s.kind, recipeId: s.recipeId ?? null, title: s.kind === 'recipe' ? null : s.title,
+    script: s.script, closing: s.closing ?? [],
+  })))
   return recipes
 }

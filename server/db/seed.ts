@@ -4,6 +4,7 @@ import type { Sequelize } from 'sequelize'
 import { DEMO_PASSWORD, demoCrew, demoStudio } from './demo'
 import { Membership, Studio, User } from './models'
 import { seedDemoRecipes } from './seed-recipes'
+import { DEMO_HOST_WPM } from './demo-show'
 import type { DemoPhotoName } from './demo-photos'
 
 export interface SeedResult {
@@ -24,11 +25,14 @@ export async function seedDemo(sequelize: Sequelize, hashPassword: PasswordHashe
   return sequelize.transaction(async () => {
     if ((await Studio.count()) > 0) return { seeded: false, studio: demoStudio.name }
     const studio = await Studio.create({ ...demoStudio })
+    let hostId: number | null = null
     for (const person of demoCrew) {
       const user = await User.create({ name: person.name, email: person.email, passwordHash })
-      await Membership.create({ userId: user.id, studioId: studio.id, role: person.role })
+      const host = person.role === 'host'
+      await Membership.create({ userId: user.id, studioId: studio.id, role: person.role, readingWpm: host ? DEMO_HOST_WPM : null })
+      if (host) hostId = user.id
     }
-    const recipes = await seedDemoRecipes(studio.id, studio.currency)
+    const recipes = await seedDemoRecipes(studio.id, studio.currency, hostId)
     if (storePhoto) {
       for (const { recipe, photo } of recipes) await recipe.update({ photo: await storePhoto(photo, studio.id, recipe.id) })
     }

@@ -11,7 +11,7 @@ export async function listMembers(studioId: number) {
   const rows = await Membership.findAll({ where: { studioId }, include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }], order: [['id', 'ASC']] })
   return rows.map((m) => {
     const user = (m as Membership & { user: User }).user
-    return { userId: user.id, name: user.name, email: user.email, role: m.role, since: m.createdAt }
+    return { userId: user.id, name: user.name, email: user.email, role: m.role, readingWpm: m.readingWpm ?? null, since: m.createdAt }
   })
 }
 
@@ -22,17 +22,20 @@ async function producersLeft(studioId: number, withoutUserId: number) {
   })
 }
 
-export async function changeRole(studioId: number, userId: number, role: StudioRole) {
+/** A member's new role and/or reading pace; the studio keeps at least one producer. */
+export async function changeMember(studioId: number, userId: number, change: { role?: StudioRole; readingWpm?: number | null }) {
   const sequelize = await useDb()
   return sequelize.transaction(async () => {
     const membership = await Membership.findOne({ where: { studioId, userId } })
     if (!membership) throw new DomainError('not-found', 'That person is not in this studio.')
+    const role = change.role ?? membership.role
     if (membership.role === 'producer' && role !== 'producer' && (await producersLeft(studioId, userId)) === 0) {
       throw new DomainError('conflict', 'A studio needs at least one producer. Make someone else a producer first.')
     }
     membership.role = role
+    if (change.readingWpm !== undefined) membership.readingWpm = change.readingWpm
     await membership.save()
-    return { userId, role }
+    return { userId, role, readingWpm: membership.readingWpm ?? null }
   })
 }
 

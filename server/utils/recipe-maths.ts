@@ -40,9 +40,11 @@ export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, 
   }
 }
 
-async function pricesFor(studioId: number) {
+/** The studio's prices as the costing reads them. */
+export async function pricesFor(studioId: number) {
   return (await listPrices(studioId)).map(studioPrice)
 }
+type StudioPrices = Awaited<ReturnType<typeof pricesFor>>
 
 type CostLine = {
   key: string; item: string; min: number | null; max: number | null; unit: string | null; optional: boolean; toTaste?: boolean; priceId: number | null
@@ -55,14 +57,19 @@ function costInput(ingredients: CostLine[]) {
   }))
 }
 
+/** A loaded recipe costed against the studio's prices (already read), for `servings` (the recipe's own by default). */
+export function costLoadedRecipe(recipe: RecipeView, settings: Pick<StudioSettings, 'currency' | 'budgetPerServingMinor'>, prices: StudioPrices, servings?: number) {
+  return costRecipe(costInput(recipe.ingredients), prices, {
+    currency: settings.currency, servings: recipe.servings, forServings: servings ?? recipe.servings, budgetPerServingMinor: settings.budgetPerServingMinor,
+    densities: statedDensities(recipe.ingredients),
+  })
+}
+
 export async function recipeCostView(recipeId: number, studioId: number, servings?: number) {
   const recipe = (await loadRecipe(recipeId))!
   const settings = await studioSettings(studioId)
   const prices = await pricesFor(studioId)
-  const cost = costRecipe(costInput(recipe.ingredients), prices, {
-    currency: settings.currency, servings: recipe.servings, forServings: servings ?? recipe.servings, budgetPerServingMinor: settings.budgetPerServingMinor,
-    densities: statedDensities(recipe.ingredients),
-  })
+  const cost = costLoadedRecipe(recipe, settings, prices, servings)
   const dec = (minor: number) => minorToDecimal(minor, cost.currency)
   const fmt = (minor: number) => formatMoney(minor, cost.currency, settings.locale)
   return {

@@ -28,7 +28,12 @@ export const loginBodySchema = z.object({ email, password })
 
 export const inviteBodySchema = z.object({ email, role: studioRole })
 
-export const roleBodySchema = z.object({ role: studioRole })
+const PACE = 'write a reading pace from 80 to 260 words a minute, or leave it empty for the usual 150.'
+/** A crew member's change: a new role, a reading pace on camera (words a minute; null for the default), or both. */
+export const memberBodySchema = z.object({
+  role: studioRole.optional(),
+  readingWpm: z.number({ error: typed(PACE) }).int(PACE).min(80, PACE).max(260, PACE).nullable().optional(),
+}).refine((b) => b.role !== undefined || b.readingWpm !== undefined, { message: 'send a new role or a reading pace.', path: ['role'] })
 
 export const acceptInviteBodySchema = z.object({
   name: name.optional(),

@@ -10,6 +10,7 @@ import { STEP_NAME_MAX } from './step-name'
 import { isTimeZone } from './time-zone'
 import { UNIT_IDS, type UnitId } from './units'
 import { typed } from './input-words'
+import { showSegmentsSchema } from './show-segments'
 
 const text = (max: number) => z.string({ error: typed('write it as text.') }).trim().max(max, `write at most ${max} characters.`)
 const optionalText = (max: number) => text(max).nullable().optional().transform((v) => (v ? v : null))
@@ -157,8 +158,15 @@ export const studioSettingsSchema = z.object({
   }).optional(),
 })
 
-/** The episode forms word 'title' as "Episode title". */
-export const EPISODE_LABELS = { title: 'Episode title' }
+/** The episode forms' words for their fields. */
+export const EPISODE_LABELS = {
+  title: 'Episode title', shootDate: 'Shoot date', servings: 'Servings on set', unitSystem: 'Units on set',
+  budgetPerServingMinor: 'Budget per serving', targetSeconds: 'Target length', hostId: 'Presenter',
+}
+const SHOOT_DATE = 'choose a day from the calendar (written like 2026-12-09), or leave it empty.'
+const EPISODE_SERVINGS = 'write a whole number of servings from 1 to 200, or leave it empty to cook each recipe as written.'
+const TARGET = 'write the target length in whole seconds from 30 to 14400 (4 hours), or leave it empty.'
+const HOST = 'choose the presenter from the crew list, or leave it empty.'
 
 const RECIPE_ID = 'choose a recipe from the list (a whole number such as 12).'
 const recipeIds = z.array(z.number({ error: RECIPE_ID }).int(RECIPE_ID).positive(RECIPE_ID), { error: 'send a list of recipes, such as [12, 15].' })
@@ -173,7 +181,15 @@ export const episodeUpdateSchema = z.object({
   version: version('episode'),
   title: text(160).min(1, 'give the episode a title.').optional(),
   recipeIds: recipeIds.optional(),
-})
+  segments: showSegmentsSchema.optional(),
+  shootDate: z.string({ error: typed(SHOOT_DATE) }).regex(/^\d{4}-\d{2}-\d{2}$/, SHOOT_DATE)
+    .refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)) && new Date(`${d}T00:00:00Z`).toISOString().startsWith(d), SHOOT_DATE).nullable().optional(),
+  servings: z.number({ error: typed(EPISODE_SERVINGS) }).int(EPISODE_SERVINGS).min(1, EPISODE_SERVINGS).max(200, EPISODE_SERVINGS).nullable().optional(),
+  unitSystem: z.enum(['metric', 'us'], { error: 'choose metric or us, or leave it empty to use the studio\'s units.' }).nullable().optional(),
+  budgetPerServingMinor: z.number({ error: typed(BUDGET) }).int(BUDGET).min(0, BUDGET).max(1e8, 'write at most 100000000 pence or cents.').nullable().optional(),
+  targetSeconds: z.number({ error: typed(TARGET) }).int(TARGET).min(30, TARGET).max(14_400, TARGET).nullable().optional(),
+  hostId: z.number({ error: typed(HOST) }).int(HOST).positive(HOST).nullable().optional(),
+}).refine((b) => !(b.recipeIds && b.segments), { message: 'send the run order once: segments, or recipeIds for recipes only, not both.', path: ['segments'] })
 
 export type RecipeCreateBody = z.output<typeof recipeCreateSchema>
 export type RecipeUpdateBody = z.output<typeof recipeUpdateSchema>

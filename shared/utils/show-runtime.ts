@@ -45,3 +45,20 @@ export function showRuntime(
   const targetMs = options.targetMs ?? null
   return { segments: rows, totalMs, targetMs, overMs: targetMs === null ? null : totalMs - targetMs }
 }
+
+/**
+ * Each recipe segment's share of the cook plan's length, in run order: the time by which the segment
+ * pushes the end of cooking further out (the latest end among its steps and those before it, less
+ * the latest end before it). Recipes cooked one after another get their own length; recipes side by
+ * side share the overlap, and the shares add up to the plan's makespan (when the plan starts at 0).
+ */
+export function cookShares(segments: readonly { id: string; stepEndsMs: readonly number[] }[]): Map<string, number> {
+  const out = new Map<string, number>()
+  let reached = 0
+  for (const s of segments) {
+    const end = Math.max(reached, ...s.stepEndsMs)
+    out.set(s.id, end - reached)
+    reached = end
+  }
+  return out
+}

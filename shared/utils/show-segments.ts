@@ -28,7 +28,10 @@ export interface ShowSegment {
   title: string
   /** The recipe of a recipe segment; absent for every other kind. */
   recipeId?: number
+  /** What the host says as the segment opens (a recipe segment: at its first step). */
   script: ScriptPiece[]
+  /** A recipe segment's closing lines, said at its last step (the cost line); empty for the others. */
+  closing?: ScriptPiece[]
 }
 
 /** What the editor calls each kind, and the title a new segment of that kind starts with. */
@@ -96,6 +99,9 @@ export const scriptPieceSchema = z.object({
   if ((p.text === undefined) === (p.field === undefined)) ctx.addIssue({ code: 'custom', message: 'send either words or one live field chosen from the list.' })
 }).transform((p): ScriptPiece => (p.field ? { field: p.field as LiveField } : { text: p.text! }))
 
+const scriptSchema = z.array(scriptPieceSchema, { error: 'send the script as a list of words and live fields.' })
+  .max(SCRIPT_PIECES_MAX, `keep it to at most ${SCRIPT_PIECES_MAX} pieces of words and fields.`)
+
 const SEGMENT_ID = 'send the id Hobline gave the segment: letters, digits, "-" and "_", at most 40.'
 
 export const showSegmentSchema = z.object({
@@ -104,12 +110,15 @@ export const showSegmentSchema = z.object({
   title: z.string({ error: typed('write it as text.') }).trim().min(1, 'give the segment a title.')
     .max(SEGMENT_TITLE_MAX, `write at most ${SEGMENT_TITLE_MAX} characters.`),
   recipeId: recipeId.optional(),
-  script: z.array(scriptPieceSchema, { error: 'send the script as a list of words and live fields.' })
-    .max(SCRIPT_PIECES_MAX, `keep it to at most ${SCRIPT_PIECES_MAX} pieces of words and fields.`),
+  script: scriptSchema,
+  closing: scriptSchema.optional(),
 }).strict().superRefine((s, ctx) => {
   if (s.kind === 'recipe' && s.recipeId === undefined) ctx.addIssue({ code: 'custom', path: ['recipeId'], message: 'choose the recipe this segment cooks.' })
   if (s.kind !== 'recipe' && s.recipeId !== undefined) {
     ctx.addIssue({ code: 'custom', path: ['recipeId'], message: 'leave it out: only a recipe segment cooks a recipe.' })
+  }
+  if (s.kind !== 'recipe' && s.closing?.length) {
+    ctx.addIssue({ code: 'custom', path: ['closing'], message: 'leave it out: only a recipe segment has closing lines; write them in the script.' })
   }
 })
 
@@ -122,3 +131,9 @@ export const showSegmentsSchema = z.array(showSegmentSchema, { error: 'send the 
       seen.add(s.id)
     })
   })
+
+/** A segment id for a new segment: 8 letters and digits, unlikely to meet another in one episode. */
+export function newSegmentId(random: () => number = Math.random): string {
+  const alphabet = 'abcdefghijkmnpqrstuvwxyz23456789'
+  return Array.from({ length: 8 }, () => alphabet[Math.floor(random() * alphabet.length)]).join('')
+}

@@ -7,7 +7,7 @@ import type { z } from 'zod'
 import type { ShootCommandType } from '../../shared/types/shoot'
 import {
   inviteBodySchema, joinBodySchema, joinCodeBodySchema, loginBodySchema, resetRequestBodySchema,
-  roleBodySchema, signupBodySchema, switchStudioBodySchema,
+  memberBodySchema, signupBodySchema, switchStudioBodySchema,
 } from '../../shared/utils/account-schemas'
 import { parsePriceCsv } from '../../shared/utils/price-csv'
 import { episodeCreateSchema, episodeUpdateSchema, priceBodySchema, recipeCreateSchema, recipeUpdateSchema, studioSettingsSchema } from '../../shared/utils/recipe-schemas'
@@ -69,7 +69,7 @@ export const targets: Target[] = [
   json('studios/[studioId]/invites/index.post.ts', 'POST', (i) => `/api/studios/${i.studio}/invites`, () => ({ email: uniqueEmail('campaign'), role: 'viewer' }), inviteBodySchema),
   path('studios/[studioId]/invites/[inviteId].delete.ts', 'DELETE', (b, i) => `/api/studios/${i.studio}/invites/${b}`),
   path('studios/[studioId]/invites/[inviteId]/resend.post.ts', 'POST', (b, i) => `/api/studios/${i.studio}/invites/${b}/resend`),
-  json('studios/[studioId]/members/[userId].patch.ts', 'PATCH', (i) => `/api/studios/${i.studio}/members/2`, () => ({ role: 'viewer' }), roleBodySchema),
+  json('studios/[studioId]/members/[userId].patch.ts', 'PATCH', (i) => `/api/studios/${i.studio}/members/2`, () => ({ role: 'viewer' }), memberBodySchema),
   path('studios/[studioId]/members/[userId].delete.ts', 'DELETE', (b, i) => `/api/studios/${i.studio}/members/${b}`),
   json('studios/[studioId]/prices/index.post.ts', 'POST', (i) => `/api/studios/${i.studio}/prices`, () => ({ item: 'Campaign salt', packageSize: 1, packageUnit: 'kg', priceMinor: 65, currency: 'GBP' }), priceBodySchema),
   json('studios/[studioId]/prices/[priceId].patch.ts', 'PATCH', (i) => `/api/studios/${i.studio}/prices/${i.price}`, () => ({ item: 'Campaign salt', packageSize: 1, packageUnit: 'kg', priceMinor: 65, currency: 'GBP' }), priceBodySchema),

@@ -17,6 +17,8 @@ export class Membership extends Model<InferAttributes<Membership>, InferCreation
   declare userId: ForeignKey<number>
   declare studioId: ForeignKey<number>
   declare role: StudioRole
+  /** The member's reading pace on camera in words a minute; null for the default (shared/utils/show-runtime.ts). */
+  declare readingWpm: CreationOptional<number | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 }
@@ -52,7 +54,7 @@ const stamps = { createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE }
 
 export function initAccountModels(sequelize: Sequelize) {
   User.init({ id, name: DataTypes.STRING(80), email: DataTypes.STRING(254), passwordHash: DataTypes.STRING(255), sessionVersion: { type: DataTypes.INTEGER, defaultValue: 0 }, ...stamps }, { sequelize, tableName: 'users', underscored: true })
-  Membership.init({ id, role: DataTypes.STRING(16), ...stamps }, { sequelize, tableName: 'memberships', underscored: true })
+  Membership.init({ id, role: DataTypes.STRING(16), readingWpm: DataTypes.INTEGER, ...stamps }, { sequelize, tableName: 'memberships', underscored: true })
   Invite.init(
     {
       id, studioId: DataTypes.INTEGER, email: DataTypes.STRING(254), role: DataTypes.STRING(16), tokenHash: DataTypes.STRING(64),

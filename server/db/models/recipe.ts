@@ -1,7 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
 
 // JSON text columns: parsed on read, serialised on write.
-const json = (name: string, fallback: unknown) => ({
+export const json = (name: string, fallback: unknown) => ({
   type: DataTypes.TEXT,
   get(this: Model) {
     const raw = this.getDataValue(name) as string | null
