@@ -72,8 +72,11 @@ function cookTimes(episode: RunOrder, settings: Settings): { byKey: Map<string, 
   const recipeSegments = episode.segments.filter((s) => s.recipeId)
   try {
     const plan = planCook({ steps: input, kitchen: settings.kitchen })
-    const endMs = new Map(plan.steps.map((p) => [p.id, Math.round(p.end * 1000)]))
-    const byKey = cookShares(recipeSegments.map((s) => ({ id: s.id, stepEndsMs: s.steps.map((st) => endMs.get(String(st.id)) ?? 0) })))
+    const placed = new Map(plan.steps.map((p) => [p.id, { startMs: Math.round(p.start * 1000), endMs: Math.round(p.end * 1000) }]))
+    const byKey = cookShares(
+      recipeSegments.map((s) => ({ id: s.id, steps: s.steps.flatMap((st) => placed.get(String(st.id)) ?? []) })),
+      Math.round(plan.makespan * 1000),
+    )
     return { byKey, from: 'plan', problem: null }
   } catch (error) {
     if (!(error instanceof PlanError)) throw error

@@ -47,18 +47,23 @@ export function showRuntime(
 }
 
 /**
- * Each recipe segment's share of the cook plan's length, in run order: the time by which the segment
- * pushes the end of cooking further out (the latest end among its steps and those before it, less
- * the latest end before it). Recipes cooked one after another get their own length; recipes side by
- * side share the overlap, and the shares add up to the plan's makespan (when the plan starts at 0).
+ * Each recipe segment's share of the cook plan's length (the makespan), in proportion to its own span
+ * on the plan (its first step's start to its last step's end). Recipes cooked one after another get
+ * about their own length; recipes side by side share the overlap. The shares add up to the makespan
+ * exactly (the rounding remainder goes to the last segment with a span). Our own rule: no standard
+ * says how to split shared kitchen time between dishes.
  */
-export function cookShares(segments: readonly { id: string; stepEndsMs: readonly number[] }[]): Map<string, number> {
+export function cookShares(segments: readonly { id: string; steps: readonly { startMs: number; endMs: number }[] }[], makespanMs: number): Map<string, number> {
+  const spans = segments.map((s) => (s.steps.length ? Math.max(...s.steps.map((p) => p.endMs)) - Math.min(...s.steps.map((p) => p.startMs)) : 0))
+  const sum = spans.reduce((a, b) => a + b, 0)
   const out = new Map<string, number>()
-  let reached = 0
-  for (const s of segments) {
-    const end = Math.max(reached, ...s.stepEndsMs)
-    out.set(s.id, end - reached)
-    reached = end
+  if (sum <= 0) {
+    for (const s of segments) out.set(s.id, 0)
+    return out
   }
+  const shares = spans.map((span) => Math.round((makespanMs * span) / sum))
+  const last = spans.findLastIndex((span) => span > 0)
+  shares[last] = shares[last]! + makespanMs - shares.reduce((a, b) => a + b, 0)
+  segments.forEach((s, i) => out.set(s.id, shares[i]!))
   return out
 }

@@ -3,7 +3,7 @@
 // Voice and Speech's figure for the average rate of conversational English (about 150 wpm; cited
 // from memory). The small episode below is worked by hand.
 import { describe, expect, it } from 'vitest'
-import { readMsFor, showRuntime, SHOW_WPM_DEFAULT } from '../../shared/utils/show-runtime'
+import { readMsFor, showRuntime, SHOW_WPM_DEFAULT, cookShares } from '../../shared/utils/show-runtime'
 
 const words = (n: number) => Array.from({ length: n }, () => 'word').join(' ')
 
@@ -48,5 +48,36 @@ describe('showRuntime: a small episode worked by hand', () => {
     expect(showRuntime(episode).overMs).toBeNull()
     // At 120 wpm a word is 500 ms: 83 words = 41 500 ms, + 720 000.
     expect(showRuntime(episode, { wpm: 120 }).totalMs).toBe(761_500)
+  })
+})
+
+describe('cookShares: each recipe segment\'s part of the cook plan (our own proportional rule)', () => {
+  it('gives recipes cooked one after another their own lengths (worked by hand)', () => {
+    // Stew 0–30 min, bread 30–50 min: spans 30 and 20 of a 50-minute plan.
+    const shares = cookShares([
+      { id: 'stew', steps: [{ startMs: 0, endMs: 600_000 }, { startMs: 600_000, endMs: 1_800_000 }] },
+      { id: 'bread', steps: [{ startMs: 1_800_000, endMs: 3_000_000 }] },
+    ], 3_000_000)
+    expect(shares.get('stew')).toBe(1_800_000)
+    expect(shares.get('bread')).toBe(1_200_000)
+  })
+
+  it('splits an overlap in proportion to the spans and adds up to the makespan exactly', () => {
+    // Side by side in a 60-minute plan: spans 60, 30 and 10 minutes → 36, 18 and 6 minutes.
+    const shares = cookShares([
+      { id: 'a', steps: [{ startMs: 0, endMs: 3_600_000 }] },
+      { id: 'b', steps: [{ startMs: 600_000, endMs: 2_400_000 }] },
+      { id: 'c', steps: [{ startMs: 3_000_000, endMs: 3_600_000 }] },
+    ], 3_600_000)
+    expect([...shares.values()]).toEqual([2_160_000, 1_080_000, 360_000])
+    const odd = cookShares([{ id: 'x', steps: [{ startMs: 0, endMs: 1 }] }, { id: 'y', steps: [{ startMs: 0, endMs: 2 }] }], 1000)
+    expect([...odd.values()].reduce((a, b) => a + b, 0)).toBe(1000)
+  })
+
+  it('gives a recipe without steps no cook time', () => {
+    const shares = cookShares([{ id: 'empty', steps: [] }, { id: 'soup', steps: [{ startMs: 0, endMs: 60_000 }] }], 60_000)
+    expect(shares.get('empty')).toBe(0)
+    expect(shares.get('soup')).toBe(60_000)
+    expect(cookShares([{ id: 'none', steps: [] }], 0).get('none')).toBe(0)
   })
 })
