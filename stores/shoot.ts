@@ -124,6 +124,9 @@ export const useShootStore = defineStore('shoot', () => {
     return s && moved ? shootStepRefAt(s.runOrder, moved) : null
   })
   const nextStep = computed(() => (nextRef.value?.stepId ? steps.value[nextRef.value.stepId] ?? null : null))
+  /** The episode as a show (null for a shoot without one), and the show segment the cursor is on. */
+  const show = computed(() => snapshot.value?.show ?? null)
+  const currentShowSegment = computed(() => (currentSegment.value ? show.value?.segments[currentSegment.value.id] ?? null : null))
 
   /** Whether this screen's role may send a command type (the server decides again). */
   function can(type: ShootCommandType): boolean {
@@ -292,6 +295,10 @@ export const useShootStore = defineStore('shoot', () => {
     s.on('shoot:presence', (message) => {
       if (message.shootId === shootId.value) presence.value = { screens: message.screens }
     })
+    // A price, a recipe or the episode changed: the new script, live fields written again.
+    s.on('shoot:script', ({ shootId: id, ...script }) => {
+      if (id === shootId.value && snapshot.value) snapshot.value = { ...snapshot.value, ...script }
+    })
     window.addEventListener('offline', () => {
       browserOnline.value = false
       // The network is gone: drop the transport now rather than after the heartbeat times out, so
@@ -404,7 +411,7 @@ export const useShootStore = defineStore('shoot', () => {
   return {
     shootId, snapshot, seq, connection, browserOnline, offset, clockDelay, clockSampledAt, error, errorCode, pending, log, bound,
     presence, audibleWhileRolling, setAudibleWhileRolling, online, you, role, steps, serverState, state,
-    cursorRef, currentSegment, currentStep, nextRef, nextStep,
+    cursorRef, currentSegment, currentStep, nextRef, nextStep, show, currentShowSegment,
     can, serverNowMs, clearError, bind, prime, open, leave, command, resync, sampleClock,
   }
 })

@@ -9,7 +9,7 @@ import type { ShootConnection } from '../shoot/handlers'
 import { startTicker } from '../shoot/ticker'
 
 export default defineNitroPlugin((nitroApp) => {
-  const { io, handlers, store } = useShoot()
+  const { io, handlers, store, scriptsMayHaveChanged } = useShoot()
   const engine = new Engine({ pingInterval: 10_000, pingTimeout: 8_000, maxHttpBufferSize: 64 * 1024 })
   io.bind(engine)
 
@@ -78,6 +78,15 @@ export default defineNitroPlugin((nitroApp) => {
   }))
 
   const ticker = startTicker(handlers.engine)
+
+  // A write that may change what a shoot's screens read (prices, recipes, episodes, studio settings,
+  // crew paces) sends the open shoots their new script (useShoot's scriptsMayHaveChanged).
+  nitroApp.hooks.hook('afterResponse', (event) => {
+    const method = event.method
+    if (method === 'GET' || method === 'HEAD' || method === 'OPTIONS') return
+    if (getResponseStatus(event) >= 400) return
+    if (/^\/api\/(recipes|episodes|studios)\//.test(event.path)) scriptsMayHaveChanged()
+  })
 
   nitroApp.hooks.hook('close', async () => {
     ticker.stop()

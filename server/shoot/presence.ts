@@ -39,6 +39,10 @@ export function createPresence() {
       for (const shootId of left) this.leave(shootId, connectionId)
       return left
     },
+    /** The shoots with at least one screen on them now. */
+    open(): number[] {
+      return [...shoots.keys()]
+    },
     of(shootId: number): ShootPresence {
       return { screens: [...(shoots.get(shootId)?.values() ?? [])].map((s) => ({ ...s })) }
     },

@@ -25,7 +25,7 @@ export async function episodeView(e: Loaded) {
     segments: segments.map((s) => ({
       id: s.segKey, position: s.position, kind: s.kind as SegmentKind, recipeId: s.recipeId,
       title: s.title ?? defaultSegmentTitle(s.kind as SegmentKind, s.recipeId ? titles.get(s.recipeId) : null),
-      script: s.script, closing: s.closing,
+      script: s.script, closing: s.closing, shot: s.shot ?? '',
     })),
   }
 }
@@ -96,7 +96,7 @@ async function writeSegments(episodeId: number, segments: ShowSegment[]) {
     episodeId, segKey: s.id, position: i + 1, kind: s.kind, recipeId: s.recipeId ?? null,
     // A recipe segment titled as its recipe follows the recipe's title when it is renamed.
     title: s.kind === 'recipe' && (!s.title.trim() || s.title.trim() === titles.get(s.recipeId!)) ? null : s.title.trim(),
-    script: s.script, closing: s.kind === 'recipe' ? s.closing ?? [] : [],
+    script: s.script, closing: s.kind === 'recipe' ? s.closing ?? [] : [], shot: s.shot?.trim() || null,
   })))
 }
 
@@ -156,5 +156,5 @@ type SegmentView = Awaited<ReturnType<typeof episodeView>>['segments'][number]
 
 /** A stored segment as the run order is written. */
 function showSegmentOf(s: SegmentView): ShowSegment {
-  return { id: s.id, kind: s.kind, title: s.title, ...(s.recipeId ? { recipeId: s.recipeId } : {}), script: s.script, closing: s.closing }
+  return { id: s.id, kind: s.kind, title: s.title, ...(s.recipeId ? { recipeId: s.recipeId } : {}), script: s.script, closing: s.closing, shot: s.shot }
 }

@@ -16,9 +16,10 @@ function createLiveShoot() {
   const io = new Server<ClientToServerEvents, ServerToClientEvents>({ serveClient: false })
   const store = openShootStore(getDatabaseHandle()!.path, () => useDb())
   const script = createScriptCache()
+  const presence = createPresence()
   const handlers = createShootHandlers({
     store,
-    presence: createPresence(),
+    presence,
     script,
     authorize: (session, shootId) => authorizeSession(session, { shootId }, 'shoot.read'),
     broadcast: {
@@ -27,7 +28,27 @@ function createLiveShoot() {
       presence: (shootId, presence) => io.to(shootRoom(shootId)).emit('shoot:presence', { shootId, ...presence }),
     },
   })
-  return { io, store, script, handlers }
+  /**
+   * After a change that may reach a script (a price, a recipe, an episode, the studio's settings):
+   * every open shoot whose script changed gets the new one, so a cost line on an open prompter
+   * follows the price. Changes in a burst (an editor's autosave) are gathered into one pass.
+   */
+  let pending: ReturnType<typeof setTimeout> | null = null
+  async function refreshScripts() {
+    pending = null
+    for (const shootId of presence.open()) {
+      try {
+        const next = await script.changed(await handlers.engine.read(shootId))
+        if (next) io.to(shootRoom(shootId)).emit('shoot:script', { shootId, ...next })
+      } catch (error) {
+        console.error('[hobline] could not refresh the script of shoot', shootId, error)
+      }
+    }
+  }
+  const scriptsMayHaveChanged = () => {
+    pending ??= setTimeout(() => void refreshScripts(), 150)
+  }
+  return { io, store, script, handlers, scriptsMayHaveChanged }
 }
 
 let live: ReturnType<typeof createLiveShoot> | undefined

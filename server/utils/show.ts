@@ -25,6 +25,8 @@ export interface ShowSegmentView {
   kind: SegmentKind
   title: string
   recipeId: number | null
+  /** What the camera frames ('' for the kind's usual shot). */
+  shot: string
   script: RenderedScript
   closing: RenderedScript | null
   claims: ShowClaim[]
@@ -132,7 +134,7 @@ export async function episodeShow(episodeId: number) {
   const segments: ShowSegmentView[] = rendered.map(({ s, script, closing, claims }) => {
     const t = times.get(s.id)!
     return {
-      id: s.id, kind: s.kind, title: s.title, recipeId: s.recipeId, script, closing, claims,
+      id: s.id, kind: s.kind, title: s.title, recipeId: s.recipeId, shot: s.shot, script, closing, claims,
       missing: [...script.missing, ...(closing?.missing ?? [])],
       words: t.words, readMs: t.readMs, cookMs: t.cookMs, totalMs: t.totalMs,
     }

@@ -2,6 +2,8 @@
 import type { ShootEvent, ShootState } from './shoot'
 import type { Refusal } from '../utils/domain-error'
 import type { StepTextSegment } from '../utils/step-text'
+import type { RenderedScript } from '../utils/live-fields'
+import type { SegmentKind } from '../utils/show-segments'
 
 export interface ShootInfo {
   id: number
@@ -27,6 +29,40 @@ export interface ShootSnapshot {
   makespanMs: number | null
   /** Screens on the shoot now, for quiet on set: how many ring aloud while the camera rolls. */
   presence: ShootPresence
+  /** The episode as a show, its live fields written from the data now; null for a shoot without an episode. */
+  show: ShootShow | null
+}
+
+/** A segment of the show as the screens read it. */
+export interface ShootShowSegment {
+  kind: SegmentKind
+  title: string
+  recipeId: number | null
+  /** The opening words (a recipe segment's are said at its first step; see ShootShow.atSteps). */
+  script: RenderedScript
+  closing: RenderedScript | null
+  /** What the camera frames for a segment without steps. */
+  shot: string
+  /** Claims in plain words the data does not bear out: false, or not checkable. */
+  claims: Array<{ text: string; verdict: 'false' | 'unknown'; detail: string }>
+  missing: string[]
+  plannedMs: number
+}
+
+/** A recipe segment's opening or closing words, at the step where they are said. */
+export interface ShootShowLines { segmentId: string; title: string; script: RenderedScript }
+
+export interface ShootShow {
+  /** By the shoot's segment id (`segment-<id>`). */
+  segments: Record<string, ShootShowSegment>
+  /** A recipe's lines at the steps where the host says them, by step id: its opening at its first step in the run order, its closing at its last. */
+  atSteps: Record<string, { opening?: ShootShowLines; closing?: ShootShowLines }>
+  /** Planned time of each of the shoot's segments (the cooking side by side: its recipes' sum), by segment id. */
+  plannedMs: Record<string, number>
+  runtime: { totalMs: number; targetMs: number | null; overMs: number | null }
+  wpm: number
+  /** Lines that need a look: missing data and false claims. */
+  flags: number
 }
 
 export interface ShootStepDetails {
@@ -59,6 +95,10 @@ export interface ShootStepDetails {
   plannedEndMs: number | null
   /** The step's short name ("Pasta water"), for its timer and cues; null when it has none. */
   name: string | null
+  /** The step's photo (thumbnail and full size), shown small beside the script; null when it has none. */
+  photo: { url: string; thumbUrl: string } | null
+  /** At a recipe's last step: the recipe's photo, the plating reference. */
+  plating: { url: string; thumbUrl: string } | null
 }
 
 export interface ShootPresence {
@@ -94,5 +134,7 @@ export interface ClientToServerEvents {
 
 export interface ServerToClientEvents {
   'shoot:event': (message: ShootEventMessage) => void
+  /** The script changed under an open shoot (a price, a recipe, the episode): the new one. */
+  'shoot:script': (message: { shootId: number } & Pick<ShootSnapshot, 'steps' | 'units' | 'makespanMs' | 'show'>) => void
   'shoot:presence': (message: { shootId: number } & ShootPresence) => void
 }

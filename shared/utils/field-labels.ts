@@ -17,6 +17,7 @@ const ENTRY_NOUNS: Record<string, string> = {
   us: 'US allergen',
   readFromText: 'read-from-text entry',
   segments: 'Segment',
+  closing: 'closing line',
 }
 
 /** Top-level fields, as the forms label them (sign-up, settings, prices, episodes, the plan's kitchen, join codes). */
@@ -119,7 +120,7 @@ const INNER: Record<string, Record<string, string>> = {
   stepRef: { segment: 'recipe in the run order', step: 'step' },
   segments: {
     id: 'segment id', kind: 'kind of segment', title: 'title', recipeId: 'recipe', text: 'words', field: 'live field',
-    ingredientKey: 'ingredient', withOptional: 'with the optional ingredients', celsius: 'oven temperature',
+    ingredientKey: 'ingredient', withOptional: 'with the optional ingredients', celsius: 'oven temperature', shot: 'what to frame',
   },
 }
 

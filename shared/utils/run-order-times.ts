@@ -1,6 +1,7 @@
 // Planned against actual for the run order, for the control desk.
 // - Planned: a segment's span in the cook plan (first planned start to last planned end of its
-//   steps, kitchen time); without a plan, the sum of its steps' longest durations.
+//   steps, kitchen time); without a plan, the sum of its steps' longest durations; a segment
+//   without steps (intro, sponsor read, outro) its read time from the show (server/utils/show.ts).
 // - Actual: shoot-clock time the cursor spent in the segment, from each visit to the next (the
 //   current visit up to now), so going back to a segment adds to its time.
 // - Over/under: actual − planned (positive = over). The running figure adds the over/under of every
@@ -36,7 +37,9 @@ function plannedFor(stepIds: readonly string[], steps: StepTimes): number | null
   return durations.every((d) => d !== null) ? durations.reduce<number>((a, d) => a + d! * 1000, 0) : null
 }
 
-export function runOrderTimes(state: ShootState, steps: StepTimes, nowServerMs: number): { segments: SegmentTimes[]; runningDeltaMs: number } {
+export function runOrderTimes(
+  state: ShootState, steps: StepTimes, nowServerMs: number, showPlannedMs: Readonly<Record<string, number>> = {},
+): { segments: SegmentTimes[]; runningDeltaMs: number } {
   const shootNow = shootClockAt(state.clock, nowServerMs)
   const actual = new Array<number>(state.runOrder.length).fill(0)
   state.visits.forEach((v, i) => {
@@ -46,7 +49,7 @@ export function runOrderTimes(state: ShootState, steps: StepTimes, nowServerMs: 
   const visited = new Set(state.visits.map((v) => v.stepRef.segment))
   const current = state.status === 'ready' ? -1 : state.cursor.segment
   const segments = state.runOrder.map((seg, i): SegmentTimes => {
-    const plannedMs = plannedFor(seg.stepIds, steps)
+    const plannedMs = seg.stepIds.length ? plannedFor(seg.stepIds, steps) : showPlannedMs[seg.id] ?? null
     const st = i === current ? 'current' : visited.has(i) ? 'done' : 'to-come'
     return { id: seg.id, title: seg.title ?? `Segment ${i + 1}`, plannedMs, actualMs: actual[i]!, deltaMs: plannedMs === null || st === 'to-come' ? null : actual[i]! - plannedMs, state: st }
   })

@@ -11,7 +11,7 @@ import { PlanError, type KitchenProfile } from './plan-types'
 import { firstLivePlan } from './shoot-live-plan'
 
 export interface ScriptRecipe {
-  /** The episode segment's id (`segment-12`), its recipe and title, in the episode's order. */
+  /** The episode segment's id (`segment-12`), its recipe ('' for a segment without one) and title, in the episode's order. */
   segmentId: string
   recipeId: string
   title: string
@@ -68,9 +68,11 @@ export function shootRunOrderFromPlan(
   }
   const all = planOrder(recipes, planned, withSteps.flatMap((r) => r.stepIds))
   const segment: ShootSegment = { id: 'segment-cook', title: cookTitle(withSteps.map((r) => r.title)), stepIds: all }
-  // Recipes without steps keep a place of their own, before the cooking.
-  const empty = recipes.filter((r) => !r.stepIds.length).map((r) => ({ id: r.segmentId, title: r.title, stepIds: [] }))
-  return { runOrder: [...empty, segment], source: { kind: 'plan', sideBySide: true } }
+  // Segments without steps (intro, sponsor read, outro, a recipe with no steps) keep a place of their
+  // own: those before the first recipe with steps come before the cooking, the others after it, in order.
+  const first = recipes.indexOf(withSteps[0]!)
+  const talk = (list: ScriptRecipe[]) => list.filter((r) => !r.stepIds.length).map((r) => ({ id: r.segmentId, title: r.title, stepIds: [] }))
+  return { runOrder: [...talk(recipes.slice(0, first)), segment, ...talk(recipes.slice(first))], source: { kind: 'plan', sideBySide: true } }
 }
 
 /** "Lentil stew, flatbreads and squash": the titles of the recipes cooked side by side. */

@@ -32,15 +32,22 @@ export interface ShowSegment {
   script: ScriptPiece[]
   /** A recipe segment's closing lines, said at its last step (the cost line); empty for the others. */
   closing?: ScriptPiece[]
+  /** What the camera frames for a segment without steps ("Host to camera, mid shot"); empty for the kind's usual shot. */
+  shot?: string
 }
 
 /** What the editor calls each kind, and the title a new segment of that kind starts with. */
-export const SEGMENT_WORDS: Readonly<Record<SegmentKind, { label: string; defaultTitle: string }>> = {
-  intro: { label: 'Intro', defaultTitle: 'Welcome' },
-  recipe: { label: 'Recipe', defaultTitle: 'Recipe' },
-  sponsor: { label: 'Sponsor read', defaultTitle: 'A word from our sponsor' },
-  outro: { label: 'Outro', defaultTitle: 'Sign-off' },
-  free: { label: 'Free segment', defaultTitle: 'Segment' },
+export const SEGMENT_WORDS: Readonly<Record<SegmentKind, { label: string; defaultTitle: string; shot: string }>> = {
+  intro: { label: 'Intro', defaultTitle: 'Welcome', shot: 'Host to camera, mid shot, the finished dishes in the background' },
+  recipe: { label: 'Recipe', defaultTitle: 'Recipe', shot: 'The shot of each step' },
+  sponsor: { label: 'Sponsor read', defaultTitle: 'A word from our sponsor', shot: 'Host to camera, mid shot; the sponsor\'s product in frame' },
+  outro: { label: 'Outro', defaultTitle: 'Sign-off', shot: 'Wide on the host and every finished dish' },
+  free: { label: 'Free segment', defaultTitle: 'Segment', shot: 'Host to camera, mid shot' },
+}
+
+/** What the camera frames for a segment: its own shot when written, else the kind's usual one. */
+export function segmentShot(segment: { kind: SegmentKind; shot?: string | null }): string {
+  return segment.shot?.trim() || SEGMENT_WORDS[segment.kind].shot
 }
 
 /** The title a new segment starts with: a recipe segment takes its recipe's title when there is one. */
@@ -69,6 +76,7 @@ export const SEGMENT_MAX = 60
 export const SCRIPT_PIECES_MAX = 400
 export const SCRIPT_TEXT_MAX = 2000
 export const SEGMENT_TITLE_MAX = 120
+export const SHOT_MAX = 200
 
 const RECIPE = 'choose a recipe from the list (a whole number such as 12).'
 const recipeId = z.number({ error: typed(RECIPE) }).int(RECIPE).positive(RECIPE)
@@ -112,6 +120,7 @@ export const showSegmentSchema = z.object({
   recipeId: recipeId.optional(),
   script: scriptSchema,
   closing: scriptSchema.optional(),
+  shot: z.string({ error: typed('write it as text.') }).trim().max(SHOT_MAX, `write at most ${SHOT_MAX} characters.`).optional(),
 }).strict().superRefine((s, ctx) => {
   if (s.kind === 'recipe' && s.recipeId === undefined) ctx.addIssue({ code: 'custom', path: ['recipeId'], message: 'choose the recipe this segment cooks.' })
   if (s.kind !== 'recipe' && s.recipeId !== undefined) {

@@ -16,6 +16,9 @@ type PlanRoute = {
   steps: Array<{ stepId: number; start: number; end: number; handsOn: boolean; recipeId: number; durationMin: number | null; durationMax: number | null }>
 }
 
+/** Where the cooking is in a shoot's run order: the one segment with steps. */
+const cookIndex = (state: Pick<ShootState, 'runOrder'>) => state.runOrder.findIndex((s) => s.stepIds.length > 0)
+
 /** The plan's order of starts, as the host meets them: by start; a wait first at the same moment; then the episode's written order. */
 function planOrder(plan: PlanRoute, written: number[]): string[] {
   const pos = new Map(written.map((id, i) => [id, i]))
@@ -52,9 +55,10 @@ describe('the shoot runs the cook plan', async () => {
     const shoot = await producer.post(`/api/episodes/${id}/shoots`, { mode: 'rehearsal' })
     expect(shoot.status).toBe(201)
     const state = shoot.body.state as ShootState
-    // Side by side (the demo kitchen): one cooking segment, the plan's order of starts.
-    expect(state.runOrder).toHaveLength(1)
-    expect(state.runOrder[0]!.stepIds).toEqual(planOrder(plan, await writtenOrder(id)))
+    // Side by side (the demo kitchen): one cooking segment, the plan's order of starts; segments
+    // without steps (intro, sponsor read, outro) keep places of their own around it.
+    expect(state.runOrder.filter((s) => s.stepIds.length)).toHaveLength(1)
+    expect(state.runOrder[cookIndex(state)]!.stepIds).toEqual(planOrder(plan, await writtenOrder(id)))
     // The same plan: every step's planned start, and the makespan.
     expect(state.plan!.first!.makespanMs).toBe(Math.round(plan.makespan * 1000))
     for (const s of plan.steps) expect(state.plan!.first!.steps[String(s.stepId)]!.startMs).toBe(Math.round(s.start * 1000))
@@ -63,11 +67,15 @@ describe('the shoot runs the cook plan', async () => {
 
   it('the demo episode: the shoot\'s run order is the plan route\'s order of starts, one segment with the recipes interleaved', async () => {
     const { plan, shoot } = await agree(episodeId)
-    expect(shoot.state.runOrder[0]!.title).toBe('Smoky butter bean and tomato stew, Pan flatbreads with mint yoghurt and Roast squash with lentils and tahini')
+    // The demo show: the intro before the cooking; the sponsor read (between recipes in the episode) and the sign-off after it.
+    expect(shoot.state.runOrder.map((s) => s.title)).toEqual([
+      'Welcome', 'Smoky butter bean and tomato stew, Pan flatbreads with mint yoghurt and Roast squash with lentils and tahini',
+      'A word from Kettlebrook Pans', 'Sign-off',
+    ])
     expect(shoot.state.plan!.source).toEqual({ kind: 'plan', sideBySide: true })
     // Recipes interleave: not all of one recipe's steps before the next recipe's.
     const recipeOf = new Map(plan.steps.map((s) => [String(s.stepId), s.recipeId]))
-    const recipes = shoot.state.runOrder[0]!.stepIds.map((id) => recipeOf.get(id))
+    const recipes = shoot.state.runOrder[cookIndex(shoot.state)]!.stepIds.map((id) => recipeOf.get(id))
     const changes = recipes.filter((r, i) => i > 0 && r !== recipes[i - 1]).length
     expect(changes).toBeGreaterThan(2)
     // The screens' script carries the plan's times and each step's recipe.
@@ -113,6 +121,9 @@ describe('the shoot runs the cook plan', async () => {
     const camera = await connect(producer)
     sockets.push(host, camera)
     for (const s of [host, camera]) expect((await emitAck(s, 'shoot:join', { shootId })).ok).toBe(true)
+    // These checks are about the cooking: the shoot starts there, past the intro.
+    const ready = made.body.state as ShootState
+    expect((await emitAck(host, 'shoot:command', { shootId, type: 'step.jump', segment: cookIndex(ready), step: 0 })).ok).toBe(true)
     const send = async (command: object) => {
       const ack = await emitAck<{ ok: boolean; seq: number }>(host, 'shoot:command', { shootId, ...command })
       expect(ack.ok, JSON.stringify(ack)).toBe(true)
@@ -129,7 +140,9 @@ describe('the shoot runs the cook plan', async () => {
     expect(waits.length).toBeGreaterThan(2)
 
     let message = (await send({ type: 'shoot.start' })).mine
-    const order = message.state.runOrder[0]!.stepIds
+    const cook = cookIndex(message.state)
+    expect(message.state.cursor).toEqual({ segment: cook, step: 0 })
+    const order = message.state.runOrder[cook]!.stepIds
     const started = new Set<string>()
     const checkWaits = () => {
       for (const t of message.state.timers.filter((x) => x.origin === 'step' && !started.has(x.stepRef.stepId!))) {
@@ -149,7 +162,7 @@ describe('the shoot runs the cook plan', async () => {
     for (let i = 1; i < order.length; i++) {
       message = (await send({ type: 'step.next' })).mine
       checkWaits()
-      const here = message.state.runOrder[0]!.stepIds[message.state.cursor.step]!
+      const here = message.state.runOrder[cook]!.stepIds[message.state.cursor.step]!
       if (waits.some((w) => w.id === here)) expect(started.has(here)).toBe(true)
       if (message.state.cursor.step === order.length - 1) break
     }
@@ -161,7 +174,7 @@ describe('the shoot runs the cook plan', async () => {
     // 32×: three kitchen minutes are 5.6 real seconds.
     await emitAck(camera, 'shoot:command', { shootId, type: 'clock.speed', speed: 32 })
     let [mine] = await send({ type: 'shoot.start' })
-    const order = mine.state.runOrder[0]!.stepIds
+    const order = mine.state.runOrder[cookIndex(mine.state)]!.stepIds
     // Go to the first hands-on beat.
     const handsOn = new Set(first.steps.filter((s) => s.handsOn).map((s) => s.id))
     while (!handsOn.has(order[mine.state.cursor.step]!)) [mine] = await send({ type: 'step.next' })

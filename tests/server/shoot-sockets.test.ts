@@ -41,9 +41,15 @@ describe('live shoot engine', async () => {
     const snap = await emitAck<{ ok: boolean } & ShootSnapshot>(s, 'shoot:join', { shootId })
     expect(snap.ok).toBe(true)
     expect(snap.state.status).toBe('ready')
-    // The demo kitchen cooks the recipes side by side: one cooking segment in the plan's order (shoot-plan.test.ts).
-    expect(snap.state.runOrder.map((r) => r.title)).toEqual(['Smoky butter bean and tomato stew, Pan flatbreads with mint yoghurt and Roast squash with lentils and tahini'])
-    expect(snap.state.runOrder[0]!.stepIds).toHaveLength(16)
+    // The demo kitchen cooks the recipes side by side: one cooking segment in the plan's order
+    // (shoot-plan.test.ts), after the intro; the sponsor read and the sign-off follow it.
+    expect(snap.state.runOrder.map((r) => r.title)).toEqual([
+      'Welcome', 'Smoky butter bean and tomato stew, Pan flatbreads with mint yoghurt and Roast squash with lentils and tahini',
+      'A word from Kettlebrook Pans', 'Sign-off',
+    ])
+    expect(snap.state.runOrder.map((r) => r.stepIds.length)).toEqual([0, 16, 0, 0])
+    // The show: the intro's script with its live fields written from the data.
+    expect(snap.show!.segments['segment-intro']!.script.text).toContain('each for 4, each under £1.50 a serving')
     expect(Object.keys(snap.steps)).toHaveLength(16)
     expect(snap.you).toMatchObject({ kind: 'member', role: 'producer' })
     expect(Math.abs(snap.serverNow - Date.now())).toBeLessThan(1000)
@@ -156,7 +162,7 @@ describe('live shoot engine', async () => {
     await new Promise<void>((r) => h.once('connect', () => r()))
     const snap = await emitAck<ShootSnapshot>(h, 'shoot:join', { shootId })
     expect(snap.state.seq).toBe(missed.seq)
-    expect(snap.state.cursor).toEqual({ segment: 0, step: 2 })
+    expect(snap.state.cursor).toEqual({ segment: 1, step: 1 })
   })
 
   it('survives SIGKILL: clients resync, timers keep their deadlines, a timer that fell due while down fires, no accepted command is lost', async () => {

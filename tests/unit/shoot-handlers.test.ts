@@ -22,7 +22,7 @@ const RUN_ORDER = [
   { id: 'segment-1', title: 'Lentil stew', stepIds: ['11', '12'] },
   { id: 'segment-2', title: 'Flatbreads', stepIds: ['21'] },
 ]
-const EMPTY_SCRIPT: ShootScript = { steps: {}, units: 'metric', makespanMs: null }
+const EMPTY_SCRIPT: ShootScript = { steps: {}, units: 'metric', makespanMs: null, show: null }
 
 /** Sessions as the guard would read them: a member of studio 1 in a role, or nobody. */
 const session = (role: StudioRole | null, id = 1) =>

@@ -34,6 +34,8 @@ export class EpisodeSegment extends Model<InferAttributes<EpisodeSegment>, Infer
   declare script: CreationOptional<ScriptPiece[]>
   /** A recipe segment's closing lines, read at its last step. */
   declare closing: CreationOptional<ScriptPiece[]>
+  /** What the camera frames (segments without steps); null for the kind's usual shot. */
+  declare shot: CreationOptional<string | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 }
@@ -48,7 +50,7 @@ export function initEpisodeModels(sequelize: Sequelize) {
   EpisodeSegment.init(
     {
       id, episodeId: DataTypes.INTEGER, segKey: DataTypes.STRING(40), position: DataTypes.INTEGER, kind: { type: DataTypes.STRING(16), defaultValue: 'recipe' },
-      recipeId: DataTypes.INTEGER, title: DataTypes.STRING(160), script: json('script', []), closing: json('closing', []),
+      recipeId: DataTypes.INTEGER, title: DataTypes.STRING(160), script: json('script', []), closing: json('closing', []), shot: DataTypes.STRING(200),
       createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE,
     },
     { sequelize, tableName: 'episode_segments', underscored: true },
