@@ -16,6 +16,7 @@ import { segmentShot } from '../../shared/utils/show-segments'
 import { isDomainError } from '../../shared/utils/domain-error'
 import { allergenStateOf, euAllergenLabel, usAllergenLabel, type EuAllergenId, type UsAllergenId } from '../../shared/utils/allergens'
 import { findStepTokens } from '../../shared/utils/step-text'
+import { segmentsText } from '../../shared/utils/step-segments'
 import { cautionsFor, countryOfLocale, isCautionId } from '../../shared/utils/cautions'
 import type { ShootRow } from './store'
 
@@ -62,7 +63,9 @@ export async function buildShootScript(row: ShootRow): Promise<ShootScript> {
         durationMin: s.durationMin, durationMax: s.durationMax, cameraShot: s.cameraShot, cameraNote: s.cameraNote,
         cautions,
         cautionNotes: cautions.map((c) => (isCautionId(c) ? { id: c, label: CAUTIONS[c].label, text: CAUTIONS[c].text } : { id: c, label: c, text: c })),
-        script: s.script,
+        // The lines to say, their amounts written for the shoot's servings and units (never a raw {{key}}).
+        script: rendered.get(s.id)?.script.map(segmentsText) ?? s.script,
+        scriptSegments: rendered.get(s.id)?.script ?? s.script.map((text) => [{ text }]),
         segments: rendered.get(s.id)?.segments ?? [{ text: s.text }],
         ingredients: used.map((u) => ({ key: u.scaled.key, item: u.scaled.item, amount: u.scaled.text })),
         allergens,

@@ -33,8 +33,11 @@ export function scaleLoadedRecipe(recipe: RecipeView, settings: StudioSettings, 
       }
     }),
     steps: recipe.steps.map((step) => {
-      const rendered = renderStepText(step.text, { ...display, ingredients: draft.ingredients, fromServings: recipe.servings, toServings: target })
-      return { id: step.id, position: step.position, text: rendered.text, segments: rendered.segments, problems: rendered.problems }
+      const options = { ...display, ingredients: draft.ingredients, fromServings: recipe.servings, toServings: target }
+      const rendered = renderStepText(step.text, options)
+      // The lines to say on camera may name amounts too ("that's {{flour}} of flour"): written the same way.
+      const script = step.script.map((line) => renderStepText(line, options).segments)
+      return { id: step.id, position: step.position, text: rendered.text, segments: rendered.segments, problems: rendered.problems, script }
     }),
     factor,
   }

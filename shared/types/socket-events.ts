@@ -89,7 +89,10 @@ export interface ShootStepDetails {
   cautions: string[]
   /** The cautions' texts (shared/utils/cautions.ts), so a screen shows them without that table. */
   cautionNotes: Array<{ id: string; label: string; text: string }>
+  /** The lines to say, amounts written for the shoot (plain text). */
   script: string[]
+  /** The same lines as segments, so a screen can mark the amounts in them. */
+  scriptSegments?: StepTextSegment[][]
   /** Where the shoot's first plan put the step, in ms on the shoot clock; null when unplanned (the live plan is state.plan.live). */
   plannedStartMs: number | null
   plannedEndMs: number | null

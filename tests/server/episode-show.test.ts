@@ -12,7 +12,7 @@ type Segment = { id: string; kind: string; title: string; recipeId?: number | nu
 type ShowSegment = {
   id: string; kind: string; title: string; words: number; readMs: number; cookMs: number; totalMs: number; missing: string[]
   script: { text: string }; closing: { text: string; parts: { text: string; missing?: string }[] } | null
-  claims: { text: string; verdict: string; detail: string }[]
+  claims: { text: string; kind: string; verdict: string; detail: string }[]
 }
 
 describe('the episode as a show', async () => {
@@ -154,7 +154,8 @@ describe('the episode as a show', async () => {
     const beans = prices.find((p) => p.item === 'Butter beans')!
     const { id: _id, ...rest } = beans
     const changed = await producer.patch(`/api/studios/${studioId}/prices/${beans.id}`, {
-      item: rest.item, packageSize: rest.packageSize, packageUnit: rest.packageUnit, currency: rest.currency, shop: rest.shop, boughtOn: rest.boughtOn, priceMinor: 140,
+      item: rest.item, packageSize: rest.packageSize, packageUnit: rest.packageUnit, currency: rest.currency, shop: rest.shop, boughtOn: rest.boughtOn,
+      priceMinor: 140,
     })
     expect(changed.status, JSON.stringify(changed.body)).toBe(200)
     const pushed = await waitFor(() => scripts.at(-1))
@@ -167,7 +168,8 @@ describe('the episode as a show', async () => {
     expect((await producer.delete(`/api/studios/${studioId}/prices/${parsley.id}`)).status).toBeLessThan(300)
     const later = await waitFor(() => (scripts.length >= 2 ? scripts.at(-1) : undefined))
     const closing = later.show!.segments['segment-stew']!.closing!
-    expect(closing.text).toBe('That is the stew: £1.27 a serving, or [cost unknown: Parsley has no price] with the parsley.')
+    const placeholder = '[cost unknown: Parsley has no price]'
+    expect(closing.text).toBe(`That is the stew: £1.27 a serving, or ${placeholder} with the parsley.`)
     expect(closing.parts.find((p) => p.missing)?.missing).toBe('Parsley has no price')
     expect(later.show!.segments['segment-stew']!.missing).toEqual(['Parsley has no price'])
     expect(closing.text).not.toMatch(/[{}]|"kind"/)
