@@ -105,7 +105,7 @@ describe.skipIf(!chromiumAvailable())('the episode builder, in the browser', asy
     await page.keyboard.type(' people, each under 10p a serving. The stew comes to ')
     await card.getByRole('button', { name: 'Insert a live field in Script of Welcome' }).click()
     await dialog.getByRole('radio', { name: /^Cost per serving/ }).check()
-    await dialog.getByLabel('Recipe').selectOption({ label: STEW })
+    await dialog.getByLabel('Recipe', { exact: true }).selectOption({ label: STEW })
     await dialog.getByRole('button', { name: 'Insert' }).click()
     await card.locator('[data-chip]').filter({ hasText: `Cost per serving: ${STEW}` }).waitFor()
     await page.keyboard.type(' a serving.')
