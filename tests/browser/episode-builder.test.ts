@@ -167,6 +167,67 @@ describe.skipIf(!chromiumAvailable())('the episode builder, in the browser', asy
     await page.close()
   })
 
+  it('says a refusal in words and keeps the draft; someone else\'s save: load theirs or keep mine; a host\'s reading pace times the scripts', async () => {
+    const page = await createPage(undefined, { viewport: { width: 1280, height: 900 } })
+    const errors = consoleErrorsOf(page)
+    await signInOnPage(page, 'producer@brackenford.test')
+    const created = await page.request.post(url('/api/studios/1/episodes'), { data: { title: 'Clash trial' }, headers: sameOrigin() })
+    const { id } = await created.json() as { id: number }
+    const stored = () => get<Stored & { title: string; servings: number | null; hostId: number | null }>(page, `/api/episodes/${id}`)
+    await page.goto(url(`/episodes/${id}`), { waitUntil: 'networkidle' })
+    await allSaved(page)
+
+    // Servings as words: refused, said beside the box and in the saved state; fixed, saved.
+    await page.getByLabel('Servings on set').fill('lots')
+    const status = page.getByTestId('save-status')
+    await page.locator('[data-testid="save-status"][data-state="failed"]').waitFor()
+    await expect(status.innerText()).resolves.toMatch(/Not saved: Servings on set: write a whole number of servings/)
+    await page.getByText(/^Servings on set: write a whole number of servings/).waitFor()
+    expect((await stored()).servings).toBeNull()
+    await page.getByLabel('Servings on set').fill('6')
+    await allSaved(page)
+    expect((await stored()).servings).toBe(6)
+
+    // Someone else saves first: the banner, nothing lost; their version loaded.
+    const theirs = async (title: string) => {
+      const current = await stored()
+      const r = await page.request.patch(url(`/api/episodes/${id}`), { data: { version: current.version, title }, headers: sameOrigin() })
+      expect(r.status()).toBe(200)
+    }
+    await theirs('Their title')
+    await page.getByLabel('Episode title').fill('My title')
+    const banner = page.getByTestId('conflict-banner')
+    await banner.getByText('Their version').waitFor()
+    await expect(status.innerText()).resolves.toMatch(/^\W*Not saved: Someone else saved this episode/)
+    expect(await page.getByLabel('Episode title').inputValue()).toBe('My title')
+    await banner.getByRole('button', { name: 'Load theirs (discard mine)' }).click()
+    await allSaved(page)
+    expect(await page.getByLabel('Episode title').inputValue()).toBe('Their title')
+    // Again, and this time mine is kept over theirs.
+    await theirs('Their second title')
+    await page.getByLabel('Episode title').fill('My second title')
+    await banner.getByRole('button', { name: 'Keep mine (save over theirs)' }).click()
+    await allSaved(page)
+    expect((await stored()).title).toBe('My second title')
+
+    // The host's reading pace, set on the crew page, times the scripts once they present.
+    const { members } = await get<{ members: { userId: number; name: string; role: string; readingWpm: number | null }[] }>(page, '/api/studios/1/members')
+    const host = members.find((m) => m.role === 'host')!
+    await page.goto(url('/studios/1/crew'), { waitUntil: 'networkidle' })
+    await page.getByLabel(`Reading pace of ${host.name} (words a minute)`).fill('175')
+    await page.getByLabel(`Reading pace of ${host.name} (words a minute)`).press('Tab')
+    await expect.poll(async () => (await get<{ members: typeof members }>(page, '/api/studios/1/members'))
+      .members.find((m) => m.userId === host.userId)!.readingWpm).toBe(175)
+    expect(await axeViolations(page)).toEqual([])
+    await page.goto(url(`/episodes/${id}`), { waitUntil: 'networkidle' })
+    await page.getByLabel('Presenter').selectOption({ label: `${host.name} (175 words a minute)` })
+    await allSaved(page)
+    expect((await stored()).hostId).toBe(host.userId)
+    await expect.poll(() => page.getByTestId('pace').innerText()).toContain(`${host.name}'s reading pace: 175 words a minute`)
+    expect(errors.filter((e) => !/status of (400|409)/.test(e))).toEqual([])
+    await page.close()
+  })
+
   it('opens the demo episode as a full show; a host reads it without the editing controls', async () => {
     const page = await createPage(undefined, { viewport: { width: 1280, height: 900 } })
     const errors = consoleErrorsOf(page)
