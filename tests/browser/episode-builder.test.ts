@@ -216,6 +216,7 @@ describe.skipIf(!chromiumAvailable())('the episode builder, in the browser', asy
     await page.goto(url('/studios/1/crew'), { waitUntil: 'networkidle' })
     await page.getByLabel(`Reading pace of ${host.name} (words a minute)`).fill('175')
     await page.getByLabel(`Reading pace of ${host.name} (words a minute)`).press('Tab')
+    await page.getByText(`Reading pace of ${host.name}: 175 words a minute.`).waitFor()
     await expect.poll(async () => (await get<{ members: typeof members }>(page, '/api/studios/1/members'))
       .members.find((m) => m.userId === host.userId)!.readingWpm).toBe(175)
     expect(await axeViolations(page)).toEqual([])
