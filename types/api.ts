@@ -24,6 +24,7 @@ export type MeAnswer = ApiAnswer<'/api/me'>
 export type MembershipInfo = MeAnswer['memberships'][number]
 
 export type EpisodeView = ApiAnswer<'/api/episodes/:id'>
+export type EpisodeShowView = ApiAnswer<'/api/episodes/:id/show'>
 export type EpisodeRow = ApiAnswer<'/api/studios/:studioId/episodes'>['episodes'][number]
 export type PlanView = ApiAnswer<'/api/episodes/:id/plan'>
 export type PlanStepView = PlanView['steps'][number]

@@ -40,10 +40,12 @@ describe.skipIf(!chromiumAvailable())('cook plan timeline in the browser', async
     expect(demo, 'the seeded demo episode').toBeTruthy()
     expect(demo!.recipes.length).toBeGreaterThan(1)
 
-    // The episode page: its recipes in order and the way to the plan.
+    // The episode page: its run order (the recipes among its segments) and the way to the plan.
     await page.goto(url(`/episodes/${demo!.id}`), { waitUntil: 'networkidle' })
     await expect(page.getByRole('heading', { level: 1 }).textContent()).resolves.toBe('Thursday supper special')
-    expect(await page.getByRole('button', { name: /^Move .* down$/ }).count()).toBe(demo!.recipes.length)
+    const full = await page.evaluate((id) => fetch(`/api/episodes/${id}`).then((r) => r.json()), demo!.id) as { segments: { kind: string }[] }
+    expect(full.segments.filter((s) => s.kind === 'recipe').length).toBe(demo!.recipes.length)
+    expect(await page.getByRole('button', { name: /^Move .* down$/ }).count()).toBe(full.segments.length)
     expect(await axeViolations(page)).toEqual([])
     await page.getByRole('link', { name: 'Open the cook plan' }).click()
     await page.waitForURL(new RegExp(`/episodes/${demo!.id}/plan$`))
@@ -173,9 +175,9 @@ describe.skipIf(!chromiumAvailable())('cook plan timeline in the browser', async
     await page.waitForURL(/\/episodes\/\d+$/)
     const id = Number(new URL(page.url()).pathname.split('/').at(-1))
     await page.getByRole('heading', { level: 1, name: 'Sunday lunch trial' }).waitFor()
+    // The builder saves each change by itself.
     await page.getByRole('button', { name: 'Move Pan flatbreads with mint yoghurt down' }).click()
-    await page.getByRole('button', { name: 'Save the episode' }).click()
-    await page.getByText('Saved (version 2).').waitFor()
+    await page.locator('[data-testid="save-status"][data-state="saved"]').waitFor()
     const saved = await page.evaluate((e) => fetch(`/api/episodes/${e}`).then((r) => r.json()), id) as { version: number; segments: { title: string }[] }
     expect(saved.version).toBe(2)
     expect(saved.segments.map((s) => s.title)).toEqual(['Smoky butter bean and tomato stew', 'Pan flatbreads with mint yoghurt'])
@@ -192,7 +194,8 @@ describe.skipIf(!chromiumAvailable())('cook plan timeline in the browser', async
     // A host reads the run order but does not change it.
     await page.goto(url(`/episodes/${demo.id}`), { waitUntil: 'networkidle' })
     expect(await page.getByRole('button', { name: 'Save the episode' }).count()).toBe(0)
-    await page.getByRole('heading', { name: 'Recipes in run order' }).waitFor()
+    await page.getByRole('heading', { name: 'Run order' }).waitFor()
+    expect(await page.getByRole('button', { name: 'Add the segment' }).count()).toBe(0)
     expect(await axeViolations(page)).toEqual([])
 
     await page.goto(url(`/episodes/${demo.id}/plan`), { waitUntil: 'networkidle' })
