@@ -18,11 +18,11 @@ export interface EpisodeDraft {
 
 export type SaveState = 'saved' | 'waiting' | 'saving' | 'failed'
 
-/** The run order as the PATCH takes it: recipe and closing lines only on recipe segments. */
+/** The run order as the PATCH takes it: recipe and closing lines only on recipe segments, what to frame on the others. */
 export function segmentsOf(e: Pick<EpisodeView, 'segments'>): ShowSegment[] {
   return [...e.segments].sort((a, b) => a.position - b.position).map((s) => ({
     id: s.id, kind: s.kind, title: s.title, script: s.script as ShowSegment['script'],
-    ...(s.kind === 'recipe' ? { recipeId: s.recipeId ?? undefined, closing: s.closing as ShowSegment['script'] } : {}),
+    ...(s.kind === 'recipe' ? { recipeId: s.recipeId ?? undefined, closing: s.closing as ShowSegment['script'] } : { shot: s.shot ?? '' }),
   }))
 }
 

@@ -9,7 +9,7 @@ import type { Page } from 'playwright-core'
 import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { chromiumAvailable } from '../support/chromium'
-import { sameOrigin, signInOnPage } from '../support/page'
+import { sameOrigin, signInOnPage, startAtCooking } from '../support/page'
 
 const LAPTOP = { width: 1280, height: 800 }
 const TABLET = { width: 1024, height: 768 }
@@ -81,6 +81,8 @@ describe.skipIf(!chromiumAvailable())('no screen breaks the content security pol
     const created = await producer.page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' }, headers: sameOrigin() })
     expect(created.ok()).toBe(true)
     const shootId: number = (await created.json()).shoot.id
+    // The beats of the cooking: the shoot starts there, past the demo show's intro.
+    await startAtCooking(producer.page, shootId)
     await visit(producer.page, `/shoots/${shootId}/desk`)
     await ready(producer.page)
     const codes: string[] = []

@@ -62,8 +62,12 @@ describe.skipIf(!chromiumAvailable())('the control desk\'s live cook plan', asyn
     await expect(page.getByTestId('desk-collision').first().textContent()).resolves.toContain(plan.live!.collisions[0]!.text)
     await expect(page.locator(`[data-testid="desk-bar"][data-step="${plan.live!.collisions[0]!.stepId}"]`).getAttribute('data-collision')).resolves.toBe('true')
 
-    // The first beat is a hands-on step the first plan ends at 10:00.
-    const firstId = before.runOrder[0]!.stepIds[0]!
+    // The cooking's first beat is a hands-on step the first plan ends at 10:00; the shoot starts
+    // there, past the intro (the demo show: intro, the cooking, sponsor read, sign-off).
+    const cook = before.runOrder.findIndex((s) => s.stepIds.length > 0)
+    expect(before.runOrder.map((s) => s.stepIds.length > 0)).toEqual([false, true, false, false])
+    await command({ type: 'step.jump', segment: cook, step: 0 })
+    const firstId = before.runOrder[cook]!.stepIds[0]!
     expect(plan.steps.find((s) => s.id === firstId)!.handsOn).toBe(true)
     const plannedEnd = plan.first!.steps[firstId]!.endMs
     expect(plannedEnd).toBe(10 * MIN)

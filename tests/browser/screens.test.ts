@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { CHROMIUM_ARGS, CHROMIUM_PATH, chromiumAvailable } from '../support/chromium'
-import { DEMO_PASSWORD, sameOrigin, screenshot, signInOnPage, startTimerOnPage } from '../support/page'
+import { DEMO_PASSWORD, sameOrigin, screenshot, signInOnPage, startAtCooking, startTimerOnPage } from '../support/page'
 import type { ShootSnapshot } from '../../shared/types/socket-events'
 import { stepTimerLabel } from '../../shared/utils/key-map'
 
@@ -71,6 +71,8 @@ describe.skipIf(!chromiumAvailable())('prompter, cue screen and control desk on 
     await signInOnPage(desk.page, 'producer@brackenford.test')
     const created = await desk.page.request.post(url('/api/episodes/1/shoots'), { data: { mode: 'rehearsal' }, headers: sameOrigin() })
     const shootId: number = (await created.json()).shoot.id
+    // The beats of the cooking: the shoot starts there, past the demo show's intro.
+    await startAtCooking(desk.page, shootId)
     await desk.page.goto(url(`/shoots/${shootId}/desk`), { waitUntil: 'networkidle' })
     await ready(desk.page)
 

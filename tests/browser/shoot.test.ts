@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
-import { consoleErrorsOf, sameOrigin, screenshot, signInOnPage, startTimerOnPage } from '../support/page'
+import { consoleErrorsOf, sameOrigin, screenshot, signInOnPage, startAtCooking, startTimerOnPage } from '../support/page'
 
 const SKEW_MS = 10 * 60_000
 const OFFLINE_MESSAGE = 'Offline: this was not sent. Wait for the connection to come back.'
@@ -69,6 +69,8 @@ describe.skipIf(!chromiumAvailable())('the live shoot in two browsers', async ()
     const created = await producer.page.request.post(url(`/api/episodes/${episodes.episodes[0].id}/shoots`), { data: { mode: 'rehearsal' }, headers: sameOrigin() })
     expect(created.status()).toBe(201)
     const shootId: number = (await created.json()).shoot.id
+    // The beats of the cooking: the shoot starts there, past the demo show's intro.
+    await startAtCooking(producer.page, shootId)
     const path = `/shoots/${shootId}`
 
     await producer.page.goto(url(path))

@@ -73,3 +73,15 @@ export async function screenshot(page: Page, name: string) {
   await page.screenshot({ path, fullPage: true })
   return path
 }
+
+/**
+ * Puts a new shoot of the demo episode at the start of its cooking (the one segment with steps),
+ * past the intro, as the tests about the cooking's beats expect; returns that segment's index.
+ */
+export async function startAtCooking(page: Page, shootId: number): Promise<number> {
+  const shoot = await (await page.request.get(url(`/api/shoots/${shootId}`))).json()
+  const cook = (shoot.state.runOrder as { stepIds: string[] }[]).findIndex((s) => s.stepIds.length > 0)
+  const r = await page.request.post(url(`/api/shoots/${shootId}/commands`), { data: { type: 'step.jump', segment: cook, step: 0 }, headers: sameOrigin() })
+  if (r.status() !== 200) throw new Error(`could not move the shoot to its cooking: ${await r.text()}`)
+  return cook
+}
