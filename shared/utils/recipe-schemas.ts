@@ -10,7 +10,7 @@ import { STEP_NAME_MAX } from './step-name'
 import { isTimeZone } from './time-zone'
 import { UNIT_IDS, type UnitId } from './units'
 import { typed } from './input-words'
-import { showSegmentsSchema } from './show-segments'
+import { showSegmentsSchema } from './show-segment-schemas'
 
 const text = (max: number) => z.string({ error: typed('write it as text.') }).trim().max(max, `write at most ${max} characters.`)
 const optionalText = (max: number) => text(max).nullable().optional().transform((v) => (v ? v : null))

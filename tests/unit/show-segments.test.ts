@@ -3,8 +3,9 @@
 import { describe, expect, it } from 'vitest'
 import { checkInput } from '../../shared/utils/input-words'
 import {
-  defaultSegmentTitle, moveSegment, scriptPlainText, SEGMENT_KINDS, SEGMENT_WORDS, showSegmentSchema, showSegmentsSchema, type ShowSegment,
+  defaultSegmentTitle, moveSegment, scriptPlainText, SEGMENT_KINDS, SEGMENT_WORDS, type ShowSegment,
 } from '../../shared/utils/show-segments'
+import { showSegmentSchema, showSegmentsSchema } from '../../shared/utils/show-segment-schemas'
 
 const seg = (id: string, kind: ShowSegment['kind'] = 'free', extra: Partial<ShowSegment> = {}): ShowSegment =>
   ({ id, kind, title: SEGMENT_WORDS[kind].defaultTitle, script: [], ...extra })
