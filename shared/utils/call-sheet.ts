@@ -130,7 +130,7 @@ function equipment(input: CallSheetInput, cautions: Set<CautionId>): string[] {
     out.push(`Hob: ${plural(k.burners, 'burner')} in the kitchen${using}`)
   }
   if (stations.has('oven')) {
-    const using = input.peak ? `, the plan uses up to ${input.peak.oven} at once` : ''
+    const using = input.peak ? `, the plan uses up to ${plural(input.peak.oven, 'dish', 'dishes')} at once` : ''
     out.push(`Oven: ${plural(k.ovens, 'oven')}, ${plural(k.racksPerOven, 'dish', 'dishes')} each${using}`)
   }
   if (stations.has('counter')) out.push('Counter space for prep')
@@ -172,7 +172,8 @@ export function buildCallSheet(input: CallSheetInput): CallSheet {
   const runOrder = input.segments.map((s) => {
     const startMin = Math.round(elapsedMs / 60_000)
     elapsedMs += Math.max(0, s.plannedMs)
-    return { id: s.id, title: s.title, kind: SEGMENT_WORDS[s.kind]?.label ?? s.kind, startMin, start: callTime ? addMinutes(callTime, startMin) : null, plannedMs: s.plannedMs }
+    const kind = SEGMENT_WORDS[s.kind]?.label ?? s.kind
+    return { id: s.id, title: s.title, kind, startMin, start: callTime ? addMinutes(callTime, startMin) : null, plannedMs: s.plannedMs }
   })
   const plannedMs = elapsedMs
   const cautions = new Set(input.steps.flatMap((s) => s.cautions).filter(isCautionId))

@@ -82,7 +82,7 @@ describe('call sheet', () => {
     const sheet = buildCallSheet(small())
     expect(sheet.equipment).toEqual([
       'Hob: 4 burners in the kitchen, the plan uses up to 2 at once',
-      'Oven: 1 oven, 2 dishes each, the plan uses up to 1 at once',
+      'Oven: 1 oven, 2 dishes each, the plan uses up to 1 dish at once',
       'Counter space for prep',
       'Sharp knives and boards on damp cloths',
       'Large pans for boiling, and a colander in the sink',
