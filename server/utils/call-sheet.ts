@@ -7,6 +7,7 @@ import { CallSheet, CallSheetSend, RecipeIngredient } from '../db/models'
 import { buildCallSheet, callSheetChanges, callSheetSnapshot, peakUse, type CallSheetSnapshot } from '../../shared/utils/call-sheet'
 import type { CallSheetBody } from '../../shared/utils/call-sheet-schema'
 import { DomainError } from '../../shared/utils/domain-error'
+import { dateTimeInZone } from '../../shared/utils/time-zone'
 import { planCook } from '../../shared/utils/plan'
 import { PlanError } from '../../shared/utils/plan-types'
 import { callSheetEvent, callSheetMail } from '../mail/call-sheet-mail'
@@ -74,7 +75,8 @@ export async function loadCallSheet(episodeId: number) {
     /** What changed since the last send, one line each; [] when never sent or unchanged. */
     changes: last ? callSheetChanges(last.snapshot, snapshot) : [],
     sends: sends.map((s) => ({
-      id: s.id, sentAt: s.sentAt.toISOString(), sentByName: s.sentByName, recipients: s.recipients, changes: s.changes, hash: s.hash,
+      id: s.id, sentAt: s.sentAt.toISOString(), sentText: dateTimeInZone(s.sentAt, settings.locale, settings.timeZone),
+      sentByName: s.sentByName, recipients: s.recipients, changes: s.changes, hash: s.hash,
     })),
   }
 }

@@ -156,7 +156,7 @@ function safety(input: CallSheetInput, cautions: Set<CautionId>, onSet: { eu: st
   if (names.length || cautions.has('allergen')) {
     notes.push({
       id: 'allergen', label: 'Allergens on set',
-      text: `${names.length ? `On set: ${[...new Set(onSet.eu.map((n) => n.split(' (')[0]!))].join(', ')}. ` : ''}Tell the crew and any tasters, keep boards and spoons apart, `
+      text: `Allergens on set${names.length ? `: ${[...new Set(onSet.eu.map((n) => n.split(' (')[0]!))].join(', ')}` : ''}. Tell the crew and any tasters, keep boards and spoons apart, `
         + 'and check the labels: products change. Follow your local food-safety rules.',
     })
   }

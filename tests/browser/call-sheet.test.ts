@@ -1,5 +1,5 @@
 // The call sheet in the browser: the producer opens it from the episode page, moves the call time
-// with the form and sees the run order's starts follow; printed, on A4 and on US Letter, every section
+// with the form and sees the run order's starts follow, sends it, and after a change sees what changed; printed, on A4 and on US Letter, every section
 // fits the printable width, and the PDF (turned into images by poppler's pdftoppm, its text read by
 // pdftotext) holds every crew name and every segment title.
 import { execFileSync } from 'node:child_process'
@@ -12,7 +12,7 @@ import { demoCrew } from '../../server/db/demo'
 import { useBuiltApp } from '../support/app'
 import { axeViolations } from '../support/axe'
 import { chromiumAvailable } from '../support/chromium'
-import { artifactsDir, consoleErrorsOf, openPage, signInOnPage } from '../support/page'
+import { artifactsDir, consoleErrorsOf, openPage, screenshot, signInOnPage } from '../support/page'
 
 // Paper sizes (ISO 216 A4: 210 × 297 mm; ANSI Letter: 8.5 × 11 in) less the sheet's 12 mm margins
 // on each side, in CSS pixels (96 to the inch, 25.4 mm to the inch).
@@ -64,7 +64,7 @@ describe.skipIf(!chromiumAvailable())('call sheet in the browser', async () => {
     expect(first[0]).toBe('08:30')
 
     // The producer moves the call to 08:45: every start moves by 15 minutes.
-    await page.getByLabel('Call time').fill('08:45')
+    await page.getByRole('textbox', { name: 'Call time' }).fill('08:45')
     await page.getByRole('button', { name: 'Save the call sheet' }).click()
     await page.getByRole('status').filter({ hasText: 'Saved.' }).waitFor()
     const moved = (t: string) => {
@@ -73,6 +73,16 @@ describe.skipIf(!chromiumAvailable())('call sheet in the browser', async () => {
       return `${String(Math.floor(total / 60)).padStart(2, '0')}:${String(total % 60).padStart(2, '0')}`
     }
     await expect.poll(starts).toEqual(first.map(moved))
+
+    // Sent to the crew; then the call moves again, and the page says what changed before the next send.
+    await page.getByRole('button', { name: 'Send to the crew' }).click()
+    await page.getByRole('status').filter({ hasText: 'Sent to 4 crew members.' }).waitFor()
+    await page.getByRole('textbox', { name: 'Call time' }).fill('09:00')
+    await page.getByRole('button', { name: 'Save the call sheet' }).click()
+    await expect.poll(() => page.getByTestId('call-sheet-changes').locator('li').allTextContents()).toEqual(['Call time: 08:45 → 09:00'])
+    expect(await page.getByRole('button', { name: 'Send again to the crew' }).isVisible()).toBe(true)
+    expect(await axeViolations(page)).toEqual([])
+    await screenshot(page, 'call-sheet')
 
     // Printed: the form and the send box drop out, every section keeps inside the printable width.
     const segments = await page.locator('[data-run-row] td:nth-child(2)').allTextContents()
@@ -86,10 +96,13 @@ describe.skipIf(!chromiumAvailable())('call sheet in the browser', async () => {
         expect(b.overflow, `${b.what} on ${format}`).toBeLessThanOrEqual(0)
       }
       expect(await page.getByRole('button', { name: 'Save the call sheet' }).isVisible()).toBe(false)
-      expect(await page.getByRole('button', { name: 'Send to the crew' }).isVisible()).toBe(false)
+      expect(await page.getByTestId('call-sheet-send').isVisible()).toBe(false)
       const pdf = pdfPages(await page.pdf({ format, printBackground: true }), `call-sheet-${format.toLowerCase()}`)
-      // PDF points: A4 is 595 × 842 pt, Letter 612 × 792 pt (1 pt = 1/72 in).
-      expect([Math.round(pdf.widthPt), Math.round(pdf.heightPt)]).toEqual(format === 'A4' ? [595, 842] : [612, 792])
+      // PDF points (1 pt = 1/72 in): A4 is 595.28 × 841.89 pt, Letter 612 × 792 pt; Chromium rounds the page to its
+      // own units, so within 2 pt.
+      const [w, h] = format === 'A4' ? [595.28, 841.89] : [612, 792]
+      expect(Math.abs(pdf.widthPt - w), `page width on ${format}`).toBeLessThanOrEqual(2)
+      expect(Math.abs(pdf.heightPt - h), `page height on ${format}`).toBeLessThanOrEqual(2)
       expect(pdf.pages).toBeGreaterThanOrEqual(1)
       expect(pdf.pages).toBeLessThanOrEqual(3)
       for (const c of demoCrew) {

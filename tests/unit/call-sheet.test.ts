@@ -108,7 +108,7 @@ describe('call sheet', () => {
     // UK studio: the UK's 63 °C first (Food Safety and Hygiene (England) Regulations 2013, cited in cautions.ts).
     expect(warm.text).toMatch(/^Food kept warm\. UK food hygiene rules: hold hot food at 63 °C or above/)
     expect(warm.text).toContain('Follow your local food-safety rules.')
-    expect(sheet.safety.find((s) => s.id === 'allergen')!.text).toMatch(/^On set: Cereals containing gluten, Milk\. /)
+    expect(sheet.safety.find((s) => s.id === 'allergen')!.text).toMatch(/^Allergens on set: Cereals containing gluten, Milk\. Tell the crew/)
   })
 
   it('adds minutes on a 24-hour clock and counts overlaps the way a station is held', () => {

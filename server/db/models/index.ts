@@ -8,7 +8,8 @@ import { Price, Recipe, RecipeIngredient, RecipeStep, initRecipeModels } from '.
 import { JoinCode, initJoinCodeModel } from './join-code'
 import { Studio, initStudio } from './studio'
 
-export { CallSheet, CallSheetSend, Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, Recipe, RecipeIngredient, RecipeStep, Studio, User }
+export { CallSheet, CallSheetSend }
+export { Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, Recipe, RecipeIngredient, RecipeStep, Studio, User }
 
 export function initModels(sequelize: Sequelize) {
   initStudio(sequelize)
