@@ -25,6 +25,7 @@ export type MembershipInfo = MeAnswer['memberships'][number]
 
 export type EpisodeView = ApiAnswer<'/api/episodes/:id'>
 export type EpisodeShowView = ApiAnswer<'/api/episodes/:id/show'>
+export type CallSheetAnswer = ApiAnswer<'/api/episodes/:id/call-sheet'>
 export type EpisodeRow = ApiAnswer<'/api/studios/:studioId/episodes'>['episodes'][number]
 export type PlanView = ApiAnswer<'/api/episodes/:id/plan'>
 export type PlanStepView = PlanView['steps'][number]

@@ -6,6 +6,12 @@ import type { ScriptPiece, ShowSegment } from '../../shared/utils/show-segments'
 /** The episode's settings: shot on a Thursday for four, within the studio's £1.50 a serving, for a 75-minute shoot. */
 export const demoShowSettings = { shootDate: '2026-12-10', servings: 4, budgetPerServingMinor: null, targetSeconds: 75 * 60 }
 
+/**
+ * The call sheet: the crew is called at 08:30 at an invented address; the nearest hospital is left
+ * for the producer to fill in (the sheet prints an empty line for it), as a real one must be looked up.
+ */
+export const demoCallSheet = { callTime: '08:30', place: 'Brackenford Test Kitchen, 4 Saltmarsh Yard, Brackenford (invented)', hospital: null, crewCalls: [], version: 1 }
+
 /** The host's reading pace on camera (words a minute): a little quicker than the 150 default. */
 export const DEMO_HOST_WPM = 160
 

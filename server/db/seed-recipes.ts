@@ -4,8 +4,8 @@ import { parseQuantity } from '../../shared/utils/quantity'
 import { suggestAllergens } from '../../shared/utils/allergens'
 import { makeIngredientKey, stepTokenProblems } from '../../shared/utils/step-text'
 import { demoEpisode, demoPrices, demoRecipes, type DemoRecipe } from './demo-recipes'
-import { demoShow, demoShowSettings } from './demo-show'
-import { Episode, EpisodeSegment, Price, Recipe, RecipeIngredient, RecipeStep } from './models'
+import { demoCallSheet, demoShow, demoShowSettings } from './demo-show'
+import { CallSheet, Episode, EpisodeSegment, Price, Recipe, RecipeIngredient, RecipeStep } from './models'
 
 /** The demo dishes, prices and episode; `hostId` presents the episode. */
 export async function seedDemoRecipes(studioId: number, currency: string, hostId: number | null = null) {
@@ -49,5 +49,6 @@ export async function seedDemoRecipes(studioId: number, currency: string, hostId
     episodeId: episode.id, segKey: s.id, position: i + 1, kind: s.kind, recipeId: s.recipeId ?? null, title: s.kind === 'recipe' ? null : s.title,
     script: s.script, closing: s.closing ?? [],
   })))
+  await CallSheet.create({ episodeId: episode.id, ...demoCallSheet })
   return recipes
 }

@@ -18,6 +18,7 @@ const ENTRY_NOUNS: Record<string, string> = {
   readFromText: 'read-from-text entry',
   segments: 'Segment',
   closing: 'closing line',
+  crewCalls: 'Crew call',
 }
 
 /** Top-level fields, as the forms label them (sign-up, settings, prices, episodes, the plan's kitchen, join codes). */
@@ -100,6 +101,12 @@ const TOP: Record<string, string> = {
   stepId: 'Step',
   cancelTimers: 'Cancel the timers',
   audibleWhileRolling: 'While the camera rolls',
+  // The call sheet
+  callTime: 'Call time',
+  place: 'Place',
+  hospital: 'Nearest hospital',
+  crewCalls: 'Crew call times',
+  hash: 'The sheet you read',
 }
 
 /** Fields inside an entry or group: ['steps', 2, 'durationMin'] → "Step 3, shortest time". */
@@ -118,6 +125,7 @@ const INNER: Record<string, Record<string, string>> = {
   times: { prep: 'Prep time', cook: 'Cook time', total: 'Total time' },
   kitchen: { hands: 'Cooks’ hands', burners: 'Burners', ovens: 'Ovens', racksPerOven: 'Dishes per oven', parallelRecipes: 'Two recipes at once' },
   stepRef: { segment: 'recipe in the run order', step: 'step' },
+  crewCalls: { userId: 'crew member', callTime: 'call time' },
   segments: {
     id: 'segment id', kind: 'kind of segment', title: 'title', recipeId: 'recipe', text: 'words', field: 'live field',
     ingredientKey: 'ingredient', withOptional: 'with the optional ingredients', celsius: 'oven temperature', shot: 'what to frame',

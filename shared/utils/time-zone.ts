@@ -36,3 +36,27 @@ export function dateTimeInZone(when: Date, locale: string, timeZone: string): st
     .formatToParts(when).find((p) => p.type === 'timeZoneName')?.value ?? zone
   return `${format.format(when)} ${abbreviation}`
 }
+
+/** The offset of `timeZone` from UTC at the moment `utcMs`, in ms (Europe/London in July: +3 600 000). */
+function zoneOffsetMs(utcMs: number, timeZone: string): number {
+  const parts = new Intl.DateTimeFormat('en-GB', {
+    timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit',
+  }).formatToParts(new Date(utcMs))
+  const n = (type: string) => Number(parts.find((p) => p.type === type)?.value)
+  return Date.UTC(n('year'), n('month') - 1, n('day'), n('hour'), n('minute'), n('second')) - Math.floor(utcMs / 1000) * 1000
+}
+
+/**
+ * The moment a wall-clock time on a day happens in a time zone: ('2026-12-10', '08:30', 'Europe/London')
+ * → 2026-12-10T08:30:00Z (GMT in December), ('2026-07-10', '08:30', 'Europe/London') → 07:30Z (BST).
+ * The offset is read twice, so a time just after a change of offset lands right; a time that a
+ * change skips (01:30 on the spring-forward night) comes out an hour later, as a clock would show it.
+ */
+export function zonedTimeToUtc(date: string, time: string, timeZone: string): Date {
+  const [y, m, d] = date.split('-').map(Number) as [number, number, number]
+  const [h, min] = time.split(':').map(Number) as [number, number]
+  const zone = isTimeZone(timeZone) ? timeZone : 'UTC'
+  const wall = Date.UTC(y, m - 1, d, h, min)
+  const first = wall - zoneOffsetMs(wall, zone)
+  return new Date(wall - zoneOffsetMs(first, zone))
+}

@@ -95,6 +95,16 @@ const rows: Row[] = [
   { file: 'episodes/[id]/index.patch.ts', method: 'PATCH', path: (i) => `/api/episodes/${i.episode}`, body: () => ({ version: 999999 }), expect: studio(409, 403, 403, 403) },
   { file: 'episodes/[id]/plan.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/plan`, expect: studio(200, 200, 200, 200) },
   { file: 'episodes/[id]/show.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/show`, expect: studio(200, 200, 200, 200) },
+  { file: 'episodes/[id]/call-sheet/index.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/call-sheet`, expect: studio(200, 200, 200, 200) },
+  {
+    file: 'episodes/[id]/call-sheet/index.patch.ts', method: 'PATCH', path: (i) => `/api/episodes/${i.episode}/call-sheet`,
+    body: () => ({ version: 999999 }), expect: studio(409, 403, 403, 403),
+  },
+  // A sheet nobody read: the producer is past the guard and told the sheet changed; nothing is sent.
+  {
+    file: 'episodes/[id]/call-sheet/send.post.ts', method: 'POST', path: (i) => `/api/episodes/${i.episode}/call-sheet/send`,
+    body: () => ({ hash: '0'.repeat(64) }), expect: studio(409, 403, 403, 403),
+  },
   { file: 'recipes/[id]/export.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/export`, expect: studio(200, 200, 200, 200) },
   // Photo uploads: a JSON body passes the guard and is then refused as no form upload (400).
   { file: 'recipes/[id]/photo.post.ts', method: 'POST', path: (i) => `/api/recipes/${i.recipe}/photo`, expect: studio(400, 400, 403, 403) },

@@ -9,6 +9,7 @@ import {
   inviteBodySchema, joinBodySchema, joinCodeBodySchema, loginBodySchema, resetRequestBodySchema,
   memberBodySchema, signupBodySchema, switchStudioBodySchema,
 } from '../../shared/utils/account-schemas'
+import { callSheetBodySchema, callSheetSendSchema } from '../../shared/utils/call-sheet-schema'
 import { parsePriceCsv } from '../../shared/utils/price-csv'
 import { episodeCreateSchema, episodeUpdateSchema, priceBodySchema, recipeCreateSchema, recipeUpdateSchema, studioSettingsSchema } from '../../shared/utils/recipe-schemas'
 import { importSchemaOrgRecipe } from '../../shared/utils/schemaorg-import'
@@ -91,6 +92,8 @@ export const targets: Target[] = [
   path('recipes/[id]/steps/[stepId]/photo.delete.ts', 'DELETE', (b, i) => `/api/recipes/${i.recipe}/steps/${b}/photo`),
   json('studios/[studioId]/episodes/index.post.ts', 'POST', (i) => `/api/studios/${i.studio}/episodes`, (i) => ({ title: 'Campaign episode', recipeIds: [i.recipe] }), episodeCreateSchema),
   json('episodes/[id]/index.patch.ts', 'PATCH', (i) => `/api/episodes/${i.episode}`, (i) => ({ version: i.episodeVersion, title: 'Campaign episode' }), episodeUpdateSchema),
+  json('episodes/[id]/call-sheet/index.patch.ts', 'PATCH', (i) => `/api/episodes/${i.episode}/call-sheet`, () => ({ version: 0, callTime: '08:30' }), callSheetBodySchema),
+  json('episodes/[id]/call-sheet/send.post.ts', 'POST', (i) => `/api/episodes/${i.episode}/call-sheet/send`, () => ({ hash: '0'.repeat(64) }), callSheetSendSchema),
   { ...json('episodes/[id]/shoots.post.ts', 'POST', (i) => `/api/episodes/${i.episode}/shoots`, () => ({ mode: 'rehearsal' }), shootsBody()) },
   json('shoots/[id]/join-codes/index.post.ts', 'POST', (i) => `/api/shoots/${i.shoot}/join-codes`, () => ({ role: 'camera' }), joinCodeBodySchema),
   path('shoots/[id]/join-codes/[codeId].delete.ts', 'DELETE', (b, i) => `/api/shoots/${i.shoot}/join-codes/${b}`),

@@ -1,5 +1,6 @@
 // Every model, initialised once on the process's Sequelize instance, with their associations.
 import type { Sequelize } from 'sequelize'
+import { CallSheet, CallSheetSend, initCallSheetModels } from './call-sheet'
 import { Episode, EpisodeSegment, initEpisodeModels } from './episode'
 import { Invite, Membership, PasswordReset, User, initAccountModels } from './account'
 import { Mail, initMailModel } from './mail'
@@ -7,6 +8,7 @@ import { Price, Recipe, RecipeIngredient, RecipeStep, initRecipeModels } from '.
 import { JoinCode, initJoinCodeModel } from './join-code'
 import { Studio, initStudio } from './studio'
 
+export { CallSheet, CallSheetSend }
 export { Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, Recipe, RecipeIngredient, RecipeStep, Studio, User }
 
 export function initModels(sequelize: Sequelize) {
@@ -16,6 +18,7 @@ export function initModels(sequelize: Sequelize) {
   initMailModel(sequelize)
   initRecipeModels(sequelize)
   initEpisodeModels(sequelize)
+  initCallSheetModels(sequelize)
 
   User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' })
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' })
