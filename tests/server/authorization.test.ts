@@ -95,6 +95,13 @@ const rows: Row[] = [
   { file: 'episodes/[id]/index.patch.ts', method: 'PATCH', path: (i) => `/api/episodes/${i.episode}`, body: () => ({ version: 999999 }), expect: studio(409, 403, 403, 403) },
   { file: 'episodes/[id]/plan.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/plan`, expect: studio(200, 200, 200, 200) },
   { file: 'episodes/[id]/show.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/show`, expect: studio(200, 200, 200, 200) },
+  { file: 'episodes/[id]/shopping.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/shopping`, expect: studio(200, 200, 200, 200) },
+  { file: 'episodes/[id]/shopping.csv.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/shopping.csv`, expect: studio(200, 200, 200, 200) },
+  {
+    file: 'episodes/[id]/shopping/checks/[key].put.ts', method: 'PUT', path: (i) => `/api/episodes/${i.episode}/shopping/checks/onion`,
+    body: () => ({ ticked: false }), expect: studio(200, 200, 403, 403),
+  },
+  { file: 'episodes/[id]/prep.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/prep`, expect: studio(200, 200, 200, 200) },
   { file: 'recipes/[id]/export.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/export`, expect: studio(200, 200, 200, 200) },
   // Photo uploads: a JSON body passes the guard and is then refused as no form upload (400).
   { file: 'recipes/[id]/photo.post.ts', method: 'POST', path: (i) => `/api/recipes/${i.recipe}/photo`, expect: studio(400, 400, 403, 403) },
