@@ -183,7 +183,7 @@ function lineDensity(uses: Use[], item: string): { gramsPerMl: number; source: s
 
 function packagesText(count: number, size: number, unit: UnitId | 'each'): string {
   if (unit === 'each') return size === 1 ? `${count} × 1` : `${count} × pack of ${tidy(size)}`
-  return `${count} × ${formatQuantityText(tidy(size), tidy(size), unit)}`
+  return `${count} × ${amountText(size, size, unit).text}`
 }
 
 function leftoverText(amount: number, unit: UnitId | 'each'): string {
