@@ -96,7 +96,7 @@ describe.skipIf(!chromiumAvailable())('shopping list in the browser', async () =
     expect([...producer.errors, ...host.errors]).toEqual([])
   })
 
-  it('the prep list opens from the shopping list, onion first', async () => {
+  it('the prep list opens from the shopping list, in the cook plan\'s order', async () => {
     const { page, errors } = await member('camera@brackenford.test')
     const { episodes } = await page.evaluate(() => fetch('/api/studios/1/episodes').then((r) => r.json())) as { episodes: { id: number; title: string }[] }
     const id = episodes.find((e) => e.title === 'Thursday supper special')!.id
@@ -104,7 +104,11 @@ describe.skipIf(!chromiumAvailable())('shopping list in the browser', async () =
     expect(await page.getByLabel(/^garlic/).isDisabled()).toBe(true) // camera reads, does not tick
     await page.getByRole('link', { name: 'Prep list' }).click()
     await page.waitForURL(new RegExp(`/episodes/${id}/prep$`))
-    await expect(page.locator('[data-prep]').first().getAttribute('data-prep')).resolves.toBe('onion')
+    const api = await page.evaluate((e) => fetch(`/api/episodes/${e}/prep`).then((r) => r.json()), id) as { tasks: { key: string; neededAt: number }[] }
+    const shown = await page.locator('[data-prep]').evaluateAll((els) => els.map((e) => e.getAttribute('data-prep')))
+    expect(shown).toEqual(api.tasks.map((t) => t.key))
+    expect(api.tasks[0]!.neededAt).toBe(0)
+    expect(shown).toContain('onion')
     expect(await axeViolations(page)).toEqual([])
     expect(errors).toEqual([])
   })
