@@ -31,6 +31,7 @@ const ACTION_WORDS: Record<StudioAction, string> = {
   'shoot.read': 'watch this shoot',
   'shoot.create': 'start a shoot',
   'joincode.manage': 'make join codes',
+  'shopping.tick': 'tick the shopping list',
 }
 
 const SESSION_ENDED_MESSAGE = 'This session was ended (signed out everywhere, a new password, or removed from a studio). Sign in again.'

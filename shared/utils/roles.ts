@@ -21,15 +21,16 @@ export type StudioAction =
   | 'shoot.read'
   | 'shoot.create'
   | 'joincode.manage'
+  | 'shopping.tick'
 
 const READ: StudioAction[] = ['studio.read', 'crew.read', 'recipe.read', 'episode.read', 'shoot.read']
 
 const ALLOWED: Record<StudioRole, ReadonlySet<StudioAction>> = {
   producer: new Set<StudioAction>([
     ...READ, 'crew.manage', 'mail.read', 'recipe.edit', 'price.edit', 'episode.edit',
-    'shoot.create', 'joincode.manage',
+    'shoot.create', 'joincode.manage', 'shopping.tick',
   ]),
-  host: new Set<StudioAction>([...READ, 'recipe.edit']),
+  host: new Set<StudioAction>([...READ, 'recipe.edit', 'shopping.tick']),
   camera: new Set<StudioAction>(READ),
   viewer: new Set<StudioAction>(READ),
 }

@@ -105,6 +105,15 @@ const rows: Row[] = [
     file: 'episodes/[id]/call-sheet/send.post.ts', method: 'POST', path: (i) => `/api/episodes/${i.episode}/call-sheet/send`,
     body: () => ({ hash: '0'.repeat(64) }), expect: studio(409, 403, 403, 403),
   },
+  { file: 'episodes/[id]/shopping.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/shopping`, expect: studio(200, 200, 200, 200) },
+  { file: 'episodes/[id]/shopping.csv.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/shopping.csv`, expect: studio(200, 200, 200, 200) },
+  // The matrix episode's recipe has no ingredients, so a producer or host passes the guard and then finds no such line (404);
+  // camera and viewer are refused by role first. tests/server/shopping.test.ts ticks a real line.
+  {
+    file: 'episodes/[id]/shopping/checks/[key].put.ts', method: 'PUT', path: (i) => `/api/episodes/${i.episode}/shopping/checks/onion`,
+    body: () => ({ ticked: false }), expect: studio(404, 404, 403, 403),
+  },
+  { file: 'episodes/[id]/prep.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/prep`, expect: studio(200, 200, 200, 200) },
   { file: 'recipes/[id]/export.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/export`, expect: studio(200, 200, 200, 200) },
   // Photo uploads: a JSON body passes the guard and is then refused as no form upload (400).
   { file: 'recipes/[id]/photo.post.ts', method: 'POST', path: (i) => `/api/recipes/${i.recipe}/photo`, expect: studio(400, 400, 403, 403) },

@@ -3,7 +3,7 @@
 // valid base command of each shoot command type, and the request that sends one payload.
 import { url } from '@nuxt/test-utils/e2e'
 import fc from 'fast-check'
-import type { z } from 'zod'
+import { z } from 'zod'
 import type { ShootCommandType } from '../../shared/types/shoot'
 import {
   inviteBodySchema, joinBodySchema, joinCodeBodySchema, loginBodySchema, resetRequestBodySchema,
@@ -95,6 +95,8 @@ export const targets: Target[] = [
   json('episodes/[id]/call-sheet/index.patch.ts', 'PATCH', (i) => `/api/episodes/${i.episode}/call-sheet`, () => ({ version: 0, callTime: '08:30' }), callSheetBodySchema),
   json('episodes/[id]/call-sheet/send.post.ts', 'POST', (i) => `/api/episodes/${i.episode}/call-sheet/send`, () => ({ hash: '0'.repeat(64) }), callSheetSendSchema),
   { ...json('episodes/[id]/shoots.post.ts', 'POST', (i) => `/api/episodes/${i.episode}/shoots`, () => ({ mode: 'rehearsal' }), shootsBody()) },
+  // the body schema of the route file: { ticked: boolean }
+  json('episodes/[id]/shopping/checks/[key].put.ts', 'PUT', (i) => `/api/episodes/${i.episode}/shopping/checks/onion`, () => ({ ticked: true }), z.object({ ticked: z.boolean() })),
   json('shoots/[id]/join-codes/index.post.ts', 'POST', (i) => `/api/shoots/${i.shoot}/join-codes`, () => ({ role: 'camera' }), joinCodeBodySchema),
   path('shoots/[id]/join-codes/[codeId].delete.ts', 'DELETE', (b, i) => `/api/shoots/${i.shoot}/join-codes/${b}`),
   json('shoots/[id]/commands.post.ts', 'POST', (i) => `/api/shoots/${i.shoot}/commands`, () => ({ type: 'marker.add', kind: 'good' }), shootCommandSchema),
