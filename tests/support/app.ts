@@ -23,14 +23,19 @@ export function tempDatabasePath(label = 'test'): string {
 /**
  * A free port below Linux's ephemeral range (32768–60999). A random port inside that range can be
  * taken by another test file's outgoing connection between the check and the server's listen
- * (seen once in CI as EADDRINUSE).
+ * (seen once in CI as EADDRINUSE). Each vitest worker draws from its own slice of 500 ports, so two
+ * files running at once never race for the same port (two random draws from one range collided in
+ * CI); within a worker the draws move forward, so a port freed a moment ago is not taken again.
  */
+let nextInSlice = Math.floor(Math.random() * 500)
 export async function serverPort(): Promise<number> {
-  for (let i = 0; i < 50; i++) {
-    const port = 20000 + Math.floor(Math.random() * 12000)
+  const worker = Number(process.env.VITEST_POOL_ID ?? process.env.VITEST_WORKER_ID ?? 0) % 24
+  const sliceStart = 20000 + worker * 500
+  for (let i = 0; i < 500; i++) {
+    const port = sliceStart + (nextInSlice++ % 500)
     if (await checkPort(port, '127.0.0.1')) return port
   }
-  throw new Error('no free port between 20000 and 32000 for the test server')
+  throw new Error(`no free port between ${sliceStart} and ${sliceStart + 499} for the test server`)
 }
 
 /** Registers the suite's beforeAll/afterAll. Returns the database path the server uses. */
