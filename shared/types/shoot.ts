@@ -89,8 +89,9 @@ export interface ShootTimer {
   closedAtShootMs?: number | null
 }
 
+/** The kinds a person marks; a chapter is marked by the shoot itself at every step change while rolling. */
 export const SHOOT_MARKER_KINDS = ['good', 'flub', 'pickup', 'note'] as const
-export type ShootMarkerKind = (typeof SHOOT_MARKER_KINDS)[number]
+export type ShootMarkerKind = (typeof SHOOT_MARKER_KINDS)[number] | 'chapter'
 
 export interface ShootMarker {
   id: string
@@ -102,6 +103,12 @@ export interface ShootMarker {
   by: ShootActor
   /** When the camera started rolling, if it was rolling: the take's timecode counts from here. */
   rollingSinceServerMs: number | null
+  /**
+   * Recording time when marked (ms of recording since the camera first rolled in this shoot, the
+   * rolls before added up, as record-run timecode counts); null when the camera was not rolling.
+   * Absent on markers made before it was kept: see markerRecordingMs in take-log.ts.
+   */
+  recordingMs?: number | null
 }
 
 /** The cursor arriving at a step, for planned vs. actual. */
@@ -192,6 +199,8 @@ export interface ShootState {
   rolling: boolean
   rollingSinceServerMs: number | null
   rollingSinceShootMs: number | null
+  /** Recording time of the rolls that have ended (ms); the current roll adds to it. Absent on old shoots: 0. */
+  recordedMs?: number
   timers: ShootTimer[]
   markers: ShootMarker[]
   visits: ShootStepVisit[]

@@ -10,7 +10,7 @@
 import {
   SHOOT_MARKER_LIMIT, SHOOT_TIMER_LIMIT, SHOOT_TIMER_MAX_MS, SHOOT_TIMER_SLOTS,
   type ShootActor, type ShootApplyResult, type ShootCommand, type ShootCommandContext, type ShootCommandError,
-  type ShootCommandOf, type ShootCursor, type ShootErrorCode, type ShootEvent, type ShootState, type ShootTimer,
+  type ShootCommandOf, type ShootCursor, type ShootErrorCode, type ShootEvent, type ShootMarker, type ShootState, type ShootTimer,
 } from '../types/shoot'
 import { shootClockAt, shootClockAtSpeed, shootClockStarted, shootClockStopped } from './shoot-clock'
 import {
@@ -21,6 +21,7 @@ import { clockTextMs } from './clock-text'
 import { shootCursorMoved, shootCursorRef, shootSegmentPositions, shootStepRefAt } from './shoot'
 import { isTimedWait, shootPlanStep, startWait, stepTimerOf } from './shoot-waits'
 import { actionName as press } from './shoot-words'
+import { recordingMsAt } from './take-log'
 
 type Failure = { ok: false; error: ShootCommandError }
 type Change = { state: ShootState; events: ShootEvent[] }
@@ -62,7 +63,7 @@ function dispatch(s: ShootState, cmd: ShootCommand, ctx: ShootCommandContext, no
     case 'timer.addTime': return addTime(s, cmd, now)
     case 'timer.cancel': return cancelTimer(s, cmd, now)
     case 'timer.acknowledge': return acknowledgeTimer(s, cmd, ctx, now)
-    case 'rolling.set': return setRolling(s, cmd, now)
+    case 'rolling.set': return setRolling(s, cmd, ctx, now)
     case 'clock.speed': return setSpeed(s, cmd, now)
     case 'marker.add': return addMarker(s, cmd, ctx, now)
     case 'wait.start': return startWaitNow(s, cmd, ctx, now)
@@ -115,7 +116,7 @@ function startShoot(s: ShootState, ctx: ShootCommandContext, now: number): Outco
     rollingSinceShootMs: s.rolling ? 0 : null,
     visits: [...s.visits, { stepRef, enteredServerMs: now, enteredShootMs: 0 }],
   }
-  const waited = startWait(next, stepRef.stepId, actorOf(ctx), now)
+  const waited = startWait(withChapter(next, ctx, now), stepRef.stepId, actorOf(ctx), now)
   return {
     state: waited.state,
     events: [statusEvent(next, now), { type: 'step.entered', stepRef, atServerMs: now, shootMs: 0 }, ...released.events, ...waited.events],
@@ -152,16 +153,7 @@ function endShoot(s: ShootState, cmd: ShootCommandOf<'shoot.end'>, now: number):
     return cancelled(s, t, now)
   })
   if (s.rolling) events.push({ type: 'rolling.changed', rolling: false, atServerMs: now })
-  const next: ShootState = {
-    ...s,
-    status: 'ended',
-    clock: shootClockStopped(s.clock, now),
-    timers,
-    rolling: false,
-    rollingSinceServerMs: null,
-    rollingSinceShootMs: null,
-    endedAtServerMs: now,
-  }
+  const next: ShootState = { ...(s.rolling ? stopRolling(s, now) : s), status: 'ended', clock: shootClockStopped(s.clock, now), timers, endedAtServerMs: now }
   return { state: next, events: [...events, statusEvent(next, now)] }
 }
 
@@ -173,7 +165,8 @@ function moveCursor(s: ShootState, cursor: ShootCursor, ctx: ShootCommandContext
   if (s.status === 'ready') return { state: moved, events: [] } // the shoot will start here
   const stepRef = shootCursorRef(moved)
   const shootMs = shootClockAt(s.clock, now)
-  const waited = startWait({ ...moved, visits: [...s.visits, { stepRef, enteredServerMs: now, enteredShootMs: shootMs }] }, stepRef.stepId, actorOf(ctx), now)
+  const visited = withChapter({ ...moved, visits: [...s.visits, { stepRef, enteredServerMs: now, enteredShootMs: shootMs }] }, ctx, now)
+  const waited = startWait(visited, stepRef.stepId, actorOf(ctx), now)
   return { state: waited.state, events: [{ type: 'step.entered', stepRef, atServerMs: now, shootMs }, ...waited.events] }
 }
 
@@ -401,12 +394,29 @@ function dueEvent(t: ShootTimer): ShootEvent {
 
 // ---- rolling, speed, markers -----------------------------------------------------------------------
 
-function setRolling(s: ShootState, cmd: ShootCommandOf<'rolling.set'>, now: number): Outcome {
+function setRolling(s: ShootState, cmd: ShootCommandOf<'rolling.set'>, ctx: ShootCommandContext, now: number): Outcome {
   if (cmd.rolling === s.rolling) return fail('no-change', s.rolling ? 'The camera is already rolling.' : `The camera is not rolling; press ${press('rolling.on')} to roll.`)
-  const next: ShootState = cmd.rolling
-    ? { ...s, rolling: true, rollingSinceServerMs: now, rollingSinceShootMs: shootClockAt(s.clock, now) }
-    : { ...s, rolling: false, rollingSinceServerMs: null, rollingSinceShootMs: null }
-  return { state: next, events: [{ type: 'rolling.changed', rolling: cmd.rolling, atServerMs: now }] }
+  if (!cmd.rolling) return { state: stopRolling(s, now), events: [{ type: 'rolling.changed', rolling: false, atServerMs: now }] }
+  const rolled: ShootState = { ...s, rolling: true, rollingSinceServerMs: now, rollingSinceShootMs: shootClockAt(s.clock, now) }
+  // The take opens on a chapter at the step on screen, when the shoot is under way.
+  const next = s.status === 'ready' ? rolled : withChapter(rolled, ctx, now)
+  return { state: next, events: [{ type: 'rolling.changed', rolling: true, atServerMs: now }] }
+}
+
+/** The camera stops: this roll's length joins the recording time of the rolls before. */
+function stopRolling(s: ShootState, now: number): ShootState {
+  return { ...s, rolling: false, rollingSinceServerMs: null, rollingSinceShootMs: null, recordedMs: recordingMsAt(s, now) ?? (s.recordedMs ?? 0) }
+}
+
+/** A chapter marker at the step the cursor is on, stamped with the recording time (only while rolling). */
+function withChapter(s: ShootState, ctx: ShootCommandContext, now: number): ShootState {
+  if (!s.rolling || s.markers.length >= SHOOT_MARKER_LIMIT) return s
+  const id = `chapter-${s.seq + 1}-${s.markers.length + 1}`
+  const marker: ShootMarker = {
+    id, kind: 'chapter', text: null, shootMs: shootClockAt(s.clock, now), serverMs: now,
+    stepRef: shootCursorRef(s), by: actorOf(ctx), rollingSinceServerMs: s.rollingSinceServerMs, recordingMs: recordingMsAt(s, now),
+  }
+  return { ...s, markers: [...s.markers, marker] }
 }
 
 function setSpeed(s: ShootState, cmd: ShootCommandOf<'clock.speed'>, now: number): Outcome {
@@ -427,7 +437,7 @@ function addMarker(s: ShootState, cmd: ShootCommandOf<'marker.add'>, ctx: ShootC
   if (typeof id !== 'string') return id
   const marker = {
     id, kind: cmd.kind, text: cmd.text ? cmd.text : null, shootMs: shootClockAt(s.clock, now), serverMs: now,
-    stepRef: shootCursorRef(s), by: actorOf(ctx), rollingSinceServerMs: s.rollingSinceServerMs,
+    stepRef: shootCursorRef(s), by: actorOf(ctx), rollingSinceServerMs: s.rollingSinceServerMs, recordingMs: recordingMsAt(s, now),
   }
   return { state: { ...s, markers: [...s.markers, marker] }, events: [{ type: 'marker.added', markerId: id, kind: cmd.kind }] }
 }

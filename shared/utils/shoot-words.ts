@@ -89,6 +89,7 @@ export const MARKER_WORDS: Record<ShootMarkerKind, Word> = {
   flub: { label: 'Flub', colour: 'ember' },
   pickup: { label: 'Pickup', colour: 'saffron' },
   note: { label: 'Note', colour: 'sky' },
+  chapter: { label: 'Chapter', colour: 'haze' },
 }
 
 /**

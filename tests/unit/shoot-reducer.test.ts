@@ -103,7 +103,8 @@ describe('shoot.start / pause / resume / end', () => {
     const { state, events } = apply(s, { type: 'shoot.end' }, T0 + 3 * MIN)
     expect(state).toMatchObject({ status: 'ended', rolling: false, rollingSinceServerMs: null, endedAtServerMs: T0 + 3 * MIN })
     expect(state.clock.running).toBe(false)
-    expect(state.markers).toHaveLength(1)
+    expect(state.markers.map((m) => m.kind)).toEqual(['chapter', 'good'])
+    expect(state.recordedMs).toBe(2 * MIN) // rolled from 1:00 to the end at 3:00
     expect(events.map((e) => e.type)).toEqual(['rolling.changed', 'shoot.status'])
   })
   it('end may come straight from ready (a shoot called off) or from paused', () => {
@@ -397,13 +398,35 @@ describe('marker.add', () => {
     s = run(s, { type: 'rolling.set', rolling: true }, T0 + 2 * MIN, 'camera')
     s = run(s, { type: 'shoot.pause' }, T0 + 3 * MIN)
     const { state, events } = apply(s, { type: 'marker.add', markerId: 'm1', kind: 'flub', text: 'said "tablespoon" for teaspoon' }, T0 + 4 * MIN, 'host')
-    expect(state.markers).toEqual([{
+    expect(state.markers.filter((m) => m.kind !== 'chapter')).toEqual([{
       id: 'm1', kind: 'flub', text: 'said "tablespoon" for teaspoon', shootMs: 3 * MIN, serverMs: T0 + 4 * MIN,
       stepRef: { segment: 1, step: 0, segmentId: 'orzo', stepId: 'orzo-boil' }, by: ACTORS.host, rollingSinceServerMs: T0 + 2 * MIN,
+      recordingMs: 2 * MIN, // the camera rolled at 2:00 and keeps rolling through the pause
     }])
     expect(events).toEqual([{ type: 'marker.added', markerId: 'm1', kind: 'flub' }])
     const plain = run(runningTake(), { type: 'marker.add', kind: 'good' }, T0 + 1, 'camera')
     expect(plain.markers[0]).toMatchObject({ text: null, rollingSinceServerMs: null })
+  })
+  it('marks a chapter at the roll and at every step change while rolling, in recording time across rolls', () => {
+    // Worked by hand: roll 0:30–1:30 (60 s recorded), stop, roll again at 2:00; the step change at
+    // 2:20 sits at 60 + 20 = 80 s of recording, as record-run timecode continues across rolls.
+    let s = run(runningTake(), { type: 'rolling.set', rolling: true }, T0 + 30_000, 'camera')
+    s = run(s, { type: 'step.next' }, T0 + 45_000)
+    s = run(s, { type: 'rolling.set', rolling: false }, T0 + 90_000, 'camera')
+    expect(s.recordedMs).toBe(60_000)
+    s = run(s, { type: 'step.next' }, T0 + 100_000) // not rolling: no chapter
+    s = run(s, { type: 'rolling.set', rolling: true }, T0 + 120_000, 'camera')
+    s = run(s, { type: 'step.next' }, T0 + 140_000)
+    s = run(s, { type: 'marker.add', kind: 'pickup' }, T0 + 150_000, 'camera')
+    expect(s.markers.map((m) => [m.kind, m.recordingMs, m.stepRef.stepId])).toEqual([
+      ['chapter', 0, s.markers[0]!.stepRef.stepId],
+      ['chapter', 15_000, s.markers[1]!.stepRef.stepId],
+      ['chapter', 60_000, s.markers[2]!.stepRef.stepId],
+      ['chapter', 80_000, s.markers[3]!.stepRef.stepId],
+      ['pickup', 90_000, s.markers[3]!.stepRef.stepId],
+    ])
+    expect(new Set(s.markers.map((m) => m.stepRef.stepId)).size).toBe(4)
+    expect(new Set(s.markers.map((m) => m.id)).size).toBe(5)
   })
   it('refuses before the start, duplicate ids, and past the limit', () => {
     expect(refuse(newShoot(), { type: 'marker.add', kind: 'good' }, T0, 'camera').code).toBe('not-started')

@@ -27,7 +27,7 @@ describe('the shoot vocabulary', () => {
   it('covers every status, mode, marker kind and command of the shoot', () => {
     expect(Object.keys(STATUS_WORDS).sort()).toEqual(['ended', 'paused', 'ready', 'running'])
     expect(Object.keys(MODE_WORDS).sort()).toEqual(['rehearsal', 'take'])
-    expect(Object.keys(MARKER_WORDS).sort()).toEqual([...SHOOT_MARKER_KINDS].sort())
+    expect(Object.keys(MARKER_WORDS).sort()).toEqual(['chapter', ...SHOOT_MARKER_KINDS].sort())
     expect(Object.keys(COMMAND_ACTIONS).sort()).toEqual([...SHOOT_COMMAND_TYPES].sort())
     const pressed = Object.values(COMMAND_ACTIONS).flat()
     // Every action is the button of exactly one command, and every command has a button.
