@@ -148,3 +148,27 @@ export function parseTimecodeRate(text: string): TimecodeRate {
   rateFacts(rate) // refuses drop-frame where the rate has none
   return rate
 }
+
+/** The label written for a rate: "29.97df", "25" (what `?rate=` and parseTimecodeRate read). */
+export function timecodeRateText(rate: TimecodeRate): string {
+  return `${rate.fps}${rate.drop ? 'df' : ''}`
+}
+
+/** The rate in words, for screens: "29.97 fps drop-frame". */
+export function timecodeRateName(rate: TimecodeRate): string {
+  const hasDrop = rate.fps === 29.97 || rate.fps === 59.94
+  return `${rate.fps} fps${rate.drop ? ' drop-frame' : hasDrop ? ' non-drop' : ''}`
+}
+
+/** Where cameras usually start their timecode: one hour in, 01:00:00:00 (01:00:00;00 in drop-frame). */
+export function defaultStartTimecode(rate: TimecodeRate): string {
+  return `01:00:00${rate.drop ? ';' : ':'}00`
+}
+
+/**
+ * The label of the frame on screen `ms` after a start label (a camera that starts at 01:00:00:00):
+ * the start's frame count plus the frames elapsed, wrapping after 23:59:59 as timecode does.
+ */
+export function timecodeAfter(start: string, ms: number, rate: TimecodeRate): string {
+  return framesToTimecode((timecodeToFrames(start, rate) + msToFrames(ms, rate)) % timecodeFramesPerDay(rate), rate)
+}
