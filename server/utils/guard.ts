@@ -32,6 +32,7 @@ const ACTION_WORDS: Record<StudioAction, string> = {
   'shoot.create': 'start a shoot',
   'joincode.manage': 'make join codes',
   'shopping.tick': 'tick the shopping list',
+  'takelog.export': 'download the take log',
 }
 
 const SESSION_ENDED_MESSAGE = 'This session was ended (signed out everywhere, a new password, or removed from a studio). Sign in again.'

@@ -5,6 +5,7 @@
 import type { z } from 'zod'
 import type { shootCommandSchema } from '../utils/shoot-schema'
 import type { PlanKitchen, PlanStep } from '../utils/plan-types'
+import type { TimecodeFps } from '../utils/timecode'
 
 export type ShootRole = 'producer' | 'host' | 'camera' | 'viewer'
 export type ShootMode = 'rehearsal' | 'take'
@@ -91,7 +92,9 @@ export interface ShootTimer {
 
 /** The kinds a person marks; a chapter is marked by the shoot itself at every step change while rolling. */
 export const SHOOT_MARKER_KINDS = ['good', 'flub', 'pickup', 'note'] as const
-export type ShootMarkerKind = (typeof SHOOT_MARKER_KINDS)[number] | 'chapter'
+/** A kind a person marks (and a marker can be changed to afterwards). */
+export type ShootMarkKind = (typeof SHOOT_MARKER_KINDS)[number]
+export type ShootMarkerKind = ShootMarkKind | 'chapter'
 
 export interface ShootMarker {
   id: string
@@ -109,6 +112,39 @@ export interface ShootMarker {
    * Absent on markers made before it was kept: see markerRecordingMs in take-log.ts.
    */
   recordingMs?: number | null
+  /** Deleted by the producer afterwards: kept, with its changes, but left out of the take log and its exports. */
+  deleted?: boolean
+  /** Every change made afterwards (the take log's own log), oldest first. */
+  changes?: ShootMarkerChange[]
+}
+
+/** What a marker said, before or after a change. */
+export interface ShootMarkerWords {
+  kind: ShootMarkerKind
+  text: string | null
+}
+
+/** One change to a marker after it was made: who, when, what it said before and after (null after a delete). */
+export interface ShootMarkerChange {
+  by: ShootActor
+  atServerMs: number
+  before: ShootMarkerWords
+  after: ShootMarkerWords | null
+}
+
+/**
+ * A camera on the shoot, as the editor's footage will show it: its frame rate and the timecode of
+ * its first recorded frame (cameras often start at 01:00:00:00). Markers are shown at each camera's
+ * timecode: the start plus the recording time (take-log.ts).
+ */
+export interface ShootCamera {
+  id: string
+  name: string
+  fps: TimecodeFps
+  /** Drop-frame labels (29.97 and 59.94 only). */
+  drop: boolean
+  /** HH:MM:SS:FF, or HH:MM:SS;FF in drop-frame. */
+  start: string
 }
 
 /** The cursor arriving at a step, for planned vs. actual. */
@@ -208,6 +244,8 @@ export interface ShootState {
   endedAtServerMs: number | null
   /** The cook plan the shoot runs (absent on shoots made before plans were run live). */
   plan?: ShootPlan | null
+  /** The shoot's cameras, set by the producer (absent: none set yet). */
+  cameras?: ShootCamera[]
 }
 
 // Limits: the zod schema (shared/utils/shoot-schema.ts) checks the shape of a command; the reducer
@@ -222,6 +260,8 @@ export const SHOOT_TIMER_MAX_MS = 24 * 3600_000
 export const SHOOT_ADD_TIME_MAX_MS = 2 * 3600_000
 export const SHOOT_SPEED_MIN = 1
 export const SHOOT_SPEED_MAX = 32
+export const SHOOT_CAMERA_LIMIT = 8
+export const SHOOT_CAMERA_NAME_MAX = 40
 
 export type ShootCommand = z.infer<typeof shootCommandSchema>
 export type ShootCommandType = ShootCommand['type']
@@ -232,7 +272,11 @@ export const SHOOT_COMMAND_TYPES: readonly ShootCommandType[] = [
   'step.next', 'step.previous', 'step.jump',
   'timer.start', 'timer.pause', 'timer.resume', 'timer.addTime', 'timer.cancel', 'timer.acknowledge',
   'rolling.set', 'clock.speed', 'marker.add', 'wait.start',
+  'marker.edit', 'marker.delete', 'camera.set', 'camera.remove',
 ]
+
+/** Commands the producer may still send after the shoot has ended: tidying the take log and its cameras. */
+export const SHOOT_AFTER_END_COMMANDS: readonly ShootCommandType[] = ['marker.edit', 'marker.delete', 'camera.set', 'camera.remove']
 
 export type ShootErrorCode =
   | 'invalid' // the command's shape (a field is named in the message)
@@ -258,6 +302,10 @@ export type ShootErrorCode =
   | 'slot-taken'
   | 'too-many-timers'
   | 'too-many-markers'
+  | 'unknown-marker'
+  | 'marker-deleted'
+  | 'unknown-camera'
+  | 'too-many-cameras'
   | 'duplicate-id'
   | 'no-id'
 
@@ -277,6 +325,8 @@ export type ShootEvent =
   | { type: 'rolling.changed'; rolling: boolean; atServerMs: number }
   | { type: 'clock.changed'; speed: number; atServerMs: number }
   | { type: 'marker.added'; markerId: string; kind: ShootMarkerKind }
+  | { type: 'marker.changed'; markerId: string; deleted: boolean }
+  | { type: 'camera.changed'; cameraId: string; removed: boolean }
 
 export type ShootApplyResult =
   | { ok: true; state: ShootState; events: ShootEvent[] }

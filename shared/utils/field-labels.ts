@@ -101,6 +101,12 @@ const TOP: Record<string, string> = {
   stepId: 'Step',
   cancelTimers: 'Cancel the timers',
   audibleWhileRolling: 'While the camera rolls',
+  // The take log: cameras and exports
+  cameraId: 'Camera',
+  camera: 'Camera',
+  rate: 'Frame rate',
+  start: 'Start timecode',
+  track: 'Track',
   // The call sheet
   callTime: 'Call time',
   place: 'Place',

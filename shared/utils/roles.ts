@@ -22,17 +22,19 @@ export type StudioAction =
   | 'shoot.create'
   | 'joincode.manage'
   | 'shopping.tick'
+  | 'takelog.export'
 
 const READ: StudioAction[] = ['studio.read', 'crew.read', 'recipe.read', 'episode.read', 'shoot.read']
 
 const ALLOWED: Record<StudioRole, ReadonlySet<StudioAction>> = {
   producer: new Set<StudioAction>([
     ...READ, 'crew.manage', 'mail.read', 'recipe.edit', 'price.edit', 'episode.edit',
-    'shoot.create', 'joincode.manage', 'shopping.tick',
+    'shoot.create', 'joincode.manage', 'shopping.tick', 'takelog.export',
   ]),
   host: new Set<StudioAction>([...READ, 'recipe.edit', 'shopping.tick']),
   camera: new Set<StudioAction>(READ),
-  viewer: new Set<StudioAction>(READ),
+  // The viewer is the editor too: the take log's exports are theirs to fetch.
+  viewer: new Set<StudioAction>([...READ, 'takelog.export']),
 }
 
 /**

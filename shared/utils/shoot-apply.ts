@@ -3,12 +3,13 @@
 // through applyShootCommand (shoot-reducer.ts), which first checks the command's shape with zod;
 // screens apply their own commands with it directly for optimistic feedback.
 //
-// Order of checks: the shoot having ended, then the command against the state. Who may send which
+// Order of checks: the shoot having ended (only the take log's tidying goes on after, take-log-apply.ts),
+// then the command against the state. Who may send which
 // command is decided once, before this, by applyShootCommand (shoot-reducer.ts) from the role table.
 // Before a command applies, timers whose deadline has passed are marked due, so a command never
 // acts on a timer that has in fact already rung.
 import {
-  SHOOT_MARKER_LIMIT, SHOOT_TIMER_LIMIT, SHOOT_TIMER_MAX_MS, SHOOT_TIMER_SLOTS,
+  SHOOT_AFTER_END_COMMANDS, SHOOT_MARKER_LIMIT, SHOOT_TIMER_LIMIT, SHOOT_TIMER_MAX_MS, SHOOT_TIMER_SLOTS,
   type ShootActor, type ShootApplyResult, type ShootCommand, type ShootCommandContext, type ShootCommandError,
   type ShootCommandOf, type ShootCursor, type ShootErrorCode, type ShootEvent, type ShootMarker, type ShootState, type ShootTimer,
 } from '../types/shoot'
@@ -22,6 +23,7 @@ import { shootCursorMoved, shootCursorRef, shootSegmentPositions, shootStepRefAt
 import { isTimedWait, shootPlanStep, startWait, stepTimerOf } from './shoot-waits'
 import { actionName as press } from './shoot-words'
 import { recordingMsAt } from './take-log'
+import { deleteMarker, editMarker, removeCamera, setCamera } from './take-log-apply'
 
 type Failure = { ok: false; error: ShootCommandError }
 type Change = { state: ShootState; events: ShootEvent[] }
@@ -35,7 +37,7 @@ const isFailure = (o: Outcome): o is Failure => 'ok' in o
 export function applyKnownShootCommand(state: ShootState, command: ShootCommand, ctx: ShootCommandContext): ShootApplyResult {
   const now = ctx?.nowServerMs
   if (typeof now !== 'number' || !Number.isFinite(now)) return fail('invalid', 'The server could not read its own clock; try again.', 'nowServerMs')
-  if (state.status === 'ended') return fail('shoot-ended', 'This shoot has ended, so nothing in it can change; start a new rehearsal or recording from the episode to go again.')
+  if (state.status === 'ended' && !SHOOT_AFTER_END_COMMANDS.includes(command.type)) return fail('shoot-ended', 'This shoot has ended, so nothing in it can change; start a new rehearsal or recording from the episode to go again.')
 
   const marked = markDueTimers(state, now)
   const base: ShootState = { ...marked.state, seq: state.seq }
@@ -67,6 +69,10 @@ function dispatch(s: ShootState, cmd: ShootCommand, ctx: ShootCommandContext, no
     case 'clock.speed': return setSpeed(s, cmd, now)
     case 'marker.add': return addMarker(s, cmd, ctx, now)
     case 'wait.start': return startWaitNow(s, cmd, ctx, now)
+    case 'marker.edit': return editMarker(s, cmd, actorOf(ctx), now)
+    case 'marker.delete': return deleteMarker(s, cmd, actorOf(ctx), now)
+    case 'camera.set': return setCamera(s, cmd, ctx.newId)
+    case 'camera.remove': return removeCamera(s, cmd)
     default: {
       const unknown: never = cmd
       return fail('invalid', `This screen sent an action the shoot does not know ("${String((unknown as { type: string }).type).slice(0, 40)}"); reload the screen.`, 'type')

@@ -9,7 +9,8 @@ const ON_SET: ShootRole[] = ['producer', 'host', 'camera']
 /**
  * The roles of DESIGN.md: the producer may do everything; the host drives the shoot (start, pause,
  * resume, advance, timers, markers) but neither ends it, sets the rehearsal speed nor the rolling
- * flag; the camera adds markers and toggles rolling; a viewer only reads.
+ * flag; the camera adds markers and toggles rolling; a viewer only reads. Only the producer sets
+ * the shoot's cameras and changes or deletes markers afterwards (also once the shoot has ended).
  */
 export const SHOOT_COMMAND_ROLES: Readonly<Record<ShootCommandType, readonly ShootRole[]>> = {
   'shoot.start': DRIVE,
@@ -29,6 +30,10 @@ export const SHOOT_COMMAND_ROLES: Readonly<Record<ShootCommandType, readonly Sho
   'clock.speed': ['producer'],
   'marker.add': ON_SET,
   'wait.start': DRIVE,
+  'marker.edit': ['producer'],
+  'marker.delete': ['producer'],
+  'camera.set': ['producer'],
+  'camera.remove': ['producer'],
 }
 
 /** What a command does, in words, for messages ("may not start timers"). */
@@ -50,6 +55,10 @@ export const SHOOT_COMMAND_PHRASES: Readonly<Record<ShootCommandType, string>> =
   'clock.speed': 'change the rehearsal speed',
   'marker.add': 'add markers',
   'wait.start': 'start a wait of the cook plan',
+  'marker.edit': 'change markers',
+  'marker.delete': 'delete markers',
+  'camera.set': 'set the cameras',
+  'camera.remove': 'remove cameras',
 }
 
 export function isShootCommandType(type: unknown): type is ShootCommandType {

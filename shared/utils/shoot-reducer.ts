@@ -10,8 +10,8 @@ import { parseShootCommand } from './shoot-schema'
 import { applyKnownShootCommand } from './shoot-apply'
 import { withLivePlan } from './shoot-live-plan'
 
-/** Commands after which the plan stays as it was (markers and the rolling flag change nothing in it). */
-const KEEPS_PLAN = new Set(['marker.add', 'rolling.set'])
+/** Commands after which the plan stays as it was (markers, cameras and the rolling flag change nothing in it). */
+const KEEPS_PLAN = new Set(['marker.add', 'rolling.set', 'marker.edit', 'marker.delete', 'camera.set', 'camera.remove'])
 
 /** Applies one command; see the file comment for the order of checks. */
 export function applyShootCommand(state: ShootState, command: ShootCommand | unknown, ctx: ShootCommandContext): ShootApplyResult {

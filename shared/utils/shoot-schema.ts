@@ -6,6 +6,9 @@ import { z } from 'zod'
 import { fieldLabel } from './field-labels'
 import { inputWords } from './input-words'
 import {
+  CAMERA_FIELD_LABELS, cameraRemoveCommandSchema, cameraSetCommandSchema, markerDeleteCommandSchema, markerEditCommandSchema,
+} from './take-log-schemas'
+import {
   SHOOT_ADD_TIME_MAX_MS, SHOOT_MARKER_KINDS, SHOOT_MARKER_TEXT_MAX, SHOOT_SPEED_MAX, SHOOT_SPEED_MIN,
   SHOOT_TIMER_LABEL_MAX, SHOOT_TIMER_MAX_MS, SHOOT_TIMER_MIN_MS, SHOOT_TIMER_SLOTS,
   type ShootCommand, type ShootCommandError,
@@ -69,6 +72,10 @@ export const shootCommandSchema = z.discriminatedUnion('type', [
       .max(SHOOT_MARKER_TEXT_MAX, { error: `write at most ${SHOOT_MARKER_TEXT_MAX} characters` }).optional(),
   }).refine((m) => m.kind !== 'note' || (m.text ?? '').length > 0, { error: 'write what the note says', path: ['text'] }),
   z.object({ type: z.literal('wait.start'), stepId: shootIdSchema() }),
+  markerEditCommandSchema,
+  markerDeleteCommandSchema,
+  cameraSetCommandSchema,
+  cameraRemoveCommandSchema,
 ])
 
 export type ShootCommandParse = { ok: true; command: ShootCommand } | { ok: false; error: ShootCommandError }
@@ -86,5 +93,6 @@ export function parseShootCommand(input: unknown): ShootCommandParse {
     return { ok: false, error: { code: 'invalid', field, message: `${said}; reload the page to get the current controls.` } }
   }
   if (!issue.path.length) return { ok: false, error: { code: 'invalid', field, message: 'This screen sent a command Hobline cannot read; reload the page to get the current controls.' } }
-  return { ok: false, error: { code: 'invalid', field, message: `${fieldLabel(issue.path)}: ${issue.message}` } }
+  const own = (input as { type?: unknown }).type === 'camera.set' ? CAMERA_FIELD_LABELS : {}
+  return { ok: false, error: { code: 'invalid', field, message: `${fieldLabel(issue.path, own)}: ${issue.message}` } }
 }

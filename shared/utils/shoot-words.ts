@@ -117,6 +117,10 @@ export const ACTION_WORDS = {
   'rolling.off': { label: 'Cut', colour: 'bone' },
   'clock.speed': { label: 'Rehearsal speed', colour: 'sky' },
   'marker.add': { label: 'Mark', colour: 'bone' },
+  'marker.edit': { label: 'Save marker', colour: 'bone' },
+  'marker.delete': { label: 'Delete marker', colour: 'ember' },
+  'camera.set': { label: 'Save camera', colour: 'bone' },
+  'camera.remove': { label: 'Remove camera', colour: 'bone' },
 } as const satisfies Record<string, Word>
 export type ShootAction = keyof typeof ACTION_WORDS
 
@@ -139,6 +143,10 @@ export const COMMAND_ACTIONS: Record<ShootCommandType, readonly ShootAction[]> =
   'clock.speed': ['clock.speed'],
   'marker.add': ['marker.add'],
   'wait.start': ['wait.start'],
+  'marker.edit': ['marker.edit'],
+  'marker.delete': ['marker.delete'],
+  'camera.set': ['camera.set'],
+  'camera.remove': ['camera.remove'],
 }
 
 /** A button's words, for messages: “Done”. */

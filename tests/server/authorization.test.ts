@@ -62,6 +62,10 @@ const rows: Row[] = [
   { file: 'shoots/[id]/join-codes/index.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}/join-codes`, expect: shoot(200, 403, 403, 403, 403, 403) },
   { file: 'shoots/[id]/join-codes/index.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/join-codes`, body: () => ({ role: 'camera' }), expect: shoot(201, 403, 403, 403, 403, 403) },
   { file: 'shoots/[id]/join-codes/[codeId].delete.ts', method: 'DELETE', path: (i) => `/api/shoots/${i.shoot}/join-codes/999999`, expect: shoot(404, 403, 403, 403, 403, 403) },
+  // The take log's exports are the producer's and the viewer's (the editor), never a device's.
+  { file: 'shoots/[id]/markers.csv.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}/markers.csv?rate=25`, expect: shoot(200, 403, 403, 200, 403, 403) },
+  { file: 'shoots/[id]/markers.vtt.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}/markers.vtt?rate=29.97df`, expect: shoot(200, 403, 403, 200, 403, 403) },
+  { file: 'shoots/[id]/markers.json.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}/markers.json?rate=25`, expect: shoot(200, 403, 403, 200, 403, 403) },
   { file: 'episodes/[id]/shoots.post.ts', method: 'POST', path: (i) => `/api/episodes/${i.episode}/shoots`, body: () => ({ mode: 'rehearsal' }), expect: studio(201, 403, 403, 403) },
   // Rolling is the producer's and the camera's (the role table of shoot commands): they get past it to
   // the shoot, which refuses a camera that is not rolling to stop rolling (409); host and viewer get 403.
@@ -250,6 +254,10 @@ describe('authorisation matrix', async () => {
       'clock.speed': { speed: 2 },
       'marker.add': { kind: 'good' },
       'wait.start': { stepId: 'matrix-step' },
+      'marker.edit': { markerId: 'matrix-marker', text: 'Matrix note' },
+      'marker.delete': { markerId: 'matrix-marker' },
+      'camera.set': { name: 'Matrix camera', rate: '25' },
+      'camera.remove': { cameraId: 'matrix-camera' },
     }
     /** The shoot role each caller acts as; anonymous callers and other studios never get that far. */
     const roleOf: Partial<Record<CallerName, ShootRole>> = {

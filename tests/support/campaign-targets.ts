@@ -120,6 +120,8 @@ export const commandBases: Record<ShootCommandType, Record<string, unknown>> = {
   'timer.resume': { timerId: 't1' }, 'timer.addTime': { timerId: 't1', deltaMs: 60_000 }, 'timer.cancel': { timerId: 't1' },
   'timer.acknowledge': { timerId: 't1' }, 'rolling.set': { rolling: true }, 'clock.speed': { speed: 2 }, 'marker.add': { kind: 'good' },
   'wait.start': { stepId: 'campaign-step' },
+  'marker.edit': { markerId: 'm1', text: 'Campaign note' }, 'marker.delete': { markerId: 'm1' },
+  'camera.set': { name: 'Campaign camera', rate: '25' }, 'camera.remove': { cameraId: 'c1' },
 }
 
 /** Sends one payload as `client` (the app's own Origin, its cookie); the reply's status and parsed body. */

@@ -28,6 +28,11 @@ describe('who may send which command', () => {
     'clock.speed': ['producer'],
     'marker.add': ['producer', 'host', 'camera'],
     'wait.start': ['producer', 'host'],
+    // The take log afterwards: only the producer sets cameras and changes or deletes markers.
+    'marker.edit': ['producer'],
+    'marker.delete': ['producer'],
+    'camera.set': ['producer'],
+    'camera.remove': ['producer'],
   }
   const roles: ShootRole[] = ['producer', 'host', 'camera', 'viewer']
 
@@ -78,6 +83,8 @@ describe('parseShootCommand', () => {
       { type: 'timer.cancel', timerId: 'a' }, { type: 'timer.acknowledge', timerId: 'a' },
       { type: 'rolling.set', rolling: true }, { type: 'clock.speed', speed: 2.5 }, { type: 'marker.add', kind: 'pickup', text: 'from "two cups"' },
       { type: 'wait.start', stepId: '41' },
+      { type: 'marker.edit', markerId: 'm-1', kind: 'good' }, { type: 'marker.delete', markerId: 'm-1' },
+      { type: 'camera.set', name: 'Camera A', rate: '29.97df', start: '01:00:00;00' }, { type: 'camera.remove', cameraId: 'c-1' },
     ]
     expect(samples.map((s) => ok(s).type)).toEqual(SHOOT_COMMAND_TYPES)
   })

@@ -61,7 +61,7 @@ function avTimecodeMakeString(framenumArg: number, fps: number, drop: boolean, s
 const ROUNDED: Record<number, number> = { 23.976: 24, 24: 24, 25: 25, 29.97: 30, 30: 30, 50: 50, 59.94: 60, 60: 60 }
 
 /** Every rate a camera can be set to: each fps, and drop-frame where SMPTE ST 12-1 has it (29.97, 59.94). */
-const EVERY_RATE: TimecodeRate[] = TIMECODE_FPS.flatMap((fps) =>
+const EVERY_RATE: TimecodeRate[] = TIMECODE_FPS.flatMap((fps): TimecodeRate[] =>
   fps === 29.97 || fps === 59.94 ? [{ fps, drop: false }, { fps, drop: true }] : [{ fps, drop: false }])
 
 const name = (rate: TimecodeRate) => timecodeRateName(rate)
@@ -77,7 +77,7 @@ describe('the reference port itself, on the worked values of SMPTE ST 12-1 drop-
   })
 })
 
-describe.each(EVERY_RATE)('round trips at $fps fps (drop $drop)', (rate) => {
+for (const rate of EVERY_RATE) describe(`round trips at ${timecodeRateName(rate)}`, () => {
   const day = timecodeFramesPerDay(rate)
   it(`${'framesToMs → msToFrames'} gives the frame back, for any frame over ten days`, () => {
     fc.assert(fc.property(fc.integer({ min: 0, max: 10 * day }), (frames) => {
