@@ -59,6 +59,7 @@ function newItemId(): string {
 function withIds(cmd: ShootCommand): ShootCommand {
   if (cmd.type === 'timer.start' && !cmd.timerId) return { ...cmd, timerId: newItemId() }
   if (cmd.type === 'marker.add' && !cmd.markerId) return { ...cmd, markerId: newItemId() }
+  if (cmd.type === 'camera.set' && !cmd.cameraId) return { ...cmd, cameraId: newItemId() }
   return cmd
 }
 

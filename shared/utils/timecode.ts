@@ -33,6 +33,10 @@ const RATES: Record<TimecodeFps, RateFacts> = {
 
 export const TIMECODE_FPS: readonly TimecodeFps[] = [23.976, 24, 25, 29.97, 30, 50, 59.94, 60]
 
+/** Every rate a camera can be set to: each fps, non-drop, and drop-frame after 29.97 and 59.94. */
+export const TIMECODE_RATES: readonly TimecodeRate[] = TIMECODE_FPS.flatMap((fps): TimecodeRate[] =>
+  fps === 29.97 || fps === 59.94 ? [{ fps, drop: false }, { fps, drop: true }] : [{ fps, drop: false }])
+
 function rateFacts(rate: TimecodeRate): RateFacts & { drop: number } {
   const facts = (RATES as Record<number, RateFacts | undefined>)[rate?.fps]
   if (!facts) throw new RangeError(`${rate?.fps} fps is not a timecode rate Hobline knows; use one of ${TIMECODE_FPS.join(', ')}`)

@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
 import {
-  TIMECODE_FPS, defaultStartTimecode, framesToMs, framesToTimecode, msToFrames, parseTimecodeRate, timecodeAfter,
+  TIMECODE_RATES, defaultStartTimecode, framesToMs, framesToTimecode, msToFrames, parseTimecodeRate, timecodeAfter,
   timecodeFramesPerDay, timecodeRateName, timecodeRateText, timecodeToFrames, type TimecodeRate,
 } from '../../shared/utils/timecode'
 
@@ -61,8 +61,10 @@ function avTimecodeMakeString(framenumArg: number, fps: number, drop: boolean, s
 const ROUNDED: Record<number, number> = { 23.976: 24, 24: 24, 25: 25, 29.97: 30, 30: 30, 50: 50, 59.94: 60, 60: 60 }
 
 /** Every rate a camera can be set to: each fps, and drop-frame where SMPTE ST 12-1 has it (29.97, 59.94). */
-const EVERY_RATE: TimecodeRate[] = TIMECODE_FPS.flatMap((fps): TimecodeRate[] =>
-  fps === 29.97 || fps === 59.94 ? [{ fps, drop: false }, { fps, drop: true }] : [{ fps, drop: false }])
+const EVERY_RATE = TIMECODE_RATES
+it('offers every rate of the issue: 23.976, 24, 25, 29.97 DF and NDF, 30, 50, 59.94 DF and NDF, 60', () => {
+  expect(EVERY_RATE.map(timecodeRateText)).toEqual(['23.976', '24', '25', '29.97', '29.97df', '30', '50', '59.94', '59.94df', '60'])
+})
 
 const name = (rate: TimecodeRate) => timecodeRateName(rate)
 
