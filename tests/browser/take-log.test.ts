@@ -53,8 +53,10 @@ describe.skipIf(!chromiumAvailable())('the take log', async () => {
     await desk.locator('[data-testid="shoot-rolling"][data-rolling="true"]').waitFor()
     await phone.waitForTimeout(700)
     await phone.getByTestId('mark-flub').click()
+    await phone.getByText('Marked: Flub').waitFor()
     await phone.waitForTimeout(1300)
     await phone.getByTestId('mark-good').click()
+    await phone.getByText('Marked: Good take').waitFor()
 
     // The desk shows both as they come, with Camera A's timecode.
     await desk.getByTestId('log-flub').waitFor()
@@ -74,9 +76,9 @@ describe.skipIf(!chromiumAvailable())('the take log', async () => {
     // From the desk to the take log: grouped by segment and step, at Camera A.
     await desk.getByTestId('open-take-log').click()
     await desk.waitForURL(`**/shoots/${shootId}/takes`)
-    await online(desk)
     const list = desk.getByTestId('take-log-list')
     await list.getByTestId('take-flub').waitFor()
+    await expect.poll(() => desk.getByTestId('offline-banner').count()).toBe(0)
     await expect(list.getByTestId('take-flub').getByTestId('timecode').textContent()).resolves.toBe(at25(flub.recordingMs!))
     await expect(list.getByTestId('take-good').getByTestId('timecode').textContent()).resolves.toBe(at25(good.recordingMs!))
     const cookTitle = state.runOrder[flub.stepRef.segment]!.title!
@@ -96,14 +98,32 @@ describe.skipIf(!chromiumAvailable())('the take log', async () => {
     await desk.getByTestId('show-flub').uncheck()
     await expect(list.getByTestId('take-flub').count()).resolves.toBe(0)
     await desk.getByTestId('show-flub').check()
+    // A pickup marked on set shows live as still to record; the producer changes the flub's note and
+    // deletes the pickup on the page: kept in the log, gone from the list and the downloads.
+    await phone.getByTestId('mark-pickup').click()
+    await list.getByTestId('take-pickup').waitFor()
+    await expect(desk.getByTestId('open-pickups').textContent()).resolves.toMatch(/1 pickup\s+still to record/)
+    await expect(list.getByTestId('take-pickup').textContent()).resolves.toContain('still to record')
     expect(await axeViolations(desk)).toEqual([])
     await screenshot(desk, 'take-log-page')
+    await list.getByTestId('take-flub').getByRole('button', { name: 'Change this marker' }).click()
+    await list.getByTestId('edit-text').fill('lid fell: use the second take')
+    await list.getByRole('button', { name: 'Save marker' }).click()
+    await expect.poll(() => list.getByTestId('take-flub').getByTestId('note').textContent()).toBe('lid fell: use the second take')
+    await expect(list.getByTestId('take-flub').locator('summary').textContent()).resolves.toBe('Changed once')
+    await list.getByTestId('take-pickup').getByRole('button', { name: 'Delete this marker' }).click()
+    await expect.poll(() => list.getByTestId('take-pickup').count()).toBe(0)
+    await expect(desk.getByTestId('deleted-markers').textContent()).resolves.toMatch(/1 deleted marker/)
+    const tidied = (await (await desk.request.get(url(`/api/shoots/${shootId}`))).json()).state as ShootState
+    expect(tidied.markers.find((m) => m.kind === 'flub')!.changes).toEqual([expect.objectContaining({ before: { kind: 'flub', text: null }, after: { kind: 'flub', text: 'lid fell: use the second take' } })])
+    expect(tidied.markers.find((m) => m.kind === 'pickup')).toMatchObject({ deleted: true })
 
     // The downloads hold both, at Camera B's labels; cue times are the recording times to the ms.
     const csv = Papa.parse<Record<string, string>>(await download(desk, 'download-csv'), { header: true, skipEmptyLines: true })
     expect(csv.errors).toEqual([])
     expect(csv.data.filter((r) => r.Kind !== 'Chapter').map((r) => [r.Kind, r.Timecode]))
       .toEqual([['Flub', atDf(flub.recordingMs!)], ['Good take', atDf(good.recordingMs!)]])
+    expect(csv.data.find((r) => r.Kind === 'Flub')!.Note).toBe('lid fell: use the second take')
     const vtt = new WebVTTParser().parse(await download(desk, 'download-vtt-markers'), 'metadata')
     expect(vtt.errors).toEqual([])
     expect(vtt.cues.map((c) => [c.id, Math.round(c.startTime * 1000)])).toEqual([[flub.id, flub.recordingMs], [good.id, good.recordingMs]])
