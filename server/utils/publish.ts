@@ -3,7 +3,7 @@
 // and numbers are made in shared/utils/publish-kit.ts; this file gathers the data.
 import { randomBytes } from 'node:crypto'
 import type { H3Event } from 'h3'
-import { Episode, RecipePage } from '../db/models'
+import { Episode, Recipe, RecipePage } from '../db/models'
 import { DomainError } from '../../shared/utils/domain-error'
 import { countryOfLocale } from '../../shared/utils/cautions'
 import { formatMoney } from '../../shared/utils/money'
@@ -19,6 +19,9 @@ import { loadRecipe, recipeDraft, studioSettings, type RecipeView } from './reci
 
 type Settings = Awaited<ReturnType<typeof studioSettings>>
 type Prices = Awaited<ReturnType<typeof pricesFor>>
+
+/** "2 cans butter beans, drained": the scaled amount, the item and its prep. */
+const ingredientLine = (i: { text: string; item: string; prep: string | null }) => `${[i.text, i.item].filter(Boolean).join(' ')}${i.prep ? `, ${i.prep}` : ''}`
 
 /** Words of a list: "a", "a and b", "a, b and c". */
 const listWords = (items: string[]) => items.length <= 1 ? (items[0] ?? '') : `${items.slice(0, -1).join(', ')} and ${items.at(-1)}`
@@ -66,9 +69,14 @@ function takeLabel(row: ShootRow, settings: Settings): string {
 
 /** The chapters of a recording, each with its step's name (or its segment's title) for a Clip. */
 function namedChapters(row: ShootRow) {
-  const names = new Map((row.state.plan?.steps ?? []).map((s) => [s.id, s.name ?? s.label ?? s.recipeTitle]))
-  return takeChapters(row.state.markers, row.state.runOrder).map((c) => ({ ...c, name: (c.stepId && names.get(c.stepId)) || c.segmentTitle }))
+  const steps = row.state.plan?.steps ?? []
+  const names = new Map(steps.map((s) => [s.id, s.name ?? s.label ?? s.recipeTitle]))
+  return takeChapters(row.state.markers, row.state.runOrder, recipesOfSteps(row))
+    .map((c) => ({ ...c, name: (c.stepId && names.get(c.stepId)) || c.segmentTitle }))
 }
+
+/** Each step's recipe title, from the shoot's plan. */
+const recipesOfSteps = (row: ShootRow) => new Map((row.state.plan?.steps ?? []).map((s) => [s.id, s.recipeTitle]))
 
 /** Where a recording ends: the recording time of its rolls (or its last marker, for a shoot still rolling). */
 function recordingEndMs(row: ShootRow): number {
@@ -90,12 +98,11 @@ async function recipeVideo(recipeId: number, episodeId: number | null, imageUrl:
   const row = episode && await chosenTake(episode)
   if (!episode || !row) return null
   const steps = new Set((await loadRecipe(recipeId))?.steps.map((s) => String(s.id)) ?? [])
-  const segment = row.state.runOrder.find((s) => s.stepIds.some((id) => steps.has(id)))
-  if (!segment) return null
+  if (!row.state.runOrder.some((s) => s.stepIds.some((id) => steps.has(id)))) return null
   const video: Record<string, unknown> = {
     '@type': 'VideoObject', name: episode.title, description: `${episode.title}: the recipe's part of the episode, chapter by chapter.`,
     uploadDate: new Date(row.state.endedAtServerMs ?? row.state.startedAtServerMs ?? Date.now()).toISOString(),
-    hasPart: recipeClips(segment.id, namedChapters(row), recordingEndMs(row), episode.videoUrl),
+    hasPart: recipeClips(steps, namedChapters(row), recordingEndMs(row), episode.videoUrl),
   }
   if (episode.videoUrl) video.contentUrl = episode.videoUrl
   if (imageUrl) video.thumbnailUrl = [imageUrl]
@@ -114,6 +121,15 @@ function publicJsonLd(view: RecipeView, imageUrl: string | null) {
   return ld
 }
 
+/** The stored photo of a published recipe; 404 when the page or the photo is not there. */
+export async function publishedPhotoKey(slug: string): Promise<string> {
+  await useDb()
+  const page = await RecipePage.findOne({ where: { slug } })
+  const recipe = page && await Recipe.findByPk(page.recipeId, { attributes: ['photo'] })
+  if (!recipe?.photo) throw new DomainError('not-found', 'There is no published photo at this address.')
+  return recipe.photo
+}
+
 /** A published recipe's page, for anyone with its address; 404 when it is not published. */
 export async function publicRecipePage(slug: string, site: string) {
   await useDb()
@@ -123,14 +139,15 @@ export async function publicRecipePage(slug: string, site: string) {
   const settings = await studioSettings(view.studioId)
   const prices = await pricesFor(view.studioId)
   const scaled = scaleLoadedRecipe(view, settings)
-  const imageUrl = view.photo ? `${site}${view.photo.url}` : null
+  const photo = view.photo ? { url: `/api/published/recipes/${slug}/photo`, thumbUrl: `/api/published/recipes/${slug}/photo?size=thumb` } : null
+  const imageUrl = photo ? `${site}${photo.url}` : null
   const jsonLd = publicJsonLd(view, imageUrl)
   const video = await recipeVideo(view.id, page.episodeId, imageUrl)
   if (video) jsonLd.video = video
   return {
     slug, studio: settings.name, title: view.title, summary: view.summary, servings: view.servings, yieldText: view.yieldText,
-    times: view.times, photo: view.photo, cautionCountry: countryOfLocale(settings.locale),
-    ingredients: scaled.ingredients.map((i) => ({ key: i.key, text: i.text, optional: i.optional, group: i.group })),
+    times: view.times, photo, cautionCountry: countryOfLocale(settings.locale),
+    ingredients: scaled.ingredients.map((i) => ({ key: i.key, text: ingredientLine(i), optional: i.optional, group: i.group })),
     steps: view.steps.map((s, n) => ({ position: s.position, name: s.name, text: scaled.steps[n]!.text, cautions: s.cautions, group: s.group })),
     allergens: view.allergens,
     cost: recipeCostWords(view, settings, prices),
@@ -187,7 +204,7 @@ export async function publishKit(episodeId: number, site: string) {
   const settings = await studioSettings(runOrder.studioId)
   const prices = await pricesFor(runOrder.studioId)
   const row = await chosenTake(episode)
-  const chapters = row ? segmentChapterLines(takeChapters(row.state.markers, row.state.runOrder)) : { lines: [], startsAtZero: false }
+  const chapters = row ? segmentChapterLines(takeChapters(row.state.markers, row.state.runOrder, recipesOfSteps(row))) : { lines: [], startsAtZero: false }
   const recipeIds = runOrder.segments.map((s) => s.recipeId).filter((id): id is number => !!id)
   const pages = new Map((await RecipePage.findAll({ where: { recipeId: recipeIds } })).map((p) => [p.recipeId, p]))
   const recipes = []
@@ -199,7 +216,7 @@ export async function publishKit(episodeId: number, site: string) {
     const page = pages.get(id)
     const url = page ? `${site}/r/${page.slug}` : null
     const scaled = scaleLoadedRecipe(view, settings, show.servings, show.units)
-    const ingredients = scaled.ingredients.map((i) => `${i.text}${i.optional ? ' (optional)' : ''}`)
+    const ingredients = scaled.ingredients.map((i) => `${ingredientLine(i)}${i.optional ? ' (optional)' : ''}`)
     recipes.push({ recipeId: id, title: view.title, cost: words, page: page ? { slug: page.slug, url, publishedBy: page.publishedByName } : null })
     described.push({ title: view.title, costLine: `${words.line} at ${show.servings} ${show.servings === 1 ? 'serving' : 'servings'}`, ingredients, pageUrl: url })
     seenPrices.push(words.prices.line)

@@ -14,17 +14,18 @@ export interface ChapterLine {
 }
 
 /**
- * One line per segment, at the first chapter of that segment in recording order; a segment the
- * recording never reached has no line. Video sites read such lines as chapters when the first says
- * 0:00 (common practice of video sites; not a standard): `startsAtZero` says whether it does.
+ * One line per part of the show (a talk segment, or a recipe: a cook-plan segment interleaves
+ * recipes), at its first chapter in recording order; a part the recording never reached has no
+ * line. Video sites read such lines as chapters when the first says 0:00 (common practice of video
+ * sites; not a standard): `startsAtZero` says whether it does.
  */
 export function segmentChapterLines(chapters: readonly TakeChapter[]): { lines: ChapterLine[]; startsAtZero: boolean } {
   const seen = new Set<string>()
   const lines: ChapterLine[] = []
   for (const c of [...chapters].sort((a, b) => a.recordingMs - b.recordingMs)) {
-    if (seen.has(c.segmentId)) continue
-    seen.add(c.segmentId)
-    lines.push({ segmentId: c.segmentId, title: c.segmentTitle, recordingMs: c.recordingMs, line: `${clockTextMs(c.recordingMs, 'down')} ${c.segmentTitle}` })
+    if (seen.has(c.partId)) continue
+    seen.add(c.partId)
+    lines.push({ segmentId: c.segmentId, title: c.partTitle, recordingMs: c.recordingMs, line: `${clockTextMs(c.recordingMs, 'down')} ${c.partTitle}` })
   }
   return { lines, startsAtZero: lines.length > 0 && lines[0]!.recordingMs < 1000 }
 }
@@ -39,21 +40,19 @@ export interface StepChapter {
 export const offsetSeconds = (ms: number) => Math.round(ms) / 1000
 
 /**
- * The `Clip` parts of a recipe's video: one per chapter of its segment (the first visit of each
- * step), each ending where the next chapter of the recording starts (or where the recording ends).
+ * The `Clip` parts of a recipe's video: one per chapter of its steps (the first visit of each step),
+ * each ending where the next chapter of the recording starts (or where the recording ends).
  * `url` is the video's address at that second (`t=` seconds, as video sites read it: common practice).
  */
 export function recipeClips(
-  segmentId: string, chapters: readonly (TakeChapter & { name: string })[], recordingEndMs: number, videoUrl: string | null,
+  stepIds: ReadonlySet<string>, chapters: readonly (TakeChapter & { name: string })[], recordingEndMs: number, videoUrl: string | null,
 ): Record<string, unknown>[] {
   const all = [...chapters].sort((a, b) => a.recordingMs - b.recordingMs)
   const firstOfStep = new Set<string>()
   const clips: Record<string, unknown>[] = []
   all.forEach((c, i) => {
-    if (c.segmentId !== segmentId) return
-    const key = c.stepId ?? ''
-    if (firstOfStep.has(key)) return
-    firstOfStep.add(key)
+    if (c.stepId === null || !stepIds.has(c.stepId) || firstOfStep.has(c.stepId)) return
+    firstOfStep.add(c.stepId)
     const end = all[i + 1]?.recordingMs ?? recordingEndMs
     const clip: Record<string, unknown> = {
       '@type': 'Clip', name: c.name, startOffset: offsetSeconds(c.recordingMs), endOffset: offsetSeconds(Math.max(end, c.recordingMs)),

@@ -130,6 +130,7 @@ const rows: Row[] = [
   },
   // A public page: no sign-in asked; an address nothing is published at answers 404 to everyone.
   { file: 'published/recipes/[slug].get.ts', method: 'GET', path: () => '/api/published/recipes/not-published-here', expect: all(404) },
+  { file: 'published/recipes/[slug]/photo.get.ts', method: 'GET', path: () => '/api/published/recipes/not-published-here/photo', expect: all(404) },
   { file: 'recipes/[id]/export.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/export`, expect: studio(200, 200, 200, 200) },
   // Photo uploads: a JSON body passes the guard and is then refused as no form upload (400).
   { file: 'recipes/[id]/photo.post.ts', method: 'POST', path: (i) => `/api/recipes/${i.recipe}/photo`, expect: studio(400, 400, 403, 403) },

@@ -18,7 +18,10 @@ describe('the publish kit', async () => {
   let episodeId: number
   let shootId: number
   let stew: { id: number; title: string }
-  let state: { markers: Marker[]; runOrder: { id: string; title: string; stepIds: string[] }[]; recordedMs: number }
+  let state: {
+    markers: Marker[]; runOrder: { id: string; title: string; stepIds: string[] }[]; recordedMs: number
+    plan: { steps: { id: string; recipeTitle: string }[] }
+  }
 
   const command = async (body: Json) => {
     const r = await producer.post(`/api/shoots/${shootId}/commands`, body)
@@ -36,7 +39,7 @@ describe('the publish kit', async () => {
     // Roll, start on the intro, step through the run order a beat at a time, then stop and end.
     await command({ type: 'rolling.set', rolling: true })
     await command({ type: 'shoot.start' })
-    for (let i = 0; i < 6; i++) {
+    for (let i = 0; i < 10; i++) {
       await sleep(120)
       await command({ type: 'step.next' })
     }
@@ -44,28 +47,33 @@ describe('the publish kit', async () => {
     await command({ type: 'rolling.set', rolling: false })
     await command({ type: 'shoot.end', cancelTimers: true })
     state = (await producer.get(`/api/shoots/${shootId}`)).body.state
-    // The recipe the recording reached: the one whose steps the first recipe segment with chapters holds.
-    const reached = state.runOrder.find((seg) => seg.stepIds.length && state.markers.some((m) => m.kind === 'chapter' && m.stepRef.segmentId === seg.id))!
+    // The demo's stew (it has a photo); the recording reached its steps.
     const recipeIds = (await producer.get(`/api/episodes/${episodeId}`)).body.segments.map((seg: Json) => seg.recipeId).filter(Boolean) as number[]
     for (const id of recipeIds) {
       const r = (await producer.get(`/api/recipes/${id}`)).body
-      if (r.steps.some((st: { id: number }) => reached.stepIds.includes(String(st.id)))) stew = { id, title: r.title }
+      if (r.title.includes('stew')) stew = { id, title: r.title }
     }
-    expect(stew, 'the recording reached a recipe').toBeTruthy()
+    expect(stew, 'the demo episode cooks the stew').toBeTruthy()
   })
 
   it('the chosen recording\'s chapter lines come from its take log: one per segment, at its first chapter', async () => {
     const chapters = state.markers.filter((m) => m.kind === 'chapter')
-    expect(chapters.length).toBe(7) // the roll's own, then one per step change while rolling
+    expect(chapters.length).toBe(11) // the roll's own, then one per step change while rolling
     expect(chapters[0]!.recordingMs).toBeLessThan(1000)
     const kit = await producer.patch(`/api/episodes/${episodeId}/publish`, { shootId, videoUrl: 'https://video.example/watch?v=supper' })
     expect(kit.status, JSON.stringify(kit.body)).toBe(200)
     expect(kit.body.takes.map((t: { id: number }) => t.id)).toContain(shootId)
-    // Expected lines worked from the state: the first chapter of each segment, m:ss rounded down.
+    // Expected lines worked from the state: the first chapter of each part of the show (a talk
+    // segment, or a recipe of the cook plan's interleaved segment), m:ss rounded down.
     const titles = new Map(state.runOrder.map((s) => [s.id, s.title]))
+    const recipeOf = new Map(state.plan.steps.map((s) => [s.id, s.recipeTitle]))
     const firsts = new Map<string, number>()
-    for (const c of chapters) if (!firsts.has(c.stepRef.segmentId)) firsts.set(c.stepRef.segmentId, c.recordingMs!)
-    const expected = [...firsts].map(([seg, ms]) => `${Math.floor(ms / 60_000)}:${String(Math.floor(ms / 1000) % 60).padStart(2, '0')} ${titles.get(seg)}`)
+    for (const c of chapters) {
+      const part = (c.stepRef.stepId && recipeOf.get(c.stepRef.stepId)) || titles.get(c.stepRef.segmentId)!
+      if (!firsts.has(part)) firsts.set(part, c.recordingMs!)
+    }
+    expect(firsts.size).toBeGreaterThan(2) // the intro and at least two recipes reached
+    const expected = [...firsts].map(([part, ms]) => `${Math.floor(ms / 60_000)}:${String(Math.floor(ms / 1000) % 60).padStart(2, '0')} ${part}`)
     expect(kit.body.chapters.map((c: { line: string }) => c.line)).toEqual(expected)
     expect(kit.body.chaptersStartAtZero).toBe(true)
     expect(kit.body.description).toContain(`Chapters\n${expected.join('\n')}\n`)
@@ -87,12 +95,17 @@ describe('the publish kit', async () => {
     const ld = JSON.parse(block![1]!)
     expect(ld['@type']).toBe('Recipe')
     expect(JSON.stringify(ld)).not.toContain('hobline:script') // the production's own lines stay private
+    // The photo opens signed out too, from the page's own address.
+    const photo = await fetch(url(`/api/published/recipes/smoky-supper-stew/photo`))
+    expect(photo.status).toBe(200)
+    expect(photo.headers.get('content-type')).toMatch(/^image\//)
+    expect(ld.image[0]).toMatch(/\/api\/published\/recipes\/smoky-supper-stew\/photo$/)
 
     // Clip offsets equal the take log's chapter times of the stew's segment (first visit of each step), to the millisecond.
-    const segmentId = state.runOrder.find((s) => state.markers.some((m) => m.kind === 'chapter' && m.stepRef.segmentId === s.id && s.stepIds.length))!.id
+    const stewSteps = new Set(state.plan.steps.filter((s) => s.recipeTitle === stew.title).map((s) => s.id))
     const seen = new Set<string>()
     const expectedOffsets = state.markers
-      .filter((m) => m.kind === 'chapter' && m.stepRef.segmentId === segmentId && !seen.has(String(m.stepRef.stepId)) && seen.add(String(m.stepRef.stepId)))
+      .filter((m) => m.kind === 'chapter' && stewSteps.has(String(m.stepRef.stepId)) && !seen.has(String(m.stepRef.stepId)) && seen.add(String(m.stepRef.stepId)))
       .map((m) => m.recordingMs! / 1000)
     expect(ld.video['@type']).toBe('VideoObject')
     expect(ld.video.contentUrl).toBe('https://video.example/watch?v=supper')

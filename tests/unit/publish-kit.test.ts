@@ -51,15 +51,32 @@ describe('Clip parts of a recipe video', () => {
   it('one Clip per step of the segment, from its first chapter to the next chapter of the recording', () => {
     const names = { 11: 'Soften the onions', 12: 'Simmer the beans' } as Record<string, string>
     const chapters = takeChapters(log, runOrder).map((c) => ({ ...c, name: names[c.stepId ?? ''] ?? c.segmentTitle }))
-    const clips = recipeClips('segment-stew', chapters, 240_000, 'https://video.example/watch?v=abc')
+    const clips = recipeClips(new Set(['11', '12']), chapters, 240_000, 'https://video.example/watch?v=abc')
     expect(clips).toEqual([
       { '@type': 'Clip', name: 'Soften the onions', startOffset: 95.5, endOffset: 130.25, url: 'https://video.example/watch?v=abc&t=95' },
       { '@type': 'Clip', name: 'Simmer the beans', startOffset: 130.25, endOffset: 150, url: 'https://video.example/watch?v=abc&t=130' },
     ])
   })
   it('the last clip of a recording ends where the recording ends', () => {
-    const chapters = takeChapters(log, runOrder).map((c) => ({ ...c, name: c.segmentTitle }))
-    expect(recipeClips('segment-outro', chapters, 240_000, null)).toEqual([{ '@type': 'Clip', name: 'Sign-off', startOffset: 200.999, endOffset: 240 }])
+    const last = [...log, marker('chapter', 'segment-stew', '12', 230_000)]
+    const chapters = takeChapters(last, runOrder).map((c) => ({ ...c, name: 'Simmer the beans' }))
+    expect(recipeClips(new Set(['12']), chapters, 240_000, null)).toEqual([
+      { '@type': 'Clip', name: 'Simmer the beans', startOffset: 130.25, endOffset: 150 },
+    ])
+    const onlyLast = takeChapters([marker('chapter', 'segment-stew', '12', 230_000)], runOrder).map((c) => ({ ...c, name: 'Simmer' }))
+    expect(recipeClips(new Set(['12']), onlyLast, 240_000, null)).toEqual([{ '@type': 'Clip', name: 'Simmer', startOffset: 230, endOffset: 240 }])
+  })
+  it('a cook-plan segment that interleaves two recipes: one line per recipe, and each recipe\'s Clips are its own steps', () => {
+    // Steps 11 and 12 are the stew's, 21 the flatbread's, all in one cooking segment.
+    const cooking = [{ id: 'segment-cook', title: 'Cooking', stepIds: ['11', '21', '12'] }]
+    const recipeOf = new Map([['11', 'Smoky bean stew'], ['12', 'Smoky bean stew'], ['21', 'Pan flatbreads']])
+    const interleaved = [
+      marker('chapter', 'segment-cook', '11', 10_000), marker('chapter', 'segment-cook', '21', 70_000), marker('chapter', 'segment-cook', '12', 100_000),
+    ]
+    const chapters = takeChapters(interleaved, cooking, recipeOf)
+    expect(segmentChapterLines(chapters).lines.map((l) => l.line)).toEqual(['0:10 Smoky bean stew', '1:10 Pan flatbreads'])
+    const clips = recipeClips(new Set(['11', '12']), chapters.map((c) => ({ ...c, name: c.stepId! })), 130_000, null)
+    expect(clips.map((c) => [c.name, c.startOffset, c.endOffset])).toEqual([['11', 10, 70], ['12', 100, 130]])
   })
   it('puts the second into the video address', () => {
     expect(videoAt('https://video.example/v/abc', 61_999)).toBe('https://video.example/v/abc?t=61')
