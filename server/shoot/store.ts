@@ -51,6 +51,8 @@ export interface ShootStore {
   studioOf(shootId: number): Promise<number | null>
   /** Shoots that have not ended: the ticker watches their timers. */
   live(): Promise<ShootRow[]>
+  /** An episode's recordings (take mode), newest first. */
+  takesOf(episodeId: number): Promise<ShootRow[]>
   /** The event log of a shoot, in sequence order. */
   events(shootId: number): Promise<Array<ShootLogEntry & { seq: number }>>
   /** BEGIN IMMEDIATE … COMMIT around `fn` (ROLLBACK when it throws), after every earlier job. */
@@ -158,6 +160,9 @@ export function openShootStore(path: string, ready: () => Promise<unknown> = asy
       return r?.studio_id ?? null
     },
     live: () => queued(async () => (await all<Raw>(`SELECT ${COLUMNS} FROM shoots WHERE status IN ('ready', 'running', 'paused')`)).map(toRow)),
+    takesOf: (episodeId) => queued(async () => (await all<Raw>(
+      `SELECT ${COLUMNS} FROM shoots WHERE episode_id = ? AND mode = 'take' ORDER BY id DESC`, [episodeId],
+    )).map(toRow)),
     events: (shootId) => queued(async () => (await all<{ seq: number; type: string; command: string; actor: string; server_ms: number }>(
       'SELECT seq, type, command, actor, server_ms FROM shoot_events WHERE shoot_id = ? ORDER BY seq', [shootId],
     )).map((e) => ({ seq: e.seq, type: e.type, command: JSON.parse(e.command), actor: JSON.parse(e.actor), serverMs: Number(e.server_ms) }))),

@@ -92,9 +92,8 @@ export interface ShootTimer {
 
 /** The kinds a person marks; a chapter is marked by the shoot itself at every step change while rolling. */
 export const SHOOT_MARKER_KINDS = ['good', 'flub', 'pickup', 'note'] as const
-/** A kind a person marks (and a marker can be changed to afterwards). */
-export type ShootMarkKind = (typeof SHOOT_MARKER_KINDS)[number]
-export type ShootMarkerKind = ShootMarkKind | 'chapter'
+export type HandMarkerKind = (typeof SHOOT_MARKER_KINDS)[number]
+export type ShootMarkerKind = HandMarkerKind | 'chapter'
 
 export interface ShootMarker {
   id: string

@@ -51,12 +51,14 @@ function vttFile(title: string, cues: Cue[]): string {
 }
 
 /**
- * Chapters: one cue per step change while rolling, until the next chapter or the end of the
+ * Chapters: one cue per step change while rolling ("recipe: step", or the segment's title for a
+ * segment without steps), until the next chapter or the end of the
  * recording. A chapter followed by another at the same recording time (steps passed while the
  * camera did not move on) has no length and gives way to the later one.
  */
 export function takeLogChapterCues(s: TakeState, recordingEndMs: number): Cue[] {
-  const chapters = takeChapters(s.markers, s.runOrder)
+  const recipeOfStep = new Map((s.plan?.steps ?? []).map((p) => [p.id, p.recipeTitle]))
+  const chapters = takeChapters(s.markers, s.runOrder, recipeOfStep)
   const stepLabel = (c: TakeChapter) => {
     const step = Math.max(0, s.runOrder.find((seg) => seg.id === c.segmentId)?.stepIds.indexOf(c.stepId ?? '') ?? 0)
     return takeStepLabel(s, { segment: 0, step, segmentId: c.segmentId, stepId: c.stepId })
@@ -66,7 +68,7 @@ export function takeLogChapterCues(s: TakeState, recordingEndMs: number): Cue[] 
     if (next && next.recordingMs <= c.recordingMs) return []
     const endMs = next ? next.recordingMs : Math.max(recordingEndMs, c.recordingMs + 1)
     const step = stepLabel(c)
-    return [{ id: `chapter-${i + 1}`, startMs: c.recordingMs, endMs, text: step ? `${c.segmentTitle}: ${step}` : c.segmentTitle }]
+    return [{ id: `chapter-${i + 1}`, startMs: c.recordingMs, endMs, text: step ? `${c.partTitle}: ${step}` : c.partTitle }]
   })
 }
 

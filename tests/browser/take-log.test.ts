@@ -129,7 +129,10 @@ describe.skipIf(!chromiumAvailable())('the take log', async () => {
     expect(vtt.cues.map((c) => [c.id, Math.round(c.startTime * 1000)])).toEqual([[flub.id, flub.recordingMs], [good.id, good.recordingMs]])
     const chapters = new WebVTTParser().parse(await download(desk, 'download-vtt-chapters'), 'chapters')
     expect(chapters.errors).toEqual([])
-    expect(chapters.cues[0]!.text).toContain(cookTitle)
+    // The take opened on a chapter at the step on screen: "recipe: step".
+    const firstStep = state.plan!.steps.find((p) => p.id === flub.stepRef.stepId)!
+    expect(chapters.cues[0]!.text).toBe(`${firstStep.recipeTitle}: ${firstStep.name ?? `Step ${flub.stepRef.step + 1}`}`)
+    expect(Math.round(chapters.cues[0]!.startTime * 1000)).toBe(0)
 
     expect(deskErrors).toEqual([])
     expect(phoneErrors).toEqual([])

@@ -48,7 +48,10 @@ describe('the take log and its exports', async () => {
   const byId = (id: string) => state.markers.find((m) => m.id === id)!
 
   beforeAll(async () => {
-    ;[producer, host, camera, viewer] = await Promise.all([demo.producer, demo.host, demo.camera, demo.viewer].map((e) => signedIn(e)))
+    producer = await signedIn(demo.producer)
+    host = await signedIn(demo.host)
+    camera = await signedIn(demo.camera)
+    viewer = await signedIn(demo.viewer)
     const episodes = (await producer.get('/api/studios/1/episodes')).body.episodes as Array<{ id: number }>
     const made = await producer.post(`/api/episodes/${episodes[0]!.id}/shoots`, { mode: 'take' })
     expect(made.status).toBe(201)
