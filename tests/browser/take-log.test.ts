@@ -78,7 +78,7 @@ describe.skipIf(!chromiumAvailable())('the take log', async () => {
     await desk.waitForURL(`**/shoots/${shootId}/takes`)
     const list = desk.getByTestId('take-log-list')
     await list.getByTestId('take-flub').waitFor()
-    await expect.poll(() => desk.getByTestId('offline-banner').count()).toBe(0)
+    await desk.locator('[data-testid="take-log-page"][data-online="true"]').waitFor()
     await expect(list.getByTestId('take-flub').getByTestId('timecode').textContent()).resolves.toBe(at25(flub.recordingMs!))
     await expect(list.getByTestId('take-good').getByTestId('timecode').textContent()).resolves.toBe(at25(good.recordingMs!))
     const cookTitle = state.runOrder[flub.stepRef.segment]!.title!
