@@ -2,41 +2,22 @@
 // drop-frame rule of SMPTE ST 12-1 (29.97 fps: labels 00 and 01 skipped at the start of every
 // minute except minutes divisible by 10; 59.94 fps: 00–03), and every label is compared with an
 // independent oracle: FFmpeg's libavutil/timecode.c (av_timecode_adjust_ntsc_framenum2 and
-// av_timecode_make_string), reimplemented here from its published formula.
+// av_timecode_make_string), ported in tests/support/ffmpeg-timecode.ts.
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
 import {
   TIMECODE_FPS, framesToMs, framesToTimecode, msToFrames, parseTimecodeRate, timecodeFramesPerDay, timecodeToFrames,
   type TimecodeRate,
 } from '../../shared/utils/timecode'
+import { ROUNDED_FPS, avTimecodeMakeString } from '../support/ffmpeg-timecode'
 
 const DF2997: TimecodeRate = { fps: 29.97, drop: true }
 const DF5994: TimecodeRate = { fps: 59.94, drop: true }
 
-// FFmpeg libavutil/timecode.c, av_timecode_adjust_ntsc_framenum2(framenum, fps), with C integer
-// division (truncation toward zero) written as Math.trunc:
-//   drop_frames = fps / 30 * 2; frames_per_10mins = fps / 30 * 17982;
-//   d = framenum / frames_per_10mins; m = framenum % frames_per_10mins;
-//   return framenum + 9 * drop_frames * d + drop_frames * ((m - drop_frames) / (frames_per_10mins / 10));
-function ffmpegAdjustNtscFramenum2(framenum: number, fps: number): number {
-  if (!(fps && fps % 30 === 0)) return framenum
-  const dropFrames = (fps / 30) * 2
-  const framesPer10Mins = (fps / 30) * 17982
-  const d = Math.trunc(framenum / framesPer10Mins)
-  const m = framenum % framesPer10Mins
-  return framenum + 9 * dropFrames * d + dropFrames * Math.trunc((m - dropFrames) / Math.trunc(framesPer10Mins / 10))
-}
-// av_timecode_make_string with AV_TIMECODE_FLAG_24HOURSMAX; `fps` is the rounded rate (30 for 29.97).
-function ffmpegMakeString(framenum: number, fps: number, drop: boolean): string {
-  const n = drop ? ffmpegAdjustNtscFramenum2(framenum, fps) : framenum
-  const ff = n % fps
-  const ss = Math.trunc(n / fps) % 60
-  const mm = Math.trunc(n / (fps * 60)) % 60
-  const hh = Math.trunc(n / (fps * 3600)) % 24
-  const p = (x: number) => String(x).padStart(2, '0')
-  return `${p(hh)}:${p(mm)}:${p(ss)}${drop ? ';' : ':'}${p(ff)}`
-}
-const ROUNDED: Record<number, number> = { 23.976: 24, 24: 24, 25: 25, 29.97: 30, 30: 30, 50: 50, 59.94: 60, 60: 60 }
+// FFmpeg's av_timecode_make_string with AV_TIMECODE_FLAG_24HOURSMAX, ported in tests/support/ffmpeg-timecode.ts;
+// `fps` is the rounded rate (30 for 29.97).
+const ffmpegMakeString = (framenum: number, fps: number, drop: boolean) => avTimecodeMakeString(framenum, fps, drop)
+const ROUNDED = ROUNDED_FPS
 
 describe('29.97 fps drop-frame, worked values from the SMPTE ST 12-1 rule', () => {
   it('keeps every label through the first minute: 1799 frames = 00:00:59;29', () => {
