@@ -56,13 +56,18 @@ export interface RehearsalReport {
 
 export const OVERRUNS_LISTED = 5
 
+/** What stepActuals reads of a shoot. */
+export type ShootTimingState = Pick<ShootState, 'status' | 'clock' | 'visits' | 'timers' | 'endedAtServerMs'> & {
+  plan?: { steps: readonly ShootPlanStep[] } | null
+}
+
 /** The shoot clock at the end of the shoot, or now while it is not over. */
-function shootEndMs(state: ShootState, nowServerMs: number): number {
+function shootEndMs(state: Pick<ShootState, 'clock' | 'endedAtServerMs'>, nowServerMs: number): number {
   return shootClockAt(state.clock, state.endedAtServerMs ?? nowServerMs)
 }
 
 /** The kitchen time each step took (see the rule at the top); steps not measured are absent. */
-export function stepActuals(state: ShootState, nowServerMs: number): Map<string, StepActual> {
+export function stepActuals(state: ShootTimingState, nowServerMs: number): Map<string, StepActual> {
   const out = new Map<string, StepActual>()
   const planSteps = new Map((state.plan?.steps ?? []).map((p) => [p.id, p]))
   const timed = new Set<string>()
