@@ -56,7 +56,8 @@ export async function loadRehearsalReport(shootId: number) {
   const started = state.startedAtServerMs ?? now
   return {
     shoot: {
-      id: Number(row.id), title: row.title, episodeId: row.episodeId, status: state.status, statusText: STATUS_WORDS[state.status].label,
+      id: Number(row.id), studioId: row.studioId, title: row.title, episodeId: row.episodeId,
+      status: state.status, statusText: STATUS_WORDS[state.status].label,
       speed: state.clock.speed, started: state.startedAtServerMs !== null,
       dateText: dateTimeInZone(new Date(started), settings.locale, settings.timeZone),
     },
