@@ -13,7 +13,10 @@ import { type Client, demo, signedIn } from '../support/client'
 const SPEED = 32
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms))
 type Step = { id: number; durationMin: number | null; durationMax: number | null }
-type ReportStep = { stepId: string; label: string; actualMs: number | null; source: string | null; overMs: number | null; suggested: { min: number; max: number; rehearsals: number } | null }
+type ReportStep = {
+  stepId: string; label: string; actualMs: number | null; source: string | null; overMs: number | null
+  suggested: { min: number; max: number; rehearsals: number } | null
+}
 
 describe('the rehearsal report', async () => {
   await useBuiltApp()
@@ -143,7 +146,8 @@ describe('the rehearsal report', async () => {
     const after = (await producer.get(`/api/recipes/${recipeId}`)).body
     expect(after.version).toBe(before.version + 1)
     const suggested = report.steps.map((s: ReportStep) => s.suggested)
-    expect(after.steps.map((s: Step) => ({ min: s.durationMin, max: s.durationMax }))).toEqual(suggested.map((s: { min: number; max: number }) => ({ min: s.min, max: s.max })))
+    const ranges = after.steps.map((s: Step) => ({ min: s.durationMin, max: s.durationMax }))
+    expect(ranges).toEqual(suggested.map((s: { min: number; max: number }) => ({ min: s.min, max: s.max })))
     // One cook, a chain: the plan's makespan is the three long ends added.
     const makespan = (await producer.get(`/api/episodes/${episodeId}/plan`)).body.makespan
     expect(makespan).toBe(suggested.reduce((sum: number, s: { max: number }) => sum + s.max, 0))
