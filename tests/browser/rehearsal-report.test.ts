@@ -111,6 +111,7 @@ describe.skipIf(!chromiumAvailable())('the rehearsal report', async () => {
       expect(await row.getByRole('link', { name: /^Report/ }).getAttribute('href')).toBe(`/shoots/${shootId}/report`)
       expect(await row.getByRole('link', { name: /^Take log/ }).getAttribute('href')).toBe(`/shoots/${shootId}/takes`)
       expect(await axeViolations(page)).toEqual([])
+      await screenshot(page, `shoots-list-${path.split('/')[1]}`)
     }
     await page.goto(url('/episodes/1'), { waitUntil: 'networkidle' })
     expect(await page.getByRole('link', { name: 'Shoots', exact: true }).first().getAttribute('href')).toMatch(/\/shoots$/)
