@@ -3,33 +3,18 @@
 // start, shared/utils/shoot-clock.ts). The measuring rule (timer for a timed wait, the cursor for
 // the rest) and the suggested range's rounding are Hobline's own rules, stated in the module.
 import { describe, expect, it } from 'vitest'
-import type { ShootActor, ShootPlanStep, ShootState } from '../../shared/types/shoot'
+import type { ShootActor, ShootState } from '../../shared/types/shoot'
 import { createShootState } from '../../shared/utils/shoot'
 import { applyShootCommand } from '../../shared/utils/shoot-reducer'
-import { planShootRun, type ScriptRecipe } from '../../shared/utils/shoot-plan'
+import { planShootRun } from '../../shared/utils/shoot-plan'
+import { KITCHEN, RECIPES, STEPS } from '../support/lentil-kitchen'
 import { biggestOverruns, rehearsalReport, stepActuals, suggestedRange, suggestedRanges } from '../../shared/utils/rehearsal-report'
 
 const T0 = 1_760_000_000_000
 const S = 1000
 const MIN = 60_000
+// The kitchen of tests/support/lentil-kitchen.ts: plan soak 0–30, chop 0–5, simmer 5–30, herbs 5–15, finish 30–33 (min).
 const HOST: ShootActor = { role: 'producer', id: 'user:1' }
-
-const step = (id: string, minutes: [number | null, number], handsOn: boolean, extra: Partial<ShootPlanStep> = {}): ShootPlanStep => ({
-  id, duration: minutes[1] * 60, handsOn, station: null, recipe: 'stew', recipeTitle: 'Red lentil stew', label: id, name: null,
-  minMs: minutes[0] === null ? null : minutes[0] * MIN, maxMs: minutes[1] * MIN, ...extra,
-})
-// The kitchen of tests/unit/shoot-live-plan.test.ts: plan soak 0–30, chop 0–5, simmer 5–30, herbs 5–15, finish 30–33 (min).
-const STEPS: ShootPlanStep[] = [
-  step('soak', [25, 30], false, { recipe: 'beans', recipeTitle: 'Soaked beans', name: 'Bean soak' }),
-  step('chop', [null, 5], true, { station: 'counter' }),
-  step('simmer', [20, 25], false, { station: 'burner', after: ['chop'], name: 'Lentils' }),
-  step('herbs', [null, 10], true, { after: ['chop'] }),
-  step('finish', [null, 3], true, { after: ['simmer'] }),
-]
-const RECIPES: ScriptRecipe[] = [
-  { segmentId: 'segment-1', recipeId: 'beans', title: 'Soaked beans', stepIds: ['soak'] },
-  { segmentId: 'segment-2', recipeId: 'stew', title: 'Red lentil stew', stepIds: ['chop', 'simmer', 'herbs', 'finish'] },
-]
 
 function run(s: ShootState, command: unknown, realMs: number): ShootState {
   const r = applyShootCommand(s, command, { nowServerMs: T0 + realMs, actor: HOST })
@@ -46,7 +31,7 @@ const timerId = (s: ShootState, stepId: string) => s.timers.find((t) => t.origin
  *   106 s simmer done (kitchen 1696 s)               120 s end (kitchen 1920 s)
  */
 function rehearsal(): ShootState {
-  const { runOrder, plan } = planShootRun(RECIPES, STEPS, { hands: 1, burners: 4, ovens: 1, racksPerOven: 1, parallelRecipes: true })
+  const { runOrder, plan } = planShootRun(RECIPES, STEPS, KITCHEN)
   let s = createShootState({ id: 'shoot-7', mode: 'rehearsal', runOrder, plan })
   s = run(s, { type: 'clock.speed', speed: 16 }, 0)
   s = run(s, { type: 'shoot.start' }, 0)
@@ -76,7 +61,7 @@ describe('what each step took, in kitchen time', () => {
 
   it('leaves out the step the cursor is still on, and a wait whose timer was cancelled', () => {
     // A shoot whose soak timer was cancelled, read at 60 s while the cursor is still on chop.
-    const { runOrder, plan } = planShootRun(RECIPES, STEPS, { hands: 1, burners: 4, ovens: 1, racksPerOven: 1, parallelRecipes: true })
+    const { runOrder, plan } = planShootRun(RECIPES, STEPS, KITCHEN)
     let s2 = createShootState({ id: 'shoot-8', mode: 'rehearsal', runOrder, plan })
     s2 = run(s2, { type: 'clock.speed', speed: 16 }, 0)
     s2 = run(s2, { type: 'shoot.start' }, 0)
