@@ -194,4 +194,23 @@ describe('the rehearsal report', async () => {
     expect(none.status).toBe(404)
     expect(none.body.message).toBe('A recording has no rehearsal report; open its take log from the list of shoots.')
   })
+
+  it('will not undo over a save made since: the recipe keeps that save', async () => {
+    const report = (await producer.get(`/api/shoots/${shoots[0]}/report`)).body
+    const adopted = await producer.post(`/api/shoots/${shoots[0]}/report/adopt`, { recipes: report.recipes.map((r: { id: number; version: number }) => ({ id: r.id, version: r.version })) })
+    expect(adopted.status).toBe(200)
+    const now = (await host.get(`/api/recipes/${recipeId}`)).body
+    const steps = now.steps.map((s: Step & { name: string | null; text: string; handsOn: boolean; station: string | null }, i: number) => ({
+      id: s.id, name: s.name, text: s.text, handsOn: s.handsOn, station: s.station, durationMin: s.durationMin, durationMax: i === 2 ? 75 : s.durationMax,
+    }))
+    const saved = await host.patch(`/api/recipes/${recipeId}`, { version: now.version, title: now.title, servings: now.servings, steps })
+    expect(saved.status).toBe(200)
+    const undo = await producer.post(`/api/shoots/${shoots[0]}/report/undo`, { adoptionId: adopted.body.adoptionId })
+    expect(undo.status).toBe(409)
+    expect(undo.body.data.code).toBe('conflict')
+    expect(undo.body.message).toMatch(/^“Report test leek broth” was saved by someone else after the actuals were adopted, so undo would overwrite that save/)
+    const kept = (await producer.get(`/api/recipes/${recipeId}`)).body
+    expect(kept.version).toBe(now.version + 1)
+    expect(kept.steps.map((s: Step) => s.durationMax)).toEqual(steps.map((s: { durationMax: number | null }) => s.durationMax))
+  })
 })

@@ -1,7 +1,7 @@
 // The shoot runs the cook plan (shared/utils/shoot-plan.ts planShootRun, shoot-waits.ts,
 // shoot-live-plan.ts): the host's script in plan order, waits whose timers start themselves with the
 // step's range (checked at the short end, ringing at the long end), "start it now" from a cue, and
-// the plan computed again from the present after every change. The kitchen below is small enough to
+// the plan computed again from the present after every change. The kitchen (tests/support/lentil-kitchen.ts) is small enough to
 // work by hand; every expected time is worked in the comment beside it. The scheduler itself is
 // checked against its published sources in plan.test.ts and plan-replan.test.ts.
 import { describe, expect, it } from 'vitest'
