@@ -81,6 +81,8 @@ export interface ShootStore {
   summaries(where: { episodeId: number } | { studioId: number }): Promise<ShootSummaryRow[]>
   /** The studio's rehearsals whose plan has a step of one of these recipes: their timing parts only. */
   rehearsalTimings(studioId: number, recipeIds: string[]): Promise<ShootTimingParts[]>
+  /** An episode's recordings (take mode), newest first. */
+  takesOf(episodeId: number): Promise<ShootRow[]>
   /** The event log of a shoot, in sequence order. */
   events(shootId: number): Promise<Array<ShootLogEntry & { seq: number }>>
   /** BEGIN IMMEDIATE … COMMIT around `fn` (ROLLBACK when it throws), after every earlier job. */
@@ -231,6 +233,9 @@ export function openShootStore(path: string, ready: () => Promise<unknown> = asy
       timers: r.timers ? JSON.parse(r.timers) : [], endedAtServerMs: r.ended === null ? null : Number(r.ended),
       planSteps: r.plan_steps ? JSON.parse(r.plan_steps) : [],
     }))),
+    takesOf: (episodeId) => queued(async () => (await all<Raw>(
+      `SELECT ${COLUMNS} FROM shoots WHERE episode_id = ? AND mode = 'take' ORDER BY id DESC`, [episodeId],
+    )).map(toRow)),
     events: (shootId) => queued(async () => (await all<{ seq: number; type: string; command: string; actor: string; server_ms: number }>(
       'SELECT seq, type, command, actor, server_ms FROM shoot_events WHERE shoot_id = ? ORDER BY seq', [shootId],
     )).map((e) => ({ seq: e.seq, type: e.type, command: JSON.parse(e.command), actor: JSON.parse(e.actor), serverMs: Number(e.server_ms) }))),

@@ -91,7 +91,8 @@ export interface ShootTimer {
 
 /** The kinds a person marks; a chapter is marked by the shoot itself at every step change while rolling. */
 export const SHOOT_MARKER_KINDS = ['good', 'flub', 'pickup', 'note'] as const
-export type ShootMarkerKind = (typeof SHOOT_MARKER_KINDS)[number] | 'chapter'
+export type HandMarkerKind = (typeof SHOOT_MARKER_KINDS)[number]
+export type ShootMarkerKind = HandMarkerKind | 'chapter'
 
 export interface ShootMarker {
   id: string

@@ -105,6 +105,8 @@ const TOP: Record<string, string> = {
   callTime: 'Call time',
   place: 'Place',
   hospital: 'Nearest hospital',
+  slug: 'Address',
+  videoUrl: 'Video address',
   crewCalls: 'Crew call times',
   hash: 'The sheet you read',
 }

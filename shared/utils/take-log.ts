@@ -24,17 +24,30 @@ export interface TakeChapter {
   segmentTitle: string
   stepId: string | null
   recordingMs: number
+  /**
+   * The part of the show the chapter belongs to: its recipe (a cook-plan segment interleaves the
+   * steps of several recipes) or, for a step of no recipe and a segment without steps, its segment.
+   */
+  partId: string
+  partTitle: string
 }
 
-/** The chapters of the recording in recording order, each with the title of its segment. */
-export function takeChapters(markers: readonly ShootMarker[], runOrder: readonly ShootSegment[]): TakeChapter[] {
+/**
+ * The chapters of the recording in recording order, each with its segment and its part of the show.
+ * `recipeOfStep` names the recipe of each step id (the shoot's plan steps know it).
+ */
+export function takeChapters(
+  markers: readonly ShootMarker[], runOrder: readonly ShootSegment[], recipeOfStep: ReadonlyMap<string, string> = new Map(),
+): TakeChapter[] {
   const titles = new Map(runOrder.map((seg) => [seg.id, seg.title ?? seg.id]))
   return markers
     .flatMap((m) => {
       const at = markerRecordingMs(m)
       if (m.kind !== 'chapter' || at === null) return []
       const { segmentId, stepId } = m.stepRef
-      return [{ segmentId, segmentTitle: titles.get(segmentId) ?? segmentId, stepId, recordingMs: at }]
+      const segmentTitle = titles.get(segmentId) ?? segmentId
+      const recipe = stepId === null ? undefined : recipeOfStep.get(stepId)
+      return [{ segmentId, segmentTitle, stepId, recordingMs: at, partId: recipe ? `recipe:${recipe}` : segmentId, partTitle: recipe ?? segmentTitle }]
     })
     .sort((a, b) => a.recordingMs - b.recordingMs)
 }

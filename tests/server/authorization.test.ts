@@ -128,6 +128,23 @@ const rows: Row[] = [
     body: () => ({ ticked: false }), expect: studio(404, 404, 403, 403),
   },
   { file: 'episodes/[id]/prep.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/prep`, expect: studio(200, 200, 200, 200) },
+  { file: 'episodes/[id]/publish/index.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/publish`, expect: studio(200, 200, 200, 200) },
+  // A recording that is not the episode's: the producer is past the guard and told to choose one of its own (400).
+  {
+    file: 'episodes/[id]/publish/index.patch.ts', method: 'PATCH', path: (i) => `/api/episodes/${i.episode}/publish`,
+    body: () => ({ shootId: 999999 }), expect: studio(400, 403, 403, 403),
+  },
+  {
+    file: 'episodes/[id]/publish/recipes/[recipeId].put.ts', method: 'PUT', path: (i) => `/api/episodes/${i.episode}/publish/recipes/${i.recipe}`,
+    body: () => ({ slug: '' }), expect: studio(200, 403, 403, 403),
+  },
+  {
+    file: 'episodes/[id]/publish/recipes/[recipeId].delete.ts', method: 'DELETE', path: (i) => `/api/episodes/${i.episode}/publish/recipes/${i.recipe}`,
+    expect: studio(200, 403, 403, 403),
+  },
+  // A public page: no sign-in asked; an address nothing is published at answers 404 to everyone.
+  { file: 'published/recipes/[slug].get.ts', method: 'GET', path: () => '/api/published/recipes/not-published-here', expect: all(404) },
+  { file: 'published/recipes/[slug]/photo.get.ts', method: 'GET', path: () => '/api/published/recipes/not-published-here/photo', expect: all(404) },
   { file: 'recipes/[id]/export.get.ts', method: 'GET', path: (i) => `/api/recipes/${i.recipe}/export`, expect: studio(200, 200, 200, 200) },
   // Photo uploads: a JSON body passes the guard and is then refused as no form upload (400).
   { file: 'recipes/[id]/photo.post.ts', method: 'POST', path: (i) => `/api/recipes/${i.recipe}/photo`, expect: studio(400, 400, 403, 403) },

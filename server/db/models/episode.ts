@@ -18,6 +18,10 @@ export class Episode extends Model<InferAttributes<Episode>, InferCreationAttrib
   declare targetSeconds: CreationOptional<number | null>
   /** The presenter (a user id), whose reading pace times the scripts. */
   declare hostId: CreationOptional<number | null>
+  /** The recording whose take log gives the published chapters; null until chosen. */
+  declare publishShootId: CreationOptional<number | null>
+  /** Where the finished video lives (its public address); null until known. */
+  declare videoUrl: CreationOptional<string | null>
   declare createdAt: CreationOptional<Date>
   declare updatedAt: CreationOptional<Date>
 }
@@ -45,7 +49,8 @@ export function initEpisodeModels(sequelize: Sequelize) {
   Episode.init({
     id, studioId: DataTypes.INTEGER, title: DataTypes.STRING(160), version: { type: DataTypes.INTEGER, defaultValue: 1 },
     shootDate: DataTypes.STRING(10), servings: DataTypes.INTEGER, unitSystem: DataTypes.STRING(8), budgetPerServingMinor: DataTypes.INTEGER,
-    targetSeconds: DataTypes.INTEGER, hostId: DataTypes.INTEGER, createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE,
+    targetSeconds: DataTypes.INTEGER, hostId: DataTypes.INTEGER,
+    publishShootId: DataTypes.INTEGER, videoUrl: DataTypes.STRING(500), createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE,
   }, { sequelize, tableName: 'episodes', underscored: true })
   EpisodeSegment.init(
     {

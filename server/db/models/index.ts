@@ -6,9 +6,10 @@ import { Invite, Membership, PasswordReset, User, initAccountModels } from './ac
 import { Mail, initMailModel } from './mail'
 import { Price, Recipe, RecipeIngredient, RecipeStep, initRecipeModels } from './recipe'
 import { JoinCode, initJoinCodeModel } from './join-code'
+import { RecipePage, initRecipePageModel } from './recipe-page'
 import { Studio, initStudio } from './studio'
 
-export { CallSheet, CallSheetSend }
+export { CallSheet, CallSheetSend, RecipePage }
 export { Episode, EpisodeSegment, Invite, JoinCode, Mail, Membership, PasswordReset, Price, Recipe, RecipeIngredient, RecipeStep, Studio, User }
 
 export function initModels(sequelize: Sequelize) {
@@ -19,6 +20,7 @@ export function initModels(sequelize: Sequelize) {
   initRecipeModels(sequelize)
   initEpisodeModels(sequelize)
   initCallSheetModels(sequelize)
+  initRecipePageModel(sequelize)
 
   User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' })
   Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' })
