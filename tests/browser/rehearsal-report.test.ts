@@ -69,7 +69,7 @@ describe.skipIf(!chromiumAvailable())('the rehearsal report', async () => {
     await command({ type: 'shoot.end', cancelTimers: true })
 
     await page.goto(url(`/shoots/${shootId}/report`), { waitUntil: 'networkidle' })
-    await page.getByTestId('report-chart').locator('canvas').waitFor()
+    await page.getByTestId('report-chart-steps').locator('canvas').waitFor()
     await page.waitForTimeout(300)
     const rows = page.getByTestId('report-steps').locator('tbody tr')
     expect(await rows.count()).toBe(steps.length)
@@ -80,13 +80,14 @@ describe.skipIf(!chromiumAvailable())('the rehearsal report', async () => {
     expect(await overruns.count()).toBe(1)
     expect(await overruns.first().textContent()).toMatch(/over$/)
     // The canvas has been drawn on (chart.js ran: not a blank canvas).
-    const inked = await page.getByTestId('report-chart').locator('canvas').evaluate((c: HTMLCanvasElement) => {
+    const inked = await page.getByTestId('report-chart-steps').locator('canvas').evaluate((c: HTMLCanvasElement) => {
       const d = c.getContext('2d')!.getImageData(0, 0, c.width, c.height).data
       let n = 0
       for (let i = 3; i < d.length; i += 4) if (d[i]! > 0) n++
       return n
     })
     expect(inked).toBeGreaterThan(1000)
+    await page.getByTestId('report-chart-segments').locator('canvas').waitFor()
     await expect(page.getByTestId('range-rule').textContent()).resolves.toMatch(/1 rehearsal has measured/)
     const shot = await screenshot(page, 'rehearsal-report')
     expect(shot).toMatch(/rehearsal-report\.png$/)
