@@ -21,6 +21,32 @@ export interface ShootRow {
   createdBy: number | null
 }
 
+/**
+ * A shoot as a list shows it, read without the whole state: SQLite's JSON functions pick the clock,
+ * the times, the marker counts by kind and the pickups and good takes (for openPickups in take-log.ts).
+ */
+export interface ShootSummaryRow {
+  id: number
+  studioId: number
+  episodeId: number | null
+  title: string
+  mode: ShootMode
+  status: string
+  createdAt: string
+  startedAtServerMs: number | null
+  endedAtServerMs: number | null
+  clock: ShootState['clock'] | null
+  markerCounts: Record<string, number>
+  /** Pickup and good-take markers, with only what openPickups reads. */
+  pickupsAndGoods: Array<{ kind: 'pickup' | 'good'; serverMs: number; stepRef: { segmentId: string; stepId: string | null } }>
+}
+
+/** What a rehearsal report reads of another rehearsal: the parts stepActuals needs. */
+export type ShootTimingParts = Pick<ShootState, 'status' | 'clock' | 'visits' | 'timers' | 'endedAtServerMs'> & {
+  id: number
+  planSteps: NonNullable<ShootState['plan']>['steps']
+}
+
 /** One accepted command (or the server's own timer.due), as the event log keeps it. */
 export interface ShootLogEntry {
   type: string
@@ -51,6 +77,10 @@ export interface ShootStore {
   studioOf(shootId: number): Promise<number | null>
   /** Shoots that have not ended: the ticker watches their timers. */
   live(): Promise<ShootRow[]>
+  /** The shoots of an episode or of a studio, newest first, as a list shows them. */
+  summaries(where: { episodeId: number } | { studioId: number }): Promise<ShootSummaryRow[]>
+  /** The studio's rehearsals whose plan has a step of one of these recipes: their timing parts only. */
+  rehearsalTimings(studioId: number, recipeIds: string[]): Promise<ShootTimingParts[]>
   /** An episode's recordings (take mode), newest first. */
   takesOf(episodeId: number): Promise<ShootRow[]>
   /** The event log of a shoot, in sequence order. */
@@ -73,6 +103,40 @@ function toRow(r: Raw): ShootRow {
     status: r.status, seq: r.seq, state: JSON.parse(r.state) as ShootState, createdBy: r.created_by ?? null,
   }
 }
+
+const SUMMARY_SQL = `SELECT s.id, s.studio_id, s.episode_id, s.title, s.mode, s.status, s.created_at,
+  json_extract(s.state, '$.startedAtServerMs') AS started, json_extract(s.state, '$.endedAtServerMs') AS ended,
+  json_extract(s.state, '$.clock') AS clock,
+  (SELECT json_group_object(k, n) FROM (SELECT json_extract(m.value, '$.kind') AS k, count(*) AS n
+     FROM json_each(s.state, '$.markers') m GROUP BY k)) AS counts,
+  (SELECT json_group_array(json_object('kind', json_extract(m.value, '$.kind'), 'serverMs', json_extract(m.value, '$.serverMs'),
+     'stepRef', json_object('segmentId', json_extract(m.value, '$.stepRef.segmentId'), 'stepId', json_extract(m.value, '$.stepRef.stepId'))))
+     FROM json_each(s.state, '$.markers') m WHERE json_extract(m.value, '$.kind') IN ('pickup', 'good')) AS picks
+  FROM shoots s`
+
+type RawSummary = {
+  id: number; studio_id: number; episode_id: number | null; title: string; mode: ShootMode; status: string; created_at: string
+  started: number | null; ended: number | null; clock: string | null; counts: string | null; picks: string | null
+}
+
+function toSummary(r: RawSummary): ShootSummaryRow {
+  return {
+    id: r.id, studioId: r.studio_id, episodeId: r.episode_id ?? null, title: r.title, mode: r.mode, status: r.status,
+    createdAt: new Date(r.created_at).toISOString(),
+    startedAtServerMs: r.started === null ? null : Number(r.started), endedAtServerMs: r.ended === null ? null : Number(r.ended),
+    clock: r.clock ? JSON.parse(r.clock) : null, markerCounts: r.counts ? JSON.parse(r.counts) : {},
+    pickupsAndGoods: r.picks ? JSON.parse(r.picks) : [],
+  }
+}
+
+const TIMING_SQL = `SELECT s.id, json_extract(s.state, '$.status') AS status, json_extract(s.state, '$.clock') AS clock,
+  json_extract(s.state, '$.visits') AS visits, json_extract(s.state, '$.timers') AS timers,
+  json_extract(s.state, '$.endedAtServerMs') AS ended, json_extract(s.state, '$.plan.steps') AS plan_steps
+  FROM shoots s WHERE s.studio_id = ? AND s.mode = 'rehearsal'
+  AND EXISTS (SELECT 1 FROM json_each(s.state, '$.plan.steps') p WHERE json_extract(p.value, '$.recipe') IN (SELECT value FROM json_each(?)))
+  ORDER BY s.id`
+
+type RawTiming = { id: number; status: string; clock: string; visits: string | null; timers: string | null; ended: number | null; plan_steps: string | null }
 
 /** The timestamp format the rest of the database uses (Sequelize's for SQLite). */
 export function sqliteStamp(ms: number): string {
@@ -160,6 +224,15 @@ export function openShootStore(path: string, ready: () => Promise<unknown> = asy
       return r?.studio_id ?? null
     },
     live: () => queued(async () => (await all<Raw>(`SELECT ${COLUMNS} FROM shoots WHERE status IN ('ready', 'running', 'paused')`)).map(toRow)),
+    summaries: (where) => queued(async () => {
+      const [column, value] = 'episodeId' in where ? ['episode_id', where.episodeId] : ['studio_id', where.studioId]
+      return (await all<RawSummary>(`${SUMMARY_SQL} WHERE s.${column} = ? ORDER BY s.id DESC`, [value])).map(toSummary)
+    }),
+    rehearsalTimings: (studioId, recipeIds) => queued(async () => (await all<RawTiming>(TIMING_SQL, [studioId, JSON.stringify(recipeIds)])).map((r) => ({
+      id: r.id, status: r.status as ShootState['status'], clock: JSON.parse(r.clock), visits: r.visits ? JSON.parse(r.visits) : [],
+      timers: r.timers ? JSON.parse(r.timers) : [], endedAtServerMs: r.ended === null ? null : Number(r.ended),
+      planSteps: r.plan_steps ? JSON.parse(r.plan_steps) : [],
+    }))),
     takesOf: (episodeId) => queued(async () => (await all<Raw>(
       `SELECT ${COLUMNS} FROM shoots WHERE episode_id = ? AND mode = 'take' ORDER BY id DESC`, [episodeId],
     )).map(toRow)),

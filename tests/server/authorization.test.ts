@@ -66,6 +66,20 @@ const rows: Row[] = [
   { file: 'shoots/[id]/markers.csv.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}/markers.csv?rate=25`, expect: shoot(200, 403, 403, 200, 403, 403) },
   { file: 'shoots/[id]/markers.vtt.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}/markers.vtt?rate=29.97df`, expect: shoot(200, 403, 403, 200, 403, 403) },
   { file: 'shoots/[id]/markers.json.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}/markers.json?rate=25`, expect: shoot(200, 403, 403, 200, 403, 403) },
+  { file: 'episodes/[id]/shoots.get.ts', method: 'GET', path: (i) => `/api/episodes/${i.episode}/shoots`, expect: studio(200, 200, 200, 200) },
+  { file: 'studios/[studioId]/shoots.get.ts', method: 'GET', path: (i) => `/api/studios/${i.studio}/shoots`, expect: studio(200, 200, 200, 200) },
+  // The report reads the shoot (every member, the shoot's own devices); adopting and undoing are the
+  // producer's: the matrix shoot has no steps, so adopting has nothing to adopt (409) and there is no
+  // adoption 999999 to undo (404). tests/server/rehearsal-report.test.ts adopts and undoes for real.
+  { file: 'shoots/[id]/report.get.ts', method: 'GET', path: (i) => `/api/shoots/${i.shoot}/report`, expect: shoot(200, 200, 200, 200, 200, 200) },
+  {
+    file: 'shoots/[id]/report/adopt.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/report/adopt`, body: () => ({ recipes: [{ id: 1, version: 1 }] }),
+    expect: shoot(409, 403, 403, 403, 403, 403),
+  },
+  {
+    file: 'shoots/[id]/report/undo.post.ts', method: 'POST', path: (i) => `/api/shoots/${i.shoot}/report/undo`, body: () => ({ adoptionId: 999999 }),
+    expect: shoot(404, 403, 403, 403, 403, 403),
+  },
   { file: 'episodes/[id]/shoots.post.ts', method: 'POST', path: (i) => `/api/episodes/${i.episode}/shoots`, body: () => ({ mode: 'rehearsal' }), expect: studio(201, 403, 403, 403) },
   // Rolling is the producer's and the camera's (the role table of shoot commands): they get past it to
   // the shoot, which refuses a camera that is not rolling to stop rolling (409); host and viewer get 403.

@@ -11,6 +11,7 @@ import {
 } from '../../shared/utils/account-schemas'
 import { callSheetBodySchema, callSheetSendSchema } from '../../shared/utils/call-sheet-schema'
 import { parsePriceCsv } from '../../shared/utils/price-csv'
+import { adoptActualsSchema, undoAdoptionSchema } from '../../shared/utils/rehearsal-schemas'
 import { episodeCreateSchema, episodeUpdateSchema, priceBodySchema, recipeCreateSchema, recipeUpdateSchema, studioSettingsSchema } from '../../shared/utils/recipe-schemas'
 import { importSchemaOrgRecipe } from '../../shared/utils/schemaorg-import'
 import { shootCommandSchema } from '../../shared/utils/shoot-schema'
@@ -99,6 +100,8 @@ export const targets: Target[] = [
   json('episodes/[id]/shopping/checks/[key].put.ts', 'PUT', (i) => `/api/episodes/${i.episode}/shopping/checks/onion`, () => ({ ticked: true }), z.object({ ticked: z.boolean() })),
   json('shoots/[id]/join-codes/index.post.ts', 'POST', (i) => `/api/shoots/${i.shoot}/join-codes`, () => ({ role: 'camera' }), joinCodeBodySchema),
   path('shoots/[id]/join-codes/[codeId].delete.ts', 'DELETE', (b, i) => `/api/shoots/${i.shoot}/join-codes/${b}`),
+  json('shoots/[id]/report/adopt.post.ts', 'POST', (i) => `/api/shoots/${i.shoot}/report/adopt`, () => ({ recipes: [{ id: 1, version: 1 }] }), adoptActualsSchema),
+  json('shoots/[id]/report/undo.post.ts', 'POST', (i) => `/api/shoots/${i.shoot}/report/undo`, () => ({ adoptionId: 1 }), undoAdoptionSchema),
   json('shoots/[id]/commands.post.ts', 'POST', (i) => `/api/shoots/${i.shoot}/commands`, () => ({ type: 'marker.add', kind: 'good' }), shootCommandSchema),
 ]
 

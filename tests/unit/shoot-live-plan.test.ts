@@ -1,42 +1,22 @@
 // The shoot runs the cook plan (shared/utils/shoot-plan.ts planShootRun, shoot-waits.ts,
 // shoot-live-plan.ts): the host's script in plan order, waits whose timers start themselves with the
 // step's range (checked at the short end, ringing at the long end), "start it now" from a cue, and
-// the plan computed again from the present after every change. The kitchen below is small enough to
+// the plan computed again from the present after every change. The kitchen (tests/support/lentil-kitchen.ts) is small enough to
 // work by hand; every expected time is worked in the comment beside it. The scheduler itself is
 // checked against its published sources in plan.test.ts and plan-replan.test.ts.
 import { describe, expect, it } from 'vitest'
 import fc from 'fast-check'
-import type { ShootActor, ShootPlanStep, ShootState } from '../../shared/types/shoot'
-import type { KitchenProfile } from '../../shared/utils/plan-types'
+import type { ShootActor, ShootState } from '../../shared/types/shoot'
 import { createShootState } from '../../shared/utils/shoot'
 import { applyShootCommand } from '../../shared/utils/shoot-reducer'
-import { planShootRun, type ScriptRecipe } from '../../shared/utils/shoot-plan'
+import { planShootRun } from '../../shared/utils/shoot-plan'
 import { markDueTimers, timerChecking } from '../../shared/utils/shoot-timers'
 import { waitTimerLabel } from '../../shared/utils/shoot-waits'
+import { KITCHEN, RECIPES, STEPS } from '../support/lentil-kitchen'
 
 const T0 = 1_760_000_000_000
 const MIN = 60_000
 const HOST: ShootActor = { role: 'host', id: 'user:2', name: 'Tomasz Reede' }
-const KITCHEN: KitchenProfile = { hands: 1, burners: 4, ovens: 1, racksPerOven: 1, parallelRecipes: true }
-
-const step = (id: string, minutes: [number | null, number], handsOn: boolean, extra: Partial<ShootPlanStep> = {}): ShootPlanStep => ({
-  id, duration: minutes[1] * 60, handsOn, station: null, recipe: 'stew', recipeTitle: 'Red lentil stew', label: id, name: null,
-  minMs: minutes[0] === null ? null : minutes[0] * MIN, maxMs: minutes[1] * MIN, ...extra,
-})
-// Beans soak 25–30 min (a wait from the start); the onion is chopped (5 min), then the lentils simmer
-// 20–25 min on a burner while the herbs are picked (10 min); the stew is finished (3 min) once they are done.
-const STEPS: ShootPlanStep[] = [
-  step('soak', [25, 30], false, { recipe: 'beans', recipeTitle: 'Soaked beans', name: 'Bean soak' }),
-  step('chop', [null, 5], true, { station: 'counter' }),
-  step('simmer', [20, 25], false, { station: 'burner', after: ['chop'], name: 'Lentils' }),
-  step('herbs', [null, 10], true, { after: ['chop'] }),
-  step('finish', [null, 3], true, { after: ['simmer'] }),
-]
-const RECIPES: ScriptRecipe[] = [
-  { segmentId: 'segment-1', recipeId: 'beans', title: 'Soaked beans', stepIds: ['soak'] },
-  { segmentId: 'segment-2', recipeId: 'stew', title: 'Red lentil stew', stepIds: ['chop', 'simmer', 'herbs', 'finish'] },
-]
-
 function newShoot(steps = STEPS, kitchen = KITCHEN): ShootState {
   const { runOrder, plan } = planShootRun(RECIPES, steps, kitchen)
   return createShootState({ id: 'shoot-9', mode: 'rehearsal', runOrder, plan })

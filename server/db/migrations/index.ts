@@ -16,6 +16,7 @@ import m0012 from './0012-studio-time-zone'
 import m0013 from './0013-episode-show'
 import m0014 from './0014-shopping-checks'
 import m0015 from './0015-call-sheets'
+import m0017 from './0017-range-adoptions'
 import m0018 from './0018-publish-kit'
 
 export interface MigrationContext {
@@ -31,4 +32,4 @@ export interface Migration {
   down: (ctx: MigrationContext) => Promise<void>
 }
 
-export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005, m0006, m0007, m0008, m0009, m0010, m0011, m0012, m0013, m0014, m0015, m0018]
+export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005, m0006, m0007, m0008, m0009, m0010, m0011, m0012, m0013, m0014, m0015, m0017, m0018]
