@@ -108,10 +108,11 @@ const SUMMARY_SQL = `SELECT s.id, s.studio_id, s.episode_id, s.title, s.mode, s.
   json_extract(s.state, '$.startedAtServerMs') AS started, json_extract(s.state, '$.endedAtServerMs') AS ended,
   json_extract(s.state, '$.clock') AS clock,
   (SELECT json_group_object(k, n) FROM (SELECT json_extract(m.value, '$.kind') AS k, count(*) AS n
-     FROM json_each(s.state, '$.markers') m GROUP BY k)) AS counts,
+     FROM json_each(s.state, '$.markers') m WHERE json_extract(m.value, '$.deleted') IS NOT 1 GROUP BY k)) AS counts,
   (SELECT json_group_array(json_object('kind', json_extract(m.value, '$.kind'), 'serverMs', json_extract(m.value, '$.serverMs'),
      'stepRef', json_object('segmentId', json_extract(m.value, '$.stepRef.segmentId'), 'stepId', json_extract(m.value, '$.stepRef.stepId'))))
-     FROM json_each(s.state, '$.markers') m WHERE json_extract(m.value, '$.kind') IN ('pickup', 'good')) AS picks
+     FROM json_each(s.state, '$.markers') m
+     WHERE json_extract(m.value, '$.kind') IN ('pickup', 'good') AND json_extract(m.value, '$.deleted') IS NOT 1) AS picks
   FROM shoots s`
 
 type RawSummary = {
