@@ -11,6 +11,7 @@ import {
 } from '../../shared/utils/account-schemas'
 import { callSheetBodySchema, callSheetSendSchema } from '../../shared/utils/call-sheet-schema'
 import { parsePriceCsv } from '../../shared/utils/price-csv'
+import { publishRecipeSchema, publishTakeSchema } from '../../shared/utils/publish-schemas'
 import { adoptActualsSchema, undoAdoptionSchema } from '../../shared/utils/rehearsal-schemas'
 import { episodeCreateSchema, episodeUpdateSchema, priceBodySchema, recipeCreateSchema, recipeUpdateSchema, studioSettingsSchema } from '../../shared/utils/recipe-schemas'
 import { importSchemaOrgRecipe } from '../../shared/utils/schemaorg-import'
@@ -95,6 +96,9 @@ export const targets: Target[] = [
   json('episodes/[id]/index.patch.ts', 'PATCH', (i) => `/api/episodes/${i.episode}`, (i) => ({ version: i.episodeVersion, title: 'Campaign episode' }), episodeUpdateSchema),
   json('episodes/[id]/call-sheet/index.patch.ts', 'PATCH', (i) => `/api/episodes/${i.episode}/call-sheet`, () => ({ version: 0, callTime: '08:30' }), callSheetBodySchema),
   json('episodes/[id]/call-sheet/send.post.ts', 'POST', (i) => `/api/episodes/${i.episode}/call-sheet/send`, () => ({ hash: '0'.repeat(64) }), callSheetSendSchema),
+  json('episodes/[id]/publish/index.patch.ts', 'PATCH', (i) => `/api/episodes/${i.episode}/publish`, () => ({ videoUrl: 'https://video.example/v/1' }), publishTakeSchema),
+  json('episodes/[id]/publish/recipes/[recipeId].put.ts', 'PUT', (i) => `/api/episodes/${i.episode}/publish/recipes/${i.recipe}`, () => ({ slug: 'campaign-stew' }), publishRecipeSchema),
+  path('episodes/[id]/publish/recipes/[recipeId].delete.ts', 'DELETE', (b, i) => `/api/episodes/${i.episode}/publish/recipes/${b}`),
   { ...json('episodes/[id]/shoots.post.ts', 'POST', (i) => `/api/episodes/${i.episode}/shoots`, () => ({ mode: 'rehearsal' }), shootsBody()) },
   // the body schema of the route file: { ticked: boolean }
   json('episodes/[id]/shopping/checks/[key].put.ts', 'PUT', (i) => `/api/episodes/${i.episode}/shopping/checks/onion`, () => ({ ticked: true }), z.object({ ticked: z.boolean() })),
