@@ -26,7 +26,8 @@ mkdirSync('.data', { recursive: true })
 const secretFile = '.data/session-password'
 if (!existsSync(secretFile)) writeFileSync(secretFile, randomBytes(32).toString('hex'), { mode: 0o600 })
 
-const shownHost = host === '0.0.0.0' ? (https ? lanAddress() ?? 'localhost' : 'localhost') : host
+// On every interface the address to print (and put in QR codes) is the laptop's on the studio network.
+const shownHost = host === '0.0.0.0' ? lanAddress() ?? 'localhost' : host
 const url = `${https ? 'https' : 'http'}://${shownHost}:${port}`
 const server = spawn('node', ['.output/server/index.mjs'], {
   stdio: 'inherit',
