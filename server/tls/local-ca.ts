@@ -62,13 +62,19 @@ function isIp(name: string): boolean {
   return /^\d+\.\d+\.\d+\.\d+$/.test(name) || name.includes(':')
 }
 
-function makeRoot(): { cert: forge.pki.Certificate; key: forge.pki.rsa.PrivateKey } {
+/** A new key pair and a certificate for it, valid from a day ago (clocks differ) for `days`. */
+function newCertificate(days: number) {
   const keys = pki.rsa.generateKeyPair({ bits: 2048 })
   const cert = pki.createCertificate()
   cert.publicKey = keys.publicKey
   cert.serialNumber = serial()
   cert.validity.notBefore = new Date(Date.now() - DAY_MS)
-  cert.validity.notAfter = new Date(Date.now() + ROOT_DAYS * DAY_MS)
+  cert.validity.notAfter = new Date(Date.now() + days * DAY_MS)
+  return { cert, keys }
+}
+
+function makeRoot(): { cert: forge.pki.Certificate; key: forge.pki.rsa.PrivateKey } {
+  const { cert, keys } = newCertificate(ROOT_DAYS)
   const subject = [{ name: 'commonName', value: `Hobline studio root (${hostname()})` }, { name: 'organizationName', value: 'Hobline' }]
   cert.setSubject(subject)
   cert.setIssuer(subject)
@@ -82,12 +88,7 @@ function makeRoot(): { cert: forge.pki.Certificate; key: forge.pki.rsa.PrivateKe
 }
 
 function makeServer(root: { cert: forge.pki.Certificate; key: forge.pki.rsa.PrivateKey }, names: string[]) {
-  const keys = pki.rsa.generateKeyPair({ bits: 2048 })
-  const cert = pki.createCertificate()
-  cert.publicKey = keys.publicKey
-  cert.serialNumber = serial()
-  cert.validity.notBefore = new Date(Date.now() - DAY_MS)
-  cert.validity.notAfter = new Date(Date.now() + SERVER_DAYS * DAY_MS)
+  const { cert, keys } = newCertificate(SERVER_DAYS)
   cert.setSubject([{ name: 'commonName', value: names.find((n) => !isIp(n)) ?? names[0]! }, { name: 'organizationName', value: 'Hobline' }])
   cert.setIssuer(root.cert.subject.attributes)
   cert.setExtensions([

@@ -2,11 +2,9 @@
 // (hobline.test, mapped to 127.0.0.1 in Chromium), over plain http or over https with a certificate
 // from the studio's own certificate authority (server/tls/local-ca.ts). Started on a port and a
 // database file of the test's choosing, so it can be stopped and started again on the same ones.
-import { spawn } from 'node:child_process'
 import { readFileSync } from 'node:fs'
 import { get } from 'node:https'
-import { resolve } from 'node:path'
-import { rootDir } from './app'
+import { spawnBuiltApp } from './spawned'
 import type { TlsFiles } from '../../server/tls/local-ca'
 
 export const TEST_HOST = 'hobline.test'
@@ -26,45 +24,26 @@ export interface OnSetOptions {
 
 export async function startOnSetServer({ port, databasePath, tls }: OnSetOptions): Promise<OnSetServer> {
   const base = `${tls ? 'https' : 'http'}://${TEST_HOST}:${port}`
-  const child = spawn(process.execPath, [resolve(rootDir, '.output/server/index.mjs')], {
-    env: {
-      ...process.env,
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      NUXT_DATABASE_PATH: databasePath,
-      NUXT_DATABASE_SEED: 'always',
-      NUXT_SESSION_PASSWORD: 'test-session-password-of-at-least-32-characters',
-      NUXT_PUBLIC_SITE_URL: base,
-      // As `npm run demo` sets it: a Secure cookie is dropped on a plain-http address that is not localhost.
-      NUXT_SESSION_COOKIE_SECURE: String(!!tls),
-      NUXT_TLS_ROOT_CERT_PATH: tls?.rootCert ?? 'none',
-      ...(tls ? { NITRO_SSL_CERT: readFileSync(tls.cert, 'utf8'), NITRO_SSL_KEY: readFileSync(tls.key, 'utf8') } : {}),
-    },
-    stdio: ['ignore', 'pipe', 'pipe'],
+  const app = await spawnBuiltApp({
+    PORT: String(port),
+    NUXT_DATABASE_PATH: databasePath,
+    NUXT_PUBLIC_SITE_URL: base,
+    // As `npm run demo` sets it: a Secure cookie is dropped on a plain-http address that is not localhost.
+    NUXT_SESSION_COOKIE_SECURE: String(!!tls),
+    NUXT_TLS_ROOT_CERT_PATH: tls?.rootCert ?? 'none',
+    ...(tls ? { NITRO_SSL_CERT: readFileSync(tls.cert, 'utf8'), NITRO_SSL_KEY: readFileSync(tls.key, 'utf8') } : {}),
   })
-  let log = ''
-  child.stdout!.on('data', (c) => (log += c))
-  child.stderr!.on('data', (c) => (log += c))
-  const exited = new Promise<void>((r) => child.once('exit', () => r()))
-  const server: OnSetServer = {
-    base,
-    log: () => log,
-    async stop() {
-      if (child.exitCode !== null || child.signalCode !== null) return
-      child.kill('SIGTERM')
-      const timer = setTimeout(() => child.kill('SIGKILL'), 10_000)
-      await exited
-      clearTimeout(timer)
-    },
-  }
+  let exited = false
+  void app.exited.then(() => (exited = true))
+  const server: OnSetServer = { base, log: app.log, stop: app.stop }
   for (let i = 0; i < 600; i++) {
-    if (child.exitCode !== null) throw new Error(`the on-set server exited:\n${log}`)
+    if (exited) throw new Error(`the on-set server exited:\n${app.log()}`)
     const status = await health(port, tls).catch(() => null)
     if (status === 'ok') return server
     await new Promise((r) => setTimeout(r, 100))
   }
-  await server.stop()
-  throw new Error(`the on-set server never became healthy:\n${log}`)
+  await app.stop()
+  throw new Error(`the on-set server never became healthy:\n${app.log()}`)
 }
 
 /** /api/health's status, asked of 127.0.0.1 under the test host's name (over https: trusting the studio root only). */
