@@ -10,7 +10,10 @@ import type { ModuleOptions } from '@vite-pwa/nuxt'
 import { palette } from './shared/utils/palette'
 
 export const pwa: ModuleOptions = {
-  registerType: 'autoUpdate',
+  // Registered by plugins/service-worker.client.ts (three lines, not workbox-window: the prompter's
+  // bundle stays small, and a new version never reloads a screen in the middle of a shoot; it takes
+  // over at the next navigation).
+  injectRegister: false,
   registerWebManifestInRouteRules: true,
   manifest: {
     name: 'Hobline',
@@ -31,6 +34,9 @@ export const pwa: ModuleOptions = {
     ],
   },
   workbox: {
+    // A new worker takes over at once and controls the open pages (the next navigation is served by it).
+    skipWaiting: true,
+    clientsClaim: true,
     // A server-rendered app has no index.html to fall back to.
     navigateFallback: null,
     globPatterns: ['_nuxt/**/*.{js,css,woff2,woff}', 'sounds/*.wav', 'icons/*.png', 'favicon.svg'],
@@ -54,6 +60,6 @@ export const pwa: ModuleOptions = {
       },
     ],
   },
-  client: { installPrompt: false, periodicSyncForUpdates: 0 },
+  client: { registerPlugin: false, installPrompt: false, periodicSyncForUpdates: 0 },
   devOptions: { enabled: false },
 }

@@ -43,3 +43,13 @@ export function keepLastSnapshot(snapshot: ShootSnapshot, heardAt: number) {
     }
   }, WRITE_EVERY_MS)
 }
+
+/** Forgets every kept shoot state on this device (on signing out). */
+export function forgetLastSnapshots() {
+  latest = null
+  try {
+    for (const key of Object.keys(localStorage)) if (key.startsWith(PREFIX)) localStorage.removeItem(key)
+  } catch {
+    // Storage refused: nothing was kept.
+  }
+}
