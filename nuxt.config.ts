@@ -3,6 +3,7 @@ import { fileURLToPath } from 'node:url'
 import { SCRYPT_OPTIONS } from './server/db/scrypt-cost'
 import { palette } from './shared/utils/palette'
 import { bundleWorker } from './server/workers/bundle'
+import { pwa } from './pwa.config'
 
 // Security headers (nuxt-security; DEVELOPERS.md, "Security headers", is the policy in words and
 // tests/server/headers.test.ts checks it). Everything a page loads comes from its own origin: the
@@ -23,7 +24,9 @@ export default defineNuxtConfig({
   compatibilityDate: '2026-11-01',
   devtools: { enabled: false },
   telemetry: false,
-  modules: ['@nuxt/eslint', '@nuxtjs/tailwindcss', '@pinia/nuxt', '@vueuse/nuxt', 'nuxt-auth-utils', 'nuxt-security'],
+  modules: ['@nuxt/eslint', '@nuxtjs/tailwindcss', '@pinia/nuxt', '@vueuse/nuxt', 'nuxt-auth-utils', 'nuxt-security', '@vite-pwa/nuxt'],
+  // The installable screens: web app manifest and service worker (pwa.config.ts).
+  pwa,
   css: ['~/assets/css/main.css'],
   // All CSS inlined in the server-rendered page (not only components' own): a tablet paints the
   // prompter's text without first fetching stylesheets (the LCP benchmark in bench/screens.bench.ts).
@@ -81,6 +84,11 @@ export default defineNuxtConfig({
       // an S3-compatible bucket instead of the folder. Empty: the folder.
       s3: { endpoint: '', bucket: '', region: '', accessKeyId: '', secretAccessKey: '' },
     },
+    tls: {
+      // NUXT_TLS_ROOT_CERT_PATH: the studio's root certificate that /api/trust/root hands to devices
+      // (made by `npm run demo -- --https` or `npm run tls`). Empty, or no file there: none to install.
+      rootCertPath: '.data/tls/hobline-root-ca.crt',
+    },
     public: {
       appName: 'Hobline',
       // NUXT_PUBLIC_SITE_URL: absolute base for links in e-mails. Required by the built server (it will not start
@@ -112,7 +120,8 @@ export default defineNuxtConfig({
         'form-action': ["'self'"],
         'frame-ancestors': ["'none'"],
         'img-src': ["'self'", 'data:'],
-        'media-src': ["'self'"],
+        // data: for nosleep.js's tiny looping video, the wake-lock fallback (composables/screen-awake.ts).
+        'media-src': ["'self'", 'data:'],
         'object-src': ["'none'"],
         // Nuxt's own inline scripts and module entry carry the request's nonce; what they load is
         // trusted through 'strict-dynamic'.
@@ -120,6 +129,9 @@ export default defineNuxtConfig({
         'script-src-attr': ["'none'"],
         // Server-rendered style attributes (tooltips' positions) and mail shown in the outbox.
         'style-src': ["'self'", "'unsafe-inline'"],
+        // The service worker (/sw.js, pwa.config.ts) and the web app manifest come from the app itself.
+        'worker-src': ["'self'"],
+        'manifest-src': ["'self'"],
         // A studio LAN serves plain http: upgrading would break every request there.
         'upgrade-insecure-requests': false,
       },

@@ -2,6 +2,7 @@
 import { defineStore } from 'pinia'
 import { roleCan, type StudioAction } from '~~/shared/utils/roles'
 import type { MeAnswer, MembershipInfo } from '~/types/api'
+import { forgetLastSnapshots } from '~/composables/last-snapshot'
 
 export const useAccountStore = defineStore('account', {
   state: () => ({
@@ -34,6 +35,8 @@ export const useAccountStore = defineStore('account', {
     },
     async signOut() {
       await $fetch('/api/auth/logout', { method: 'POST' })
+      // The shoot states kept on this device for reopening offline go with the session.
+      forgetLastSnapshots()
       this.$reset()
       this.loaded = true
       await useUserSession().fetch()

@@ -13,6 +13,7 @@ import { shootCommandAllowed } from '~~/shared/utils/shoot-commands'
 import { shootCursorMoved, shootCursorRef, shootStepRefAt } from '~~/shared/utils/shoot'
 import { applyKnownShootCommand } from '~~/shared/utils/shoot-apply'
 import { refusal, type Refusal } from '~~/shared/utils/domain-error'
+import { keepLastSnapshot, readLastSnapshot } from '~/composables/last-snapshot'
 
 export type ShootConnection = 'connecting' | 'online' | 'offline'
 
@@ -88,6 +89,10 @@ export const useShootStore = defineStore('shoot', () => {
   const presence = shallowRef<ShootPresence>({ screens: [] })
   /** This screen's own alarm setting, told to the server on every join. */
   const audibleWhileRolling = ref(false)
+  /** Local Date.now() when the state held last came from the server (null: not yet). */
+  const heardAt = ref<number | null>(null)
+  /** The state held was read back from this device's storage, not yet confirmed by the server. */
+  const fromStorage = ref(false)
 
   let socket: ShootSocket | null = null
   let nextKey = 1
@@ -157,14 +162,35 @@ export const useShootStore = defineStore('shoot', () => {
   /** Takes a snapshot unless the store already holds a later state of the same shoot. */
   function adopt(next: ShootSnapshot, guessOffset: boolean) {
     if (next.shoot.id !== shootId.value) return
-    if (snapshot.value && next.state.seq < seq.value) return
+    // A state read back from storage gives way to whatever the server says (its database may be new).
+    if (snapshot.value && next.state.seq < seq.value && !fromStorage.value) return
+    fromStorage.value = false
     snapshot.value = next
+    // A snapshot that came with the page may be a kept page's (the service worker's, offline): its server time says how old.
+    heard(guessOffset ? Date.now() : Math.min(Date.now(), next.serverNow))
     if (next.presence) presence.value = next.presence
     seq.value = next.state.seq
     highestSeen = Math.max(highestSeen, next.state.seq)
     settlePending()
     // Until the first ping round: the time the server stamped, late by the trip here.
     if (guessOffset && clockDelay.value === null) offset.value = next.serverNow - Date.now()
+  }
+
+  /** Notes the moment the server was heard, and keeps the state on the device (composables/last-snapshot.ts). */
+  function heard(at = Date.now()) {
+    if (!import.meta.client || !snapshot.value) return
+    heardAt.value = at
+    keepLastSnapshot(snapshot.value, heardAt.value)
+  }
+
+  /** A later state this device kept of the shoot, drawn until the server answers. */
+  function restore(id: number) {
+    const stored = readLastSnapshot(id, snapshot.value?.you.actorId)
+    if (!stored || (snapshot.value && stored.snapshot.state.seq <= seq.value)) return
+    snapshot.value = stored.snapshot
+    seq.value = stored.snapshot.state.seq
+    heardAt.value = stored.heardAt
+    fromStorage.value = true
   }
 
   function onEvent(message: ShootEventMessage) {
@@ -177,6 +203,7 @@ export const useShootStore = defineStore('shoot', () => {
     }
     snapshot.value = { ...snapshot.value, state: message.state, serverNow: message.serverNow }
     seq.value = message.seq
+    heard()
     const { seq: s, type, by, events, serverNow: atServerMs } = message
     log.value = [...log.value.slice(1 - LOG_SIZE), { seq: s, type, by, events, atServerMs }]
     settlePending()
@@ -341,6 +368,7 @@ export const useShootStore = defineStore('shoot', () => {
     if (shootId.value !== null && shootId.value !== id) leave()
     shootId.value = id
     if (initial) adopt(initial, false)
+    restore(id)
     if (!socket) return
     if (socket.connected) {
       connection.value = 'online'
@@ -363,6 +391,8 @@ export const useShootStore = defineStore('shoot', () => {
     pending.value = []
     log.value = []
     presence.value = { screens: [] }
+    heardAt.value = null
+    fromStorage.value = false
     setError(null)
     socket?.disconnect()
     connection.value = 'connecting'
@@ -411,7 +441,7 @@ export const useShootStore = defineStore('shoot', () => {
 
   return {
     shootId, snapshot, seq, connection, browserOnline, offset, clockDelay, clockSampledAt, error, errorCode, pending, log, bound,
-    presence, audibleWhileRolling, setAudibleWhileRolling, online, you, role, steps, serverState, state,
+    presence, audibleWhileRolling, setAudibleWhileRolling, heardAt, fromStorage, online, you, role, steps, serverState, state,
     cursorRef, currentSegment, currentStep, nextRef, nextStep, show, currentShowSegment,
     can, serverNowMs, clearError, bind, prime, open, leave, command, resync, sampleClock,
   }

@@ -19,11 +19,13 @@ const PAGE_CSP: Record<string, string> = {
   'form-action': "'self'",
   'frame-ancestors': "'none'",
   'img-src': "'self' data:",
-  'media-src': "'self'",
+  'media-src': "'self' data:",
   'object-src': "'none'",
   'script-src': "'self' 'strict-dynamic' 'nonce-{{nonce}}'",
   'script-src-attr': "'none'",
   'style-src': "'self' 'unsafe-inline'",
+  'worker-src': "'self'",
+  'manifest-src': "'self'",
 }
 const API_CSP: Record<string, string> = { 'default-src': "'none'", 'frame-ancestors': "'none'" }
 const PERMISSIONS = 'camera=(), display-capture=(), fullscreen=(self), geolocation=(), microphone=(self)'
