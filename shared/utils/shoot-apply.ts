@@ -22,12 +22,25 @@ import { clockTextMs } from './clock-text'
 import { shootCursorMoved, shootCursorRef, shootSegmentPositions, shootStepRefAt } from './shoot'
 import { isTimedWait, shootPlanStep, startWait, stepTimerOf } from './shoot-waits'
 import { actionName as press } from './shoot-words'
-import { recordingMsAt } from './take-log'
-import { deleteMarker, editMarker, removeCamera, setCamera } from './take-log-apply'
+import { recordingMsAt } from './recording-time'
 
 type Failure = { ok: false; error: ShootCommandError }
 type Change = { state: ShootState; events: ShootEvent[] }
 type Outcome = Change | Failure
+
+/**
+ * The take log's own commands (cameras, marker changes), from take-log-apply.ts. The server's reducer
+ * (shoot-reducer.ts) registers them; the screens apply only their own commands ahead of the server,
+ * and none of these, so they do not load its timecode maths.
+ */
+export type TakeLogCommands = (
+  s: ShootState, cmd: ShootCommandOf<'marker.edit' | 'marker.delete' | 'camera.set' | 'camera.remove'>,
+  by: ShootActor, newId: (() => string) | undefined, now: number,
+) => Outcome
+let takeLogCommands: TakeLogCommands | null = null
+export function applyTakeLogCommandsWith(apply: TakeLogCommands) {
+  takeLogCommands = apply
+}
 
 const fail = (code: ShootErrorCode, message: string, field?: string): Failure =>
   ({ ok: false, error: field ? { code, message, field } : { code, message } })
@@ -69,10 +82,11 @@ function dispatch(s: ShootState, cmd: ShootCommand, ctx: ShootCommandContext, no
     case 'clock.speed': return setSpeed(s, cmd, now)
     case 'marker.add': return addMarker(s, cmd, ctx, now)
     case 'wait.start': return startWaitNow(s, cmd, ctx, now)
-    case 'marker.edit': return editMarker(s, cmd, actorOf(ctx), now)
-    case 'marker.delete': return deleteMarker(s, cmd, actorOf(ctx), now)
-    case 'camera.set': return setCamera(s, cmd, ctx.newId)
-    case 'camera.remove': return removeCamera(s, cmd)
+    case 'marker.edit':
+    case 'marker.delete':
+    case 'camera.set':
+    case 'camera.remove':
+      return takeLogCommands ? takeLogCommands(s, cmd, actorOf(ctx), ctx.newId, now) : fail('invalid', 'The server applies changes to the take log; wait for it.')
     default: {
       const unknown: never = cmd
       return fail('invalid', `This screen sent an action the shoot does not know ("${String((unknown as { type: string }).type).slice(0, 40)}"); reload the screen.`, 'type')

@@ -7,8 +7,11 @@
 import type { ShootApplyResult, ShootCommand, ShootCommandContext, ShootState } from '../types/shoot'
 import { shootCommandRefusal } from './shoot-commands'
 import { parseShootCommand } from './shoot-schema'
-import { applyKnownShootCommand } from './shoot-apply'
+import { applyKnownShootCommand, applyTakeLogCommandsWith } from './shoot-apply'
+import { takeLogCommands } from './take-log-apply'
 import { withLivePlan } from './shoot-live-plan'
+
+applyTakeLogCommandsWith(takeLogCommands)
 
 /** Commands after which the plan stays as it was (markers, cameras and the rolling flag change nothing in it). */
 const KEEPS_PLAN = new Set(['marker.add', 'rolling.set', 'marker.edit', 'marker.delete', 'camera.set', 'camera.remove'])

@@ -9,6 +9,7 @@ import {
 } from '../types/shoot'
 import { defaultStartTimecode, parseTimecodeRate, timecodeToFrames, type TimecodeRate } from './timecode'
 import { MARKER_WORDS } from './shoot-words'
+import type { TakeLogCommands } from './shoot-apply'
 
 type Failure = { ok: false; error: ShootCommandError }
 type Outcome = { state: ShootState; events: ShootEvent[] } | Failure
@@ -104,5 +105,15 @@ export function removeCamera(s: ShootState, cmd: ShootCommandOf<'camera.remove'>
   return {
     state: { ...s, cameras: cameras.filter((c) => c.id !== cmd.cameraId) },
     events: [{ type: 'camera.changed', cameraId: cmd.cameraId, removed: true }],
+  }
+}
+
+/** The four take-log commands, as the reducer dispatches them (registered by shoot-reducer.ts). */
+export const takeLogCommands: TakeLogCommands = (s, cmd, by, newId, now) => {
+  switch (cmd.type) {
+    case 'marker.edit': return editMarker(s, cmd, by, now)
+    case 'marker.delete': return deleteMarker(s, cmd, by, now)
+    case 'camera.set': return setCamera(s, cmd, newId)
+    case 'camera.remove': return removeCamera(s, cmd)
   }
 }

@@ -4,12 +4,8 @@
 // itself at every step change while rolling; pickups are the moments still to record again.
 import type { ShootCamera, ShootMarker, ShootMarkerKind, ShootSegment, ShootState, ShootStepRef } from '../types/shoot'
 import { timecodeAfter, type TimecodeRate } from './timecode'
+export { recordingMsAt } from './recording-time'
 
-/** Recording time at a server instant: the ended rolls plus this roll so far; null when not rolling. */
-export function recordingMsAt(s: Pick<ShootState, 'rolling' | 'rollingSinceServerMs' | 'recordedMs'>, serverMs: number): number | null {
-  if (!s.rolling || s.rollingSinceServerMs === null) return null
-  return (s.recordedMs ?? 0) + Math.max(0, serverMs - s.rollingSinceServerMs)
-}
 
 /**
  * A marker's recording time. Markers made before recording time was kept count from their own roll
