@@ -5,6 +5,7 @@
 // answers (or not for its method) is Nuxt's "Page not found": it is answered as the one shape's 404,
 // so a mangled id gets the same kind of refusal as a missing row.
 import { DomainError, isDomainError } from '../shared/utils/domain-error'
+import { databaseRefusal } from './db/db-errors'
 import { sendDomainError } from './utils/errors'
 
 /** What a request of each method asks, in words. */
@@ -14,7 +15,13 @@ const TOO_LARGE = 'The request is over 2 MB, the most any request may carry; sen
 
 export default defineNitroErrorHandler(async (error, event) => {
   const domain = [error, error.cause].find(isDomainError)
+  // A database held busy or a full disk (db-errors.ts): the one shape, not a 500.
+  const database = domain ? null : databaseRefusal(error)
   if (domain) await sendDomainError(event, domain)
+  else if (database) {
+    console.warn('[hobline] request refused by the database:', event.method, event.path, String(error.cause ?? error))
+    await sendDomainError(event, database)
+  }
   else if (error.statusCode === 413) await sendDomainError(event, new DomainError('too-large', TOO_LARGE))
   else if (error.statusCode === 404 && event.path.startsWith('/api/')) {
     // The address is not echoed: the words are Hobline's own, whatever was sent.

@@ -7,6 +7,7 @@ import type { ShootActor } from '../../shared/types/shoot'
 import type { ShootEventMessage, ShootPresence, ShootSnapshot } from '../../shared/types/socket-events'
 import { DomainError, isDomainError, refusal, type Refusal } from '../../shared/utils/domain-error'
 import type { DeviceRole, StudioRole } from '../../shared/utils/roles'
+import { databaseRefusal } from '../db/db-errors'
 import { createShootEngine, type CommandOutcome, type ShootEngine } from './engine'
 import type { Presence } from './presence'
 import type { ShootRow, ShootStore } from './store'
@@ -63,6 +64,11 @@ async function answer<T extends object>(fn: () => Promise<T>): Promise<Result<T>
     return { ok: true, ...(await fn()) }
   } catch (error) {
     if (isDomainError(error)) return refusal(error)
+    const database = databaseRefusal(error)
+    if (database) {
+      console.warn('[hobline] shoot handler refused by the database:', String(error))
+      return refusal(database)
+    }
     console.error('[hobline] shoot handler failed:', error)
     return refusal({ code: 'server', message: SERVER_FAULT })
   }

@@ -25,6 +25,9 @@ const STATUS: Partial<Record<DomainErrorCode, number>> = {
   'server': 500,
   'upstream': 502,
   'unavailable': 503,
+  'busy': 503,
+  // 507 Insufficient Storage (RFC 4918 §11.5).
+  'storage': 507,
 }
 
 /** The HTTP status of a code; the shoot reducer's own codes (a command the state refuses) are 409. */

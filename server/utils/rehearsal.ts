@@ -9,6 +9,7 @@ import { DomainError } from '../../shared/utils/domain-error'
 import { rehearsalReport, stepActuals, suggestedRanges } from '../../shared/utils/rehearsal-report'
 import { STATUS_WORDS } from '../../shared/utils/shoot-words'
 import { dateTimeInZone } from '../../shared/utils/time-zone'
+import { shootServerNow } from '../shoot/clock'
 
 export const SUGGESTED_RANGE_RULE = 'Suggested range: the shortest to the longest time the step took across the studio\'s rehearsals of its recipe, '
   + 'in kitchen time, rounded outward to the whole minute (to 5 seconds under a minute). A wait is timed by its timer, from its start to Done; '
@@ -38,7 +39,7 @@ export async function loadRehearsalReport(shootId: number) {
     throw new DomainError('not-found', 'A recording has no rehearsal report; open its take log from the list of shoots.')
   }
   const settings = await studioSettings(row.studioId)
-  const now = Date.now()
+  const now = shootServerNow()
   const state = row.state
   const report = rehearsalReport(state, now)
   const recipeIds = [...new Set(report.steps.map((s) => s.recipeId).filter((x): x is string => !!x))]

@@ -8,6 +8,7 @@ import { shootClockAt } from '../../shared/utils/shoot-clock'
 import { MODE_WORDS, STATUS_WORDS } from '../../shared/utils/shoot-words'
 import { dateTimeInZone } from '../../shared/utils/time-zone'
 import type { ShootSummaryRow } from '../shoot/store'
+import { shootServerNow } from '../shoot/clock'
 
 export interface ShootListRow {
   id: number
@@ -52,6 +53,6 @@ export function shootListRow(r: ShootSummaryRow, zone: { locale: string; timeZon
 export async function listShoots(where: { episodeId: number } | { studioId: number }, studioId: number) {
   const settings = await studioSettings(studioId)
   const rows = await useShoot().store.summaries(where)
-  const now = Date.now()
+  const now = shootServerNow()
   return { timeZone: settings.timeZone, shoots: rows.map((r) => shootListRow(r, settings, now)) }
 }

@@ -5,6 +5,7 @@ import type { H3Event } from 'h3'
 import { Server } from 'socket.io'
 import type { ClientToServerEvents, ServerToClientEvents } from '../../shared/types/socket-events'
 import { DomainError } from '../../shared/utils/domain-error'
+import { shootServerNow } from '../shoot/clock'
 import { createShootHandlers, type ShootConnection } from '../shoot/handlers'
 import { createPresence } from '../shoot/presence'
 import { createScriptCache } from '../shoot/script'
@@ -21,6 +22,7 @@ function createLiveShoot() {
     store,
     presence,
     script,
+    now: shootServerNow,
     authorize: (session, shootId) => authorizeSession(session, { shootId }, 'shoot.read'),
     broadcast: {
       // `sentAt` (wall clock, sub-millisecond) lets a screen and the benchmark see how long delivery took.

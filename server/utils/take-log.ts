@@ -10,6 +10,7 @@ import { recordingMsAt } from '../../shared/utils/take-log'
 import { CSV_HEADER, takeLogCsvRows } from '../../shared/utils/take-log-export'
 import { RATE_WORDS, queryCamera, takeLogQuerySchema } from '../../shared/utils/take-log-schemas'
 import { timecodeRateText } from '../../shared/utils/timecode'
+import { shootServerNow } from '../shoot/clock'
 
 export interface TakeLogExport {
   shootId: number
@@ -48,7 +49,7 @@ export async function takeLogExport(event: H3Event): Promise<TakeLogExport> {
   const s = row.state
   return {
     shootId, title: row.title, state: s, camera, track: query.track ?? 'chapters',
-    recordingEndMs: recordingMsAt(s, Date.now()) ?? s.recordedMs ?? 0,
+    recordingEndMs: recordingMsAt(s, shootServerNow()) ?? s.recordedMs ?? 0,
   }
 }
 

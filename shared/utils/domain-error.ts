@@ -17,6 +17,8 @@ export type DomainErrorCode =
   | 'cycle' | 'missing-station' | 'impossible-lag' | 'bad-input' // the cook plan cannot be made
   | 'too-many' // a rate limit; `data.retryAfterSeconds` says when to try again
   | 'unavailable' // the database, mail or storage is not there yet
+  | 'busy' // the database is held by another program past the busy timeout (server/db/db-errors.ts)
+  | 'storage' // the server's disk is full or refused a write; nothing was saved (server/db/db-errors.ts)
   | 'upstream' // a service Hobline relies on answered with an error
   | 'server' // anything else: a bug, logged on the server, never shown in detail
   | (string & {}) // the shoot reducer's own codes (shoot-ended, no-change, …): a conflict with the state
