@@ -27,12 +27,23 @@ export function appOrigin(): string {
 export class Client {
   cookie = ''
 
+  /** `base`: the address of a server the test started itself (spawned.ts); default, the file's built app. */
+  constructor(readonly base?: string) {}
+
+  url(path: string): string {
+    return this.base ? new URL(path, this.base).href : url(path)
+  }
+
+  origin(): string {
+    return this.base ? new URL(this.base).origin : appOrigin()
+  }
+
   async call<T = Json>(method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<Reply<T>> {
-    const res = await fetch(url(path), {
+    const res = await fetch(this.url(path), {
       method,
       headers: {
         accept: 'application/json',
-        origin: appOrigin(),
+        origin: this.origin(),
         ...(body !== undefined && typeof body !== 'string' ? { 'content-type': 'application/json' } : {}),
         ...(this.cookie ? { cookie: this.cookie } : {}),
         ...headers,
@@ -59,8 +70,8 @@ export class Client {
   delete = <T = Json>(path: string) => this.call<T>('DELETE', path)
 }
 
-export async function signedIn(email: string, password = DEMO_PASSWORD): Promise<Client> {
-  const client = new Client()
+export async function signedIn(email: string, password = DEMO_PASSWORD, base?: string): Promise<Client> {
+  const client = new Client(base)
   const res = await client.post('/api/auth/login', { email, password })
   if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${JSON.stringify(res.body)}`)
   return client

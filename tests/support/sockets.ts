@@ -6,12 +6,13 @@ import { appOrigin, type Client, type Json } from './client'
 
 export type TestSocket = Socket<ServerToClientEvents, ClientToServerEvents> & { received: ShootEventMessage[] }
 
+/** A socket of `client` (to its server: the file's built app, or the one at client.base). */
 export function connect(client: Client | null, transport: 'websocket' | 'polling' = 'websocket'): Promise<TestSocket> {
-  const socket = io(url('/'), {
+  const socket = io(client?.url('/') ?? url('/'), {
     path: '/socket.io',
     transports: [transport],
     // The app's own Origin, as a browser sends on the handshake (server/utils/same-origin.ts).
-    extraHeaders: { origin: appOrigin(), ...(client?.cookie ? { cookie: client.cookie } : {}) },
+    extraHeaders: { origin: client?.origin() ?? appOrigin(), ...(client?.cookie ? { cookie: client.cookie } : {}) },
     reconnection: false,
     forceNew: true,
   }) as TestSocket

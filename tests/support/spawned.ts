@@ -1,21 +1,33 @@
 // A built server in a process of its own, for tests that start it in a way useBuiltApp does not:
-// without a setting, with a broken database, without a library. Its log is kept; stop() waits for exit.
+// without a setting, with a broken database, without a library, under a file-size limit or a faked
+// clock (`wrap`: a command the node process is started through, e.g. prlimit), killed with SIGKILL
+// and started again on the same file. Its log is kept; stop() waits for exit.
 import { spawn } from 'node:child_process'
-import { getRandomPort } from 'get-port-please'
 import { resolve } from 'node:path'
-import { rootDir, tempDatabasePath } from './app'
+import { rootDir, serverPort, tempDatabasePath } from './app'
 
 export interface SpawnedApp {
   base: string
   log: () => string
   exited: Promise<number | null>
   stop: () => Promise<void>
+  /** Sends a signal (SIGKILL: no clean-up at all) and waits for the process to end. */
+  kill: (signal: NodeJS.Signals) => Promise<void>
 }
 
-export async function spawnBuiltApp(env: Record<string, string | undefined>, options: { nodeArgs?: string[] } = {}): Promise<SpawnedApp> {
-  const port = await getRandomPort('127.0.0.1')
+export interface SpawnOptions {
+  nodeArgs?: string[]
+  /** The port to listen on (default: a free one from this worker's slice, app.ts). */
+  port?: number
+  /** A command and its arguments that start node, e.g. ['prlimit', '--fsize=1000000', '--']. */
+  wrap?: string[]
+}
+
+export async function spawnBuiltApp(env: Record<string, string | undefined>, options: SpawnOptions = {}): Promise<SpawnedApp> {
+  const port = options.port ?? await serverPort()
   const base = `http://127.0.0.1:${port}`
-  const child = spawn(process.execPath, [...(options.nodeArgs ?? []), resolve(rootDir, '.output/server/index.mjs')], {
+  const [command, ...args] = [...(options.wrap ?? []), process.execPath, ...(options.nodeArgs ?? []), resolve(rootDir, '.output/server/index.mjs')]
+  const child = spawn(command!, args, {
     env: {
       ...process.env,
       PORT: String(port),
@@ -42,6 +54,11 @@ export async function spawnBuiltApp(env: Record<string, string | undefined>, opt
       const timer = setTimeout(() => child.kill('SIGKILL'), 10_000)
       await exited
       clearTimeout(timer)
+    },
+    async kill(signal) {
+      if (child.exitCode !== null || child.signalCode !== null) return
+      child.kill(signal)
+      await exited
     },
   }
 }
