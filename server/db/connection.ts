@@ -45,6 +45,9 @@ export async function openDatabase(path: string): Promise<Sequelize> {
     storage,
     logging: false,
     transactionType: Transaction.TYPES.IMMEDIATE,
+    // One try: the busy timeout already waits BUSY_TIMEOUT_MS for the lock (Sequelize's default of 5 tries
+    // would hold a request 30 s before its refusal, server/db/db-errors.ts).
+    retry: { max: 1 },
     define: { underscored: true },
   })
   // Sequelize's SQLite connection manager opens a new connection per transaction and runs no hooks,
