@@ -36,7 +36,8 @@ export default defineNitroPlugin((nitroApp) => {
     // answered with the 'too-many' refusal and nothing runs, an unacknowledged one is dropped.
     const bucket = createCommandBucket(limit)
     socket.use((packet, next) => {
-      const refused = bucket.take(Date.now())
+      // On the monotonic clock: a step of the wall clock (NTP) neither locks a screen out nor lifts the limit.
+      const refused = bucket.take(performance.now())
       if (!refused) return next()
       const ack = packet.at(-1)
       if (typeof ack === 'function') ack(refused)

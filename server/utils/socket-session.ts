@@ -44,13 +44,14 @@ export interface TooManyRefusal {
   error: DomainErrorBody & { code: 'too-many'; retryAfterSeconds: number }
 }
 
-/** One socket's bucket: `take(now)` is null while a message may go on, else the refusal to answer with. */
+/** One socket's bucket: `take(now)` (monotonic ms) is null while a message may go on, else the refusal to answer with. */
 export function createCommandBucket(limit: { perSecond: number; burst: number }) {
   let tokens = limit.burst
   let last = -Infinity
   return {
     take(nowMs: number): TooManyRefusal | null {
-      tokens = Math.min(limit.burst, tokens + (Number.isFinite(last) ? ((nowMs - last) / 1000) * limit.perSecond : limit.burst))
+      // Time never runs backwards here: a clock stepped back must not take tokens away (pass a monotonic clock).
+      tokens = Math.min(limit.burst, tokens + (Number.isFinite(last) ? (Math.max(0, nowMs - last) / 1000) * limit.perSecond : limit.burst))
       last = nowMs
       if (tokens >= 1) {
         tokens -= 1
