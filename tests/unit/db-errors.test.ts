@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest'
 import { DATABASE_BUSY_MESSAGE, DISK_FULL_MESSAGE, DISK_WRITE_MESSAGE, databaseRefusal, sqliteCodeOf } from '../../server/db/db-errors'
 import { isDomainError } from '../../shared/utils/domain-error'
 import { httpStatusOf } from '../../server/utils/errors'
+import { wordsProblem } from '../support/refusal-words'
 
 /** An error as node-sqlite3 makes it: `code` the primary result code's name, `errno` its number. */
 const sqliteError = (code: string, errno: number, text: string) => Object.assign(new Error(`${code}: ${text}`), { code, errno })
@@ -37,5 +38,11 @@ describe('databaseRefusal', () => {
     for (const e of [new Error('boom'), sqliteError('SQLITE_CONSTRAINT', 19, 'UNIQUE constraint failed'), null, undefined, 'SQLITE_BUSY', { code: 42 }]) {
       expect(databaseRefusal(e)).toBeNull()
     }
+  })
+})
+
+describe('the database refusals\' words', () => {
+  it('read as a person\'s words (tests/support/refusal-words.ts): no SQLite code, no identifier', () => {
+    for (const message of [DATABASE_BUSY_MESSAGE, DISK_FULL_MESSAGE, DISK_WRITE_MESSAGE]) expect(wordsProblem(message)).toBeNull()
   })
 })
