@@ -25,14 +25,13 @@ export interface OnSetOptions {
 export async function startOnSetServer({ port, databasePath, tls }: OnSetOptions): Promise<OnSetServer> {
   const base = `${tls ? 'https' : 'http'}://${TEST_HOST}:${port}`
   const app = await spawnBuiltApp({
-    PORT: String(port),
     NUXT_DATABASE_PATH: databasePath,
     NUXT_PUBLIC_SITE_URL: base,
     // As `npm run demo` sets it: a Secure cookie is dropped on a plain-http address that is not localhost.
     NUXT_SESSION_COOKIE_SECURE: String(!!tls),
     NUXT_TLS_ROOT_CERT_PATH: tls?.rootCert ?? 'none',
     ...(tls ? { NITRO_SSL_CERT: readFileSync(tls.cert, 'utf8'), NITRO_SSL_KEY: readFileSync(tls.key, 'utf8') } : {}),
-  })
+  }, { port })
   let exited = false
   void app.exited.then(() => (exited = true))
   const server: OnSetServer = { base, log: app.log, stop: app.stop }
