@@ -3,7 +3,8 @@
 // limiter (nuxt.config.ts, 2 MB) throws h3's 413: it is answered in the same shape. Anything else
 // goes on to Nuxt's own handler (the error page, or its JSON). An address under /api that no route
 // answers (or not for its method) is Nuxt's "Page not found": it is answered as the one shape's 404,
-// so a mangled id gets the same kind of refusal as a missing row.
+// so a mangled id gets the same kind of refusal as a missing row. SQLite's busy, full-disk and write failures
+// are answered in the same shape through server/db/db-errors.ts.
 import { DomainError, isDomainError } from '../shared/utils/domain-error'
 import { databaseRefusal } from './db/db-errors'
 import { sendDomainError } from './utils/errors'

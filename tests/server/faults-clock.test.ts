@@ -10,7 +10,7 @@
 // Before the server clock moved on the monotonic clock (shared/utils/steady-clock.ts), deadlines
 // were wall-clock ms: the +60 s step rang the first timer at once, 60 s early, and the -60 s step
 // held the second a minute late.
-import { existsSync, writeFileSync } from 'node:fs'
+import { existsSync, readdirSync, writeFileSync } from 'node:fs'
 import { dirname, join } from 'node:path'
 import { afterAll, describe, expect, it } from 'vitest'
 import { clockFilterAdd, clockFilterBest, ntpSample, type ClockSample } from '../../shared/utils/clock'
@@ -22,7 +22,8 @@ import { emitAck, waitFor, type TestSocket } from '../support/sockets'
 import type { SpawnedApp } from '../support/spawned'
 import { integrityCheck } from '../support/sqlite'
 
-const LIBFAKETIME = '/usr/lib/x86_64-linux-gnu/faketime/libfaketimeMT.so.1'
+/** Debian's libfaketime for threaded programs, under the machine's multiarch folder (x86_64-linux-gnu, aarch64-linux-gnu, …). */
+const LIBFAKETIME = readdirSync('/usr/lib').map((d) => join('/usr/lib', d, 'faketime/libfaketimeMT.so.1')).find((f) => existsSync(f))
 const TIMER_MS = 8000
 const MIN = 60_000
 
@@ -40,9 +41,7 @@ async function serverOffset(socket: TestSocket): Promise<ClockSample> {
 }
 
 describe('the server clock stepping by a minute while timers run', () => {
-  if (!existsSync(LIBFAKETIME)) {
-    throw new Error(`libfaketime is needed at ${LIBFAKETIME} (apt-get install faketime; .ci/run installs it)`)
-  }
+  if (!LIBFAKETIME) throw new Error('libfaketime is needed: /usr/lib/<arch>/faketime/libfaketimeMT.so.1 (apt-get install faketime; .ci/run installs it)')
   const databasePath = tempDatabasePath('fault-clock')
   const stepFile = join(dirname(databasePath), 'clock-step')
   let app: SpawnedApp
