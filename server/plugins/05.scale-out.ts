@@ -3,10 +3,11 @@
 // process that has gone still rings (server/shoot/live-watch.ts); Redis's connections close with
 // the server. One process on a SQLite file needs neither.
 import { isServerDatabase } from '../db/dialect'
-import { watchLiveShoots } from '../shoot/live-watch'
+import { reloadEveryMs, watchLiveShoots } from '../shoot/live-watch'
 
 export default defineNitroPlugin((nitroApp) => {
-  const watch = isServerDatabase(getDatabaseHandle()?.path ?? '') ? watchLiveShoots(useShoot().handlers.engine) : null
+  const serverDatabase = isServerDatabase(getDatabaseHandle()?.path ?? '')
+  const watch = serverDatabase ? watchLiveShoots(useShoot().handlers.engine, reloadEveryMs(useRuntimeConfig().shootReloadMs)) : null
   nitroApp.hooks.hook('close', async () => {
     watch?.stop()
     const presence = useShoot().presence as { stop?: () => Promise<void> }

@@ -5,13 +5,13 @@
 // what is still running, so two processes' tickers never ring the same timer twice.
 import type { ShootEngine } from './engine'
 
-/** How often each process reads the live shoots again (NUXT_SHOOT_RELOAD_MS, default 2 s). */
-export function reloadEveryMs(): number {
-  const n = Number(process.env.NUXT_SHOOT_RELOAD_MS)
+/** How often each process reads the live shoots again (NUXT_SHOOT_RELOAD_MS, default 2 s, at least 100 ms). */
+export function reloadEveryMs(value: unknown): number {
+  const n = Number(value)
   return Number.isFinite(n) && n >= 100 ? n : 2000
 }
 
-export function watchLiveShoots(engine: Pick<ShootEngine, 'loadLive'>, everyMs = reloadEveryMs()) {
+export function watchLiveShoots(engine: Pick<ShootEngine, 'loadLive'>, everyMs = 2000) {
   let loading = false
   const timer = setInterval(async () => {
     if (loading) return

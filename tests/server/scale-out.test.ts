@@ -31,6 +31,7 @@ describe('more than one app process: PostgreSQL and Redis', () => {
   let b: AppProcess
   let db: pg.Client
   let shootId: number
+  let episodeId: number
   const producer = new ProcessClient()
   const host = new ProcessClient()
   const screens: Screen[] = []
@@ -55,7 +56,8 @@ describe('more than one app process: PostgreSQL and Redis', () => {
       expect(res.status).toBe(200)
     }
     const episodes = (await producer.call(a, 'GET', '/api/studios/1/episodes')).body.episodes
-    const shoot = await producer.call(a, 'POST', `/api/episodes/${episodes[0].id}/shoots`, { mode: 'rehearsal' })
+    episodeId = episodes[0].id
+    const shoot = await producer.call(a, 'POST', `/api/episodes/${episodeId}/shoots`, { mode: 'rehearsal' })
     expect(shoot.status).toBe(201)
     shootId = shoot.body.shoot.id
   }, 240_000)
@@ -120,6 +122,31 @@ describe('more than one app process: PostgreSQL and Redis', () => {
     const tries = []
     for (const app of [a, b, a, b]) tries.push((await stranger.call(app, 'POST', '/api/auth/login', { email: 'nobody@example.test', password: 'wrong-password-1' })).status)
     expect(tries).toEqual([401, 401, 401, 429])
+  })
+
+  it('reads the shoot list, the rehearsal report and the shopping list from the server database (jsonb, GREATEST)', async () => {
+    const onA = screens[0]!
+    // The pickup comes last, after the good takes: it is still open (openPickups reads the picks list made with jsonb).
+    for (const marker of [{ kind: 'good' }, { kind: 'flub' }, { kind: 'note', text: 'Steam on the lens' }, { kind: 'good' }, { kind: 'pickup' }]) {
+      expect((await emitAck(onA, 'shoot:command', { shootId, type: 'marker.add', ...marker })).ok).toBe(true)
+    }
+    const list = await producer.call(b, 'GET', `/api/episodes/${episodeId}/shoots`)
+    expect(list.status).toBe(200)
+    const row = list.body.shoots.find((r: { id: number }) => r.id === shootId)
+    expect(row).toMatchObject({ mode: 'rehearsal', status: 'running', started: true, markers: { good: 2, pickup: 1, flub: 1, note: 1 }, pickupsOpen: 1 })
+    const report = await producer.call(b, 'GET', `/api/shoots/${shootId}/report`)
+    expect(report.status).toBe(200)
+    expect(report.body.recipes.length).toBeGreaterThan(0)
+
+    const shopping = await producer.call(b, 'GET', `/api/episodes/${episodeId}/shopping`)
+    const key = shopping.body.lines[0].key as string
+    const on = await producer.call(b, 'PUT', `/api/episodes/${episodeId}/shopping/checks/${key}`, { ticked: true })
+    const off = await producer.call(a, 'PUT', `/api/episodes/${episodeId}/shopping/checks/${key}`, { ticked: false })
+    expect([on.status, off.status]).toEqual([200, 200])
+    expect(on.body.lines.find((l: { key: string }) => l.key === key).check).toMatchObject({ by: expect.any(String) })
+    expect(off.body.lines.find((l: { key: string }) => l.key === key).check).toBeNull()
+    const stored = await db.query('SELECT ticked, at FROM shopping_checks WHERE episode_id = $1 AND line_key = $2', [episodeId, key])
+    expect(stored.rows).toEqual([{ ticked: false, at: expect.any(Number) }])
   })
 
   it('rings a timer started on process A after A is killed (SIGKILL): the screen on B hears it and it is stored', async () => {
