@@ -17,6 +17,9 @@ import { openDatabase } from '../../server/db/connection'
 import { DEMO_PASSWORD } from '../../server/db/demo'
 import { createMigrator, migrate } from '../../server/db/migrator'
 import { migrations } from '../../server/db/migrations'
+import { createShootEngine } from '../../server/shoot/engine'
+import { openShootStore, type ShootStore } from '../../server/shoot/store'
+import { openPostgresShootStore } from '../../server/shoot/store-postgres'
 import { connectTo, ProcessClient, startAppProcess, type AppProcess } from '../support/app-process'
 import { demo } from '../support/client'
 import { startPostgres, startRedis, type RunningServer } from '../support/servers'
@@ -220,5 +223,86 @@ describe('the same migrations on SQLite and on PostgreSQL', () => {
       expect(await migrate(sequelize)).toEqual({ applied: migrations.map((m) => m.name), pending: [] })
       expect(await schema(sequelize)).toEqual(before)
     }
+  })
+})
+
+describe('the shoot store on PostgreSQL, as two app processes use it', () => {
+  const RUN_ORDER = [{ id: 'segment-1', title: 'Lentil stew', stepIds: ['11', '12'] }]
+  const PRODUCER = { role: 'producer', id: 'user:1' } as const
+  let postgres: Awaited<ReturnType<typeof startPostgres>>
+  let sequelize: Sequelize
+  let sqlite: Sequelize
+  let sqlitePath: string
+  const stores: ShootStore[] = []
+  let clock = Date.UTC(2026, 11, 3, 9, 0, 0)
+  const now = () => clock
+  const engineOn = (store: ShootStore) => createShootEngine({ store, broadcast: () => {}, now })
+  const newShoot = (engine: ReturnType<typeof engineOn>) =>
+    engine.create({ studioId: 1, episodeId: null, title: 'Thursday rehearsal', mode: 'rehearsal', createdBy: null, runOrder: RUN_ORDER })
+
+  beforeAll(async () => {
+    postgres = await startPostgres()
+    sequelize = await openDatabase(postgres.url)
+    await migrate(sequelize)
+    await sequelize.query(`INSERT INTO studios (id, name, slug, created_at, updated_at) VALUES (1, 'Test kitchen', 'test-kitchen', NOW(), NOW())`)
+    sqlitePath = join(mkdtempSync(join(tmpdir(), 'hobline-store-')), 'hobline.sqlite')
+    sqlite = await openDatabase(sqlitePath)
+    await migrate(sqlite)
+    await sqlite.query(`INSERT INTO studios (id, name, slug, created_at, updated_at) VALUES (1, 'Test kitchen', 'test-kitchen', datetime('now'), datetime('now'))`)
+    stores.push(openPostgresShootStore(postgres.url), openPostgresShootStore(postgres.url), openShootStore(sqlitePath))
+  }, 120_000)
+
+  afterAll(async () => {
+    for (const store of stores) await store.close()
+    await Promise.all([sequelize?.close(), sqlite?.close()])
+    await postgres?.stop()
+  })
+
+  it('keeps every command two processes send at once to one shoot, in consecutive sequence numbers', async () => {
+    const [a, b] = [engineOn(stores[0]!), engineOn(stores[1]!)]
+    const { id } = await newShoot(a)
+    expect((await a.apply(id, { type: 'shoot.start' }, PRODUCER)).ok).toBe(true)
+    const outcomes = await Promise.all(Array.from({ length: 40 }, (_, n) =>
+      (n % 2 ? a : b).apply(id, { type: 'marker.add', kind: n % 4 ? 'good' : 'note', text: `Take ${n}` }, PRODUCER)))
+    expect(outcomes.every((o) => o.ok)).toBe(true)
+    expect(outcomes.map((o) => (o.ok ? o.seq : 0)).sort((x, y) => x - y)).toEqual(Array.from({ length: 40 }, (_, n) => n + 2))
+    expect((await stores[1]!.events(id)).map((e) => e.seq)).toEqual(Array.from({ length: 41 }, (_, n) => n + 1))
+    const row = (await stores[0]!.read(id))!
+    expect(row.seq).toBe(41)
+    expect(row.state.markers).toHaveLength(40)
+  })
+
+  it('marks a timer due once when both processes tick at the same moment; the second learned of it by reading the live shoots', async () => {
+    const [a, b] = [engineOn(stores[0]!), engineOn(stores[1]!)]
+    const { id } = await newShoot(a)
+    await a.apply(id, { type: 'shoot.start' }, PRODUCER)
+    expect((await a.apply(id, { type: 'timer.start', label: 'Dough rest', durationMs: 60_000 }, PRODUCER)).ok).toBe(true)
+    expect(await b.loadLive()).toBeGreaterThan(0)
+    clock += 61_000
+    const ticked = await Promise.all([a.tick(), b.tick(), a.tick(), b.tick()])
+    expect(ticked.every((n) => n >= 0)).toBe(true)
+    const due = (await stores[0]!.events(id)).filter((e) => e.type === 'timer.due')
+    expect(due).toHaveLength(1)
+    expect((await stores[1]!.read(id))!.state.timers.find((t) => t.label === 'Dough rest')!.state).toBe('due')
+  })
+
+  it('lists a shoot as the SQLite store does: marker counts and pickups read with jsonb', async () => {
+    const rows = []
+    for (const store of [stores[0]!, stores[2]!]) {
+      const engine = engineOn(store)
+      const { id } = await newShoot(engine)
+      const at = clock
+      for (const command of [{ type: 'shoot.start' }, { type: 'marker.add', kind: 'pickup' }, { type: 'marker.add', kind: 'good' },
+        { type: 'marker.add', kind: 'flub' }, { type: 'marker.add', kind: 'pickup' }, { type: 'shoot.end' }]) {
+        clock += 1000
+        expect((await engine.apply(id, command, PRODUCER)).ok, JSON.stringify(command)).toBe(true)
+      }
+      clock = at
+      const [summary] = (await store.summaries({ studioId: 1 })).filter((s) => s.id === id)
+      rows.push({ ...summary!, id: 0, createdAt: '' })
+    }
+    expect(rows[0]!.markerCounts).toEqual({ pickup: 2, good: 1, flub: 1 })
+    expect(rows[0]!.pickupsAndGoods.map((p) => p.kind)).toEqual(['pickup', 'good', 'pickup'])
+    expect(rows[0]).toEqual(rows[1])
   })
 })
