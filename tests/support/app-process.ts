@@ -2,60 +2,19 @@
 // each on a port of the worker's slice, each reached directly by its own address: an HTTP client with
 // a cookie jar and socket.io connections over WebSocket (a load balancer would keep each screen on one
 // process; here the test picks the process).
-import { spawn, type ChildProcess } from 'node:child_process'
-import { resolve } from 'node:path'
 import { io } from 'socket.io-client'
-import { rootDir, serverPort, tempDatabasePath } from './app'
+import { serverPort } from './app'
 import type { Json, Reply } from './client'
 import type { TestSocket } from './sockets'
+import { spawnBuiltApp, waitForHealth, type SpawnedApp } from './spawned'
 
-export interface AppProcess {
-  base: string
-  child: ChildProcess
-  log: () => string
-  exited: Promise<number | null>
-  stop: () => Promise<void>
-}
+export type AppProcess = SpawnedApp
 
+/** A built app process on a port of the worker's slice, once its health says ok (migrated). */
 export async function startAppProcess(env: Record<string, string>): Promise<AppProcess> {
-  const port = await serverPort()
-  const base = `http://127.0.0.1:${port}`
-  const child = spawn(process.execPath, [resolve(rootDir, '.output/server/index.mjs')], {
-    env: {
-      ...process.env,
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      NUXT_DATABASE_PATH: tempDatabasePath('unused'),
-      NUXT_DATABASE_SEED: 'never',
-      NUXT_SESSION_PASSWORD: 'test-session-password-of-at-least-32-characters',
-      NUXT_PUBLIC_SITE_URL: base,
-      ...env,
-    },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  })
-  let log = ''
-  child.stdout!.on('data', (c) => (log += c))
-  child.stderr!.on('data', (c) => (log += c))
-  const exited = new Promise<number | null>((r) => child.once('exit', (code) => r(code)))
-  const app: AppProcess = {
-    base,
-    child,
-    log: () => log,
-    exited,
-    async stop() {
-      if (child.exitCode !== null || child.signalCode !== null) return
-      child.kill('SIGTERM')
-      const timer = setTimeout(() => child.kill('SIGKILL'), 10_000)
-      await exited
-      clearTimeout(timer)
-    },
-  }
-  for (let i = 0; ; i++) {
-    const body = await fetch(`${base}/api/health`).then((r) => r.json()).catch(() => null)
-    if (body?.status === 'ok') return app
-    if (i > 1200 || child.exitCode !== null) throw new Error(`the app process on ${base} did not become healthy:\n${log}`)
-    await new Promise((r) => setTimeout(r, 50))
-  }
+  const app = await spawnBuiltApp({ NUXT_DATABASE_SEED: 'never', ...env }, { port: await serverPort() })
+  await waitForHealth(app, (status, body) => status === 200 && body.status === 'ok')
+  return app
 }
 
 /** One person's cookie jar, talking to one process at a time (the cookie is valid on every process). */

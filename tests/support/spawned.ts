@@ -1,19 +1,20 @@
 // A built server in a process of its own, for tests that start it in a way useBuiltApp does not:
 // without a setting, with a broken database, without a library. Its log is kept; stop() waits for exit.
-import { spawn } from 'node:child_process'
+import { spawn, type ChildProcess } from 'node:child_process'
 import { getRandomPort } from 'get-port-please'
 import { resolve } from 'node:path'
 import { rootDir, tempDatabasePath } from './app'
 
 export interface SpawnedApp {
   base: string
+  child: ChildProcess
   log: () => string
   exited: Promise<number | null>
   stop: () => Promise<void>
 }
 
-export async function spawnBuiltApp(env: Record<string, string | undefined>, options: { nodeArgs?: string[] } = {}): Promise<SpawnedApp> {
-  const port = await getRandomPort('127.0.0.1')
+export async function spawnBuiltApp(env: Record<string, string | undefined>, options: { nodeArgs?: string[]; port?: number } = {}): Promise<SpawnedApp> {
+  const port = options.port ?? await getRandomPort('127.0.0.1')
   const base = `http://127.0.0.1:${port}`
   const child = spawn(process.execPath, [...(options.nodeArgs ?? []), resolve(rootDir, '.output/server/index.mjs')], {
     env: {
@@ -34,6 +35,7 @@ export async function spawnBuiltApp(env: Record<string, string | undefined>, opt
   const exited = new Promise<number | null>((r) => child.once('exit', (code) => r(code)))
   return {
     base,
+    child,
     log: () => log,
     exited,
     async stop() {
