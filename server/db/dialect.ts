@@ -31,3 +31,30 @@ export function dialectOf(sequelize: Sequelize): DatabaseDialect {
 export function greatest(sequelize: Sequelize, a: string, b: string): string {
   return `${dialectOf(sequelize) === 'postgres' ? 'GREATEST' : 'MAX'}(${a}, ${b})`
 }
+
+type PgConnection = { query: (sql: string) => Promise<unknown> }
+type Connections = { getConnection: () => Promise<PgConnection>; releaseConnection: (c: PgConnection) => Promise<void> }
+
+/** Any number: the key every app process's migration lock takes on PostgreSQL. */
+const MIGRATION_LOCK = 4_146_210
+
+/**
+ * Runs `fn` (the migrations) while holding PostgreSQL's advisory lock for them, on a connection of its
+ * own, so app processes starting together on an unmigrated database migrate one after another: the
+ * later ones find nothing pending. On SQLite, one process owns the file: `fn` runs as it is.
+ */
+export async function withMigrationLock<T>(sequelize: Sequelize, fn: () => Promise<T>): Promise<T> {
+  if (dialectOf(sequelize) !== 'postgres') return fn()
+  const connections = sequelize.connectionManager as unknown as Connections
+  const connection = await connections.getConnection()
+  try {
+    await connection.query(`SELECT pg_advisory_lock(${MIGRATION_LOCK})`)
+    try {
+      return await fn()
+    } finally {
+      await connection.query(`SELECT pg_advisory_unlock(${MIGRATION_LOCK})`)
+    }
+  } finally {
+    await connections.releaseConnection(connection)
+  }
+}

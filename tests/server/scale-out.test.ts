@@ -215,6 +215,17 @@ describe('the same migrations on SQLite and on PostgreSQL', () => {
     expect(serverSchema).toEqual(fileSchema)
   })
 
+  it('migrates a fresh server database once when two processes start on it together', async () => {
+    const url = postgres.admin('hobline_together')
+    const [one, two] = await Promise.all([openDatabase(url), openDatabase(url)])
+    try {
+      const states = await Promise.all([migrate(one), migrate(two)])
+      expect(states).toEqual([{ applied: migrations.map((m) => m.name), pending: [] }, { applied: migrations.map((m) => m.name), pending: [] }])
+    } finally {
+      await Promise.all([one.close(), two.close()])
+    }
+  })
+
   it('takes every migration down and up again on both', async () => {
     for (const sequelize of [sqlite, server]) {
       const before = await schema(sequelize)
