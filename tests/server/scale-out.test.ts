@@ -166,6 +166,7 @@ describe('more than one app process: PostgreSQL and Redis', () => {
     // Within the reload period (2 s) and a tick of its deadline, never before it.
     expect(due.serverNow).toBeGreaterThanOrEqual(timer.deadlineServerMs!)
     expect(due.serverNow - timer.deadlineServerMs!).toBeLessThan(3000)
+    console.info(`[scale-out] the timer of the killed process rang on the other ${due.serverNow - timer.deadlineServerMs!} ms after its deadline`)
     const row = await db.query('SELECT state FROM shoots WHERE id = $1', [shootId])
     expect(JSON.parse(row.rows[0].state).timers.find((t: { id: string }) => t.id === timer.id).state).toBe('due')
     const events = await db.query(`SELECT seq FROM shoot_events WHERE shoot_id = $1 AND type = 'timer.due' AND command::jsonb -> 'timerIds' ? $2`, [shootId, timer.id])
