@@ -24,10 +24,13 @@ export async function startRedis(): Promise<RunningServer> {
     stdio: ['ignore', 'pipe', 'pipe'],
   })
   let log = ''
+  let missing = false
+  child.once('error', () => (missing = true))
   child.stdout!.on('data', (c) => (log += c))
   child.stderr!.on('data', (c) => (log += c))
   const exited = new Promise<void>((r) => child.once('exit', () => r()))
   for (let i = 0; !log.includes('Ready to accept connections'); i++) {
+    if (missing) throw new Error('redis-server is not installed: run .ci/run, or apt-get install redis-server')
     if (i > 200 || child.exitCode !== null) throw new Error(`redis-server did not start:\n${log}`)
     await wait(25)
   }
