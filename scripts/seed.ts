@@ -3,11 +3,11 @@ import { startDatabase } from '../server/db'
 import { demoStudio } from '../server/db/demo'
 import { createStorage } from 'unstorage'
 import { photoConfigFromEnv, photoDriver, setPhotoStorage, storeDemoPhoto } from '../server/utils/photos'
-import { databasePath } from './env'
+import { databaseName, databasePath } from './env'
 
 // The same photo store the server mounts (a folder by default, or the configured S3 bucket).
 setPhotoStorage(createStorage({ driver: photoDriver(photoConfigFromEnv()).driver }))
 
 const { sequelize, seeded } = await startDatabase(databasePath, true, undefined, storeDemoPhoto)
-console.log(seeded ? `${databasePath}: demo studio "${demoStudio.name}" added` : `${databasePath}: already has a studio, nothing added`)
+console.log(seeded ? `${databaseName}: demo studio "${demoStudio.name}" added` : `${databaseName}: already has a studio, nothing added`)
 await sequelize.close()

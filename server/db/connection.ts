@@ -5,6 +5,8 @@ import { mkdirSync } from 'node:fs'
 import { dirname, resolve } from 'node:path'
 import { QueryTypes, Sequelize, Transaction } from 'sequelize'
 import sqlite3 from 'sqlite3'
+import { isServerDatabase } from './dialect'
+import { openServerDatabase } from './connection-postgres'
 import { queueWrite } from './write-queue'
 
 export const BUSY_TIMEOUT_MS = 5000
@@ -26,8 +28,9 @@ Sequelize.useCLS({
   bind: <F>(fn: F) => fn,
 } as unknown as Parameters<typeof Sequelize.useCLS>[0])
 
+/** A file path made absolute; ':memory:' and a PostgreSQL URL (dialect.ts) stay as they are. */
 export function resolveDatabasePath(path: string): string {
-  return path === ':memory:' ? path : resolve(path)
+  return path === ':memory:' || isServerDatabase(path) ? path : resolve(path)
 }
 
 /**
@@ -36,6 +39,7 @@ export function resolveDatabasePath(path: string): string {
  * IMMEDIATE transactions so a transaction takes the write lock up front and cannot deadlock on upgrade.
  */
 export async function openDatabase(path: string): Promise<Sequelize> {
+  if (isServerDatabase(path)) return openServerDatabase(path)
   const storage = resolveDatabasePath(path)
   if (storage !== ':memory:') mkdirSync(dirname(storage), { recursive: true })
   const sequelize = new Sequelize({
@@ -76,7 +80,9 @@ export interface DatabasePragmas {
   busyTimeoutMs: number
 }
 
-export async function readPragmas(sequelize: Sequelize): Promise<DatabasePragmas> {
+export async function readPragmas(sequelize: Sequelize): Promise<DatabasePragmas | { dialect: 'postgres' }> {
+  // A server database has no pragmas; the health route says which database it is.
+  if (sequelize.getDialect() === 'postgres') return { dialect: 'postgres' }
   const one = async (pragma: string) => {
     const rows = await sequelize.query<Record<string, unknown>>(`PRAGMA ${pragma}`, { type: QueryTypes.SELECT })
     return Object.values(rows[0] ?? {})[0]

@@ -2,6 +2,7 @@
 // transaction, so a process killed half-way leaves either the old schema or the new one, never a mix.
 import { QueryTypes, type QueryInterface, type Sequelize, type Transaction } from 'sequelize'
 import { Umzug, type UmzugStorage } from 'umzug'
+import { withMigrationLock } from './dialect'
 import { migrations, type Migration } from './migrations'
 
 const TABLE = 'hobline_migrations'
@@ -65,6 +66,6 @@ export async function migrationState(sequelize: Sequelize): Promise<MigrationSta
 }
 
 export async function migrate(sequelize: Sequelize): Promise<MigrationState> {
-  await createMigrator(sequelize).up()
+  await withMigrationLock(sequelize, () => createMigrator(sequelize).up())
   return migrationState(sequelize)
 }

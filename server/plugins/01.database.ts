@@ -1,16 +1,17 @@
-import { basename } from 'node:path'
 import { resolveDatabasePath } from '../db/connection'
+import { databaseAddress, databaseLabel } from '../db/dialect'
 import { shouldSeed, startDatabase } from '../db'
 import { setDatabaseHandle, type DatabaseHandle } from '../utils/db'
 
 export default defineNitroPlugin((nitroApp) => {
   const config = useRuntimeConfig()
-  const path = resolveDatabasePath(config.databasePath)
+  // NUXT_DATABASE_URL (a PostgreSQL server) when set, else the SQLite file NUXT_DATABASE_PATH.
+  const path = resolveDatabasePath(databaseAddress(config))
   const handle = { status: 'migrating', path } as DatabaseHandle
   handle.ready = startDatabase(path, shouldSeed(config.databaseSeed, import.meta.dev), hashPassword, storeDemoPhoto)
     .then(({ sequelize, migrations, seeded }) => {
       Object.assign(handle, { status: 'ready', sequelize, migrations })
-      console.info(`[hobline] database ${basename(path)} ready: ${migrations.applied.length} migrations applied${seeded ? ', demo studio seeded' : ''}`)
+      console.info(`[hobline] database ${databaseLabel(path)} ready: ${migrations.applied.length} migrations applied${seeded ? ', demo studio seeded' : ''}`)
       return sequelize
     })
     .catch((error: Error) => {

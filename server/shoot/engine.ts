@@ -109,10 +109,16 @@ export function createShootEngine({ store, broadcast, now = Date.now, newId = ()
       return candidates.length
     },
 
-    /** Loads every shoot that has not ended, so the ticker watches their timers (at start-up). */
+    /**
+     * Loads every shoot that has not ended, so the ticker watches their timers (at start-up, and
+     * again every few seconds with several app processes: live-watch.ts); one ended elsewhere is dropped.
+     */
     async loadLive(): Promise<number> {
       const rows = await store.live()
-      for (const r of rows) remember(r.id, r.state)
+      const ids = new Set(rows.map((r) => r.id))
+      for (const id of live.keys()) if (!ids.has(id)) live.delete(id)
+      // A state this process has just written is kept over an older one read before it was committed.
+      for (const r of rows) if ((live.get(r.id)?.seq ?? -1) <= r.state.seq) remember(r.id, r.state)
       return rows.length
     },
   }

@@ -43,6 +43,10 @@ export function createPresence() {
     open(): number[] {
       return [...shoots.keys()]
     },
+    /** Each connection on the shoot with its screen (the shared presence, presence-redis.ts, writes them out). */
+    entries(shootId: number): Array<[string, Screen]> {
+      return [...(shoots.get(shootId)?.entries() ?? [])].map(([id, s]) => [id, { ...s }])
+    },
     of(shootId: number): ShootPresence {
       return { screens: [...(shoots.get(shootId)?.values() ?? [])].map((s) => ({ ...s })) }
     },

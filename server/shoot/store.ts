@@ -90,14 +90,14 @@ export interface ShootStore {
   close(): Promise<void>
 }
 
-type Raw = {
+export type Raw = {
   id: number; studio_id: number; episode_id: number | null; title: string; mode: ShootMode; status: string
   seq: number; state: string; created_by: number | null
 }
 
-const COLUMNS = 'id, studio_id, episode_id, title, mode, status, seq, state, created_by'
+export const COLUMNS = 'id, studio_id, episode_id, title, mode, status, seq, state, created_by'
 
-function toRow(r: Raw): ShootRow {
+export function toRow(r: Raw): ShootRow {
   return {
     id: r.id, studioId: r.studio_id, episodeId: r.episode_id ?? null, title: r.title, mode: r.mode,
     status: r.status, seq: r.seq, state: JSON.parse(r.state) as ShootState, createdBy: r.created_by ?? null,
@@ -115,12 +115,12 @@ const SUMMARY_SQL = `SELECT s.id, s.studio_id, s.episode_id, s.title, s.mode, s.
      WHERE json_extract(m.value, '$.kind') IN ('pickup', 'good') AND json_extract(m.value, '$.deleted') IS NOT 1) AS picks
   FROM shoots s`
 
-type RawSummary = {
+export type RawSummary = {
   id: number; studio_id: number; episode_id: number | null; title: string; mode: ShootMode; status: string; created_at: string
   started: number | null; ended: number | null; clock: string | null; counts: string | null; picks: string | null
 }
 
-function toSummary(r: RawSummary): ShootSummaryRow {
+export function toSummary(r: RawSummary): ShootSummaryRow {
   return {
     id: r.id, studioId: r.studio_id, episodeId: r.episode_id ?? null, title: r.title, mode: r.mode, status: r.status,
     createdAt: new Date(r.created_at).toISOString(),

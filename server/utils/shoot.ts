@@ -3,21 +3,38 @@
 // socket plugin mounts it and the routes under server/api/shoots/ call its handlers.
 import type { H3Event } from 'h3'
 import { Server } from 'socket.io'
+import { createAdapter } from '@socket.io/redis-adapter'
 import type { ClientToServerEvents, ServerToClientEvents } from '../../shared/types/socket-events'
 import { DomainError } from '../../shared/utils/domain-error'
 import { shootServerNow } from '../shoot/clock'
 import { createShootHandlers, type ShootConnection } from '../shoot/handlers'
 import { createPresence } from '../shoot/presence'
+import { createSharedPresence } from '../shoot/presence-redis'
 import { createScriptCache } from '../shoot/script'
 import { openShootStore } from '../shoot/store'
+import { openPostgresShootStore } from '../shoot/store-postgres'
+import { isServerDatabase } from '../db/dialect'
 
 export const shootRoom = (shootId: number) => `shoot:${shootId}`
 
 function createLiveShoot() {
   const io = new Server<ClientToServerEvents, ServerToClientEvents>({ serveClient: false })
-  const store = openShootStore(getDatabaseHandle()!.path, () => useDb())
+  // The database the configuration names (server/db/dialect.ts): the SQLite file or a PostgreSQL server.
+  const address = getDatabaseHandle()!.path
+  const store = isServerDatabase(address) ? openPostgresShootStore(address, () => useDb()) : openShootStore(address, () => useDb())
   const script = createScriptCache()
-  const presence = createPresence()
+  // With Redis (NUXT_REDIS_URL), rooms and presence reach across app processes: a broadcast to a
+  // shoot's room goes to its screens on every process.
+  const redis = useRedis()
+  if (redis) io.adapter(createAdapter(redis, duplicateRedis()))
+  const presence = redis
+    ? createSharedPresence({
+        redis,
+        subscriber: duplicateRedis(),
+        // Screens of a process that stopped were taken off: this process's screens hear it.
+        changed: (shootId) => io.local.to(shootRoom(shootId)).emit('shoot:presence', { shootId, ...presence.of(shootId) }),
+      })
+    : createPresence()
   const handlers = createShootHandlers({
     store,
     presence,
@@ -50,7 +67,7 @@ function createLiveShoot() {
   const scriptsMayHaveChanged = () => {
     pending ??= setTimeout(() => void refreshScripts(), 150)
   }
-  return { io, store, script, handlers, scriptsMayHaveChanged }
+  return { io, store, script, presence, handlers, scriptsMayHaveChanged }
 }
 
 let live: ReturnType<typeof createLiveShoot> | undefined

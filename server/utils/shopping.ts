@@ -7,6 +7,7 @@ import type { User } from '#auth-utils'
 import { DomainError } from '../../shared/utils/domain-error'
 import { buildShoppingList, type ShoppingRecipe } from '../../shared/utils/shopping-list'
 import { SHOP_SECTION_LABELS } from '../../shared/utils/shop-sections'
+import { greatest } from '../db/dialect'
 
 /** A line key as the list makes them: lower-case letters, digits and hyphens. */
 export const LINE_KEY = /^[a-z0-9](?:[a-z0-9-]{0,78}[a-z0-9])?$/
@@ -79,8 +80,8 @@ export async function setShoppingCheck(episodeId: number, studioId: number, key:
   await db.query(
     `INSERT INTO shopping_checks (episode_id, line_key, ticked, ticked_by, ticked_by_name, at) VALUES (?, ?, ?, ?, ?, ?)
      ON CONFLICT (episode_id, line_key) DO UPDATE SET ticked = excluded.ticked, ticked_by = excluded.ticked_by,
-     ticked_by_name = excluded.ticked_by_name, at = MAX(excluded.at, shopping_checks.at + 1)`,
-    { replacements: [episodeId, key, ticked ? 1 : 0, user.id, user.name, Date.now()] },
+     ticked_by_name = excluded.ticked_by_name, at = ${greatest(db, 'excluded.at', 'shopping_checks.at + 1')}`,
+    { replacements: [episodeId, key, ticked, user.id, user.name, Date.now()] },
   )
   return shoppingView(episodeId, studioId)
 }

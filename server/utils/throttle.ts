@@ -7,11 +7,10 @@
 // A used-up limit is a 429 in the one error shape that says when to try again (Retry-After header).
 //
 // The counts live in this process's memory (RateLimiterMemory; its expiry timers are unref'd, so they
-// never keep a process alive). Several server processes behind one address would each count on
-// their own: DEVELOPERS.md, "Rate limits", shows the one change (`limiterFor`) that moves them to a
-// shared store.
+// never keep a process alive), or in Redis when NUXT_REDIS_URL is set (RateLimiterRedis), so several
+// app processes behind one address count together (`limiterFor`; DEVELOPERS.md, "Rate limits").
 import type { H3Event } from 'h3'
-import { RateLimiterMemory, RateLimiterRes, type RateLimiterAbstract } from 'rate-limiter-flexible'
+import { RateLimiterMemory, RateLimiterRedis, RateLimiterRes, type RateLimiterAbstract } from 'rate-limiter-flexible'
 import { DomainError } from '../../shared/utils/domain-error'
 
 export type LimitName = 'loginEmail' | 'loginAddress' | 'inviteAddress' | 'join' | 'resetEmail' | 'resetAddress' | 'signup'
@@ -45,19 +44,19 @@ function positive(value: unknown, fallback: number): number {
 const limiters = new Map<LimitName, RateLimiterAbstract>()
 
 /**
- * The limiter of one limit, made on first use from the runtime config. To share the counts between
- * processes, return e.g. `new RateLimiterRedis({ storeClient, keyPrefix: name, points, duration })`
- * here instead; every caller goes through this function.
+ * The limiter of one limit, made on first use from the runtime config: in Redis (shared by every app
+ * process, keys `hobline:limit:<name>:<key>`) when NUXT_REDIS_URL is set, else in memory. Every
+ * caller goes through this function.
  */
 function limiterFor(name: LimitName): RateLimiterAbstract {
   let limiter = limiters.get(name)
   if (!limiter) {
     const auth = useRuntimeConfig().auth as unknown as AuthLimits
-    limiter = new RateLimiterMemory({
-      keyPrefix: name,
-      points: positive(LIMITS[name].points(auth), 1),
-      duration: positive(auth.throttleWindowSeconds, 900),
-    })
+    const size = { points: positive(LIMITS[name].points(auth), 1), duration: positive(auth.throttleWindowSeconds, 900) }
+    const redis = useRedis()
+    const memory = new RateLimiterMemory({ keyPrefix: name, ...size })
+    // With Redis out of reach, each process counts in its own memory until it is back.
+    limiter = redis ? new RateLimiterRedis({ storeClient: redis, keyPrefix: `hobline:limit:${name}`, ...size, insuranceLimiter: memory }) : memory
     limiters.set(name, limiter)
   }
   return limiter

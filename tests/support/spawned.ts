@@ -1,13 +1,15 @@
 // A built server in a process of its own, for tests that start it in a way useBuiltApp does not:
 // without a setting, with a broken database, without a library, under a file-size limit or a faked
 // clock (`wrap`: a command the node process is started through, e.g. prlimit), killed with SIGKILL
-// and started again on the same file. Its log is kept; stop() waits for exit.
-import { spawn } from 'node:child_process'
+// and started again on the same file, or as one of several processes on one server database.
+// Its log is kept; stop() waits for exit.
+import { spawn, type ChildProcess } from 'node:child_process'
 import { resolve } from 'node:path'
 import { rootDir, serverPort, tempDatabasePath } from './app'
 
 export interface SpawnedApp {
   base: string
+  child: ChildProcess
   log: () => string
   exited: Promise<number | null>
   stop: () => Promise<void>
@@ -46,6 +48,7 @@ export async function spawnBuiltApp(env: Record<string, string | undefined>, opt
   const exited = new Promise<number | null>((r) => child.once('exit', (code) => r(code)))
   return {
     base,
+    child,
     log: () => log,
     exited,
     async stop() {
