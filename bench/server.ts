@@ -7,7 +7,7 @@ import { getRandomPort } from 'get-port-please'
 
 export const rootDir = resolve(import.meta.dirname, '..')
 
-export async function startBuiltApp(): Promise<{ url: string; databasePath: string; stop: () => Promise<void> }> {
+export async function startBuiltApp(): Promise<{ url: string; databasePath: string; pid: number; stop: () => Promise<void> }> {
   if (!existsSync(resolve(rootDir, '.output/server/index.mjs'))) {
     const build = spawnSync('npx', ['nuxt', 'build'], { cwd: rootDir, stdio: ['ignore', 'ignore', 'inherit'] })
     if (build.status !== 0) throw new Error('the app did not build')
@@ -37,6 +37,7 @@ export async function startBuiltApp(): Promise<{ url: string; databasePath: stri
   return {
     url,
     databasePath,
+    pid: child.pid!,
     stop: () => new Promise((done) => {
       process.off('exit', killOnExit)
       if (child.exitCode !== null || child.signalCode !== null) return done()
