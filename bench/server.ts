@@ -14,7 +14,7 @@ export async function startBuiltApp(): Promise<{ url: string; databasePath: stri
   }
   const databasePath = join(mkdtempSync(join(tmpdir(), 'hobline-bench-')), 'hobline.sqlite')
   const port = await getRandomPort('127.0.0.1')
-  const child: ChildProcess = spawn(process.execPath, [resolve(rootDir, '.output/server/index.mjs')], {
+  const child: ChildProcess = spawn(process.execPath, [...(process.env.HOBLINE_BENCH_NODE_ARGS?.split(' ').filter(Boolean) ?? []), resolve(rootDir, '.output/server/index.mjs')], {
     env: {
       ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATABASE_PATH: databasePath, NUXT_DATABASE_SEED: 'always', NUXT_PUBLIC_SITE_URL: `http://127.0.0.1:${port}`,
       NUXT_SESSION_PASSWORD: 'bench-session-password-of-at-least-32-characters', NUXT_PHOTOS_DIR: join(databasePath, '..', 'photos'),

@@ -1,6 +1,7 @@
 // The live shoot on a screen. Every socket listener is bound here, once (bind); components read the
-// state and call the actions. The server is authoritative: the store takes its state from each
-// `shoot:event` in sequence, asks for a snapshot when it sees a gap or (re)connects, and shows a
+// state and call the actions. The server is authoritative: the store applies each `shoot:event`'s
+// JSON Patch in sequence (shared/utils/shoot-wire.ts), asks for a snapshot when it sees a gap, a
+// patch that does not apply or (re)connects, and shows a
 // command's effect early only by applying the same reducer to a copy until the server answers.
 // Times: `offset` turns this device's clock into the server clock (RFC 5905 samples through
 // shared/utils/clock.ts); every countdown is drawn from deadline − (local now + offset).
@@ -12,6 +13,7 @@ import { clockFilterAdd, clockFilterBest, ntpSample, serverNow, type ClockSample
 import { shootCommandAllowed } from '~~/shared/utils/shoot-commands'
 import { shootCursorMoved, shootCursorRef, shootStepRefAt } from '~~/shared/utils/shoot'
 import { applyKnownShootCommand } from '~~/shared/utils/shoot-apply'
+import { applyShootMessage } from '~~/shared/utils/shoot-wire'
 import { refusal, type Refusal } from '~~/shared/utils/domain-error'
 import { keepLastSnapshot, readLastSnapshot } from '~/composables/last-snapshot'
 
@@ -197,11 +199,13 @@ export const useShootStore = defineStore('shoot', () => {
     if (message.shootId !== shootId.value || !snapshot.value) return // a join in flight brings it
     highestSeen = Math.max(highestSeen, message.seq)
     if (message.seq <= seq.value) return
-    if (message.seq !== seq.value + 1) {
+    // A state read back from storage may be another database's: the server's snapshot comes first.
+    const next = message.seq === seq.value + 1 && !fromStorage.value ? applyShootMessage(snapshot.value.state, message) : null
+    if (!next) {
       void resync()
       return
     }
-    snapshot.value = { ...snapshot.value, state: message.state, serverNow: message.serverNow }
+    snapshot.value = { ...snapshot.value, state: next, serverNow: message.serverNow }
     seq.value = message.seq
     heard()
     const { seq: s, type, by, events, serverNow: atServerMs } = message

@@ -4,6 +4,10 @@
 // process's one write queue (server/db/write-queue.ts), so a command never interleaves with
 // another or with a Sequelize transaction elsewhere. Plain Node: no Nitro, so tests open it on a
 // temporary file.
+// A command's statements are prepared once and kept (each new statement would cost the sqlite3
+// module a prepare and a finalize on its thread pool), and the last row read or committed of each
+// shoot is kept in memory: a read asks the database for the row's seq only and parses the whole
+// state again only when another writer (another process, a restore) has moved it on.
 import sqlite3 from 'sqlite3'
 import { BUSY_TIMEOUT_MS } from '../db/connection'
 import { queueWrite } from '../db/write-queue'
@@ -139,6 +143,9 @@ const TIMING_SQL = `SELECT s.id, json_extract(s.state, '$.status') AS status, js
 
 type RawTiming = { id: number; status: string; clock: string; visits: string | null; timers: string | null; ended: number | null; plan_steps: string | null }
 
+/** How many shoots' last rows the store keeps in memory: more than a studio runs at once. */
+const ROWS_KEPT = 200
+
 /** The timestamp format the rest of the database uses (Sequelize's for SQLite). */
 export function sqliteStamp(ms: number): string {
   return new Date(ms).toISOString().replace('T', ' ').replace('Z', ' +00:00')
@@ -174,18 +181,51 @@ export function openShootStore(path: string, ready: () => Promise<unknown> = asy
     return new Promise<T[]>((resolve, reject) => c.all(sql, params, (err, rows) => (err ? reject(err) : resolve(rows as T[]))))
   }
 
-  const read = async (shootId: number) => {
-    const r = await get<Raw>(`SELECT ${COLUMNS} FROM shoots WHERE id = ?`, [shootId])
-    return r ? toRow(r) : null
+  const statements = new Map<string, sqlite3.Statement>()
+  /** Runs a kept statement (all rows, so a SELECT always finishes and holds no read lock). */
+  const kept = async <T>(sql: string, params: unknown[] = []) => {
+    const c = await conn()
+    let statement = statements.get(sql)
+    if (!statement) statements.set(sql, statement = c.prepare(sql))
+    return new Promise<{ rows: T[]; lastID: number }>((resolve, reject) => {
+      if (/^\s*SELECT/i.test(sql)) statement.all(params, (err, rows) => (err ? reject(err) : resolve({ rows: rows as T[], lastID: 0 })))
+      else statement.run(params, function (this: sqlite3.RunResult, err) { return err ? reject(err) : resolve({ rows: [], lastID: this.lastID }) })
+    })
   }
+
+  /** The last row of each shoot read or committed on this connection (the most recent ones; an ended shoot's is not kept). */
+  const rows = new Map<number, ShootRow>()
+  const keep = (row: ShootRow) => {
+    rows.delete(row.id)
+    if (row.status === 'ended') return
+    rows.set(row.id, row)
+    if (rows.size > ROWS_KEPT) rows.delete(rows.keys().next().value!)
+  }
+  const read = async (shootId: number) => {
+    const known = rows.get(shootId)
+    if (known) {
+      const [now] = (await kept<{ seq: number }>('SELECT seq FROM shoots WHERE id = ?', [shootId])).rows
+      if (!now) return (rows.delete(shootId), null)
+      if (now.seq === known.seq) return known
+    }
+    const [r] = (await kept<Raw>(`SELECT ${COLUMNS} FROM shoots WHERE id = ?`, [shootId])).rows
+    if (!r) return null
+    const row = toRow(r)
+    keep(row)
+    return row
+  }
+  /** Rows written by the transaction under way: kept once it commits, forgotten if it rolls back. */
+  let written = new Map<number, ShootRow>()
   const tx: ShootTx = {
-    read,
+    read: async (shootId) => written.get(shootId) ?? read(shootId),
     async write(shootId, next, entry) {
       const stamp = sqliteStamp(entry.serverMs)
-      await run('UPDATE shoots SET state = ?, seq = ?, status = ?, mode = ?, updated_at = ? WHERE id = ?',
+      const before = written.get(shootId) ?? rows.get(shootId) ?? await read(shootId)
+      await kept('UPDATE shoots SET state = ?, seq = ?, status = ?, mode = ?, updated_at = ? WHERE id = ?',
         [JSON.stringify(next), next.seq, next.status, next.mode, stamp, shootId])
-      await run('INSERT INTO shoot_events (shoot_id, seq, type, command, actor, server_ms, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)',
+      await kept('INSERT INTO shoot_events (shoot_id, seq, type, command, actor, server_ms, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)',
         [shootId, next.seq, entry.type, JSON.stringify(entry.command), JSON.stringify(entry.actor), entry.serverMs, stamp])
+      if (before) written.set(shootId, { ...before, state: next, seq: next.seq, status: next.status, mode: next.mode })
     },
   }
   // Jobs on this one connection run one after another: a read between a transaction's BEGIN and
@@ -201,14 +241,19 @@ export function openShootStore(path: string, ready: () => Promise<unknown> = asy
 
   function transaction<T>(fn: (t: ShootTx) => Promise<T>): Promise<T> {
     return queueWrite(() => queued(async () => {
-      await run('BEGIN IMMEDIATE')
+      await kept('BEGIN IMMEDIATE')
+      written = new Map()
       try {
         const result = await fn(tx)
-        await run('COMMIT')
+        await kept('COMMIT')
+        for (const row of written.values()) keep(row)
         return result
       } catch (error) {
-        await run('ROLLBACK').catch(() => {})
+        await kept('ROLLBACK').catch(() => {})
+        for (const id of written.keys()) rows.delete(id)
         throw error
+      } finally {
+        written = new Map()
       }
     }))
   }
@@ -255,6 +300,9 @@ export function openShootStore(path: string, ready: () => Promise<unknown> = asy
     async close() {
       const c = await db
       db = undefined
+      await Promise.all([...statements.values()].map((st) => new Promise<void>((resolve) => st.finalize(() => resolve()))))
+      statements.clear()
+      rows.clear()
       await new Promise<void>((resolve) => (c ? c.close(() => resolve()) : resolve()))
     },
   }
