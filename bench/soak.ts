@@ -61,7 +61,7 @@ function commandAt(g: number, n: number): { by: number; command: Record<string, 
 interface Screen { socket: Socket; state: ShootState | null; seq: number }
 type Reply = { ok: true; seq: number } | { ok: false; error: { code: string; message: string } }
 
-const errors = { refused: 0, timedOut: 0, disconnected: 0, missing: 0, gaps: 0, diverged: 0 }
+const errors = { refused: 0, timedOut: 0, disconnected: 0, missing: 0, gaps: 0, diverged: 0, unsent: 0 }
 const refusals = new Map<string, number>()
 
 async function main() {
@@ -140,7 +140,7 @@ async function main() {
   const ownCpu = process.cpuUsage()
   const started = performance.now()
   let lastReport = started
-  const sent = await paced(shape, shape.seconds, async (g, n) => {
+  const { sent, planned } = await paced(shape, shape.seconds, async (g, n) => {
     const { by, command } = commandAt(g, n)
     await send(g, by, command, true)
     if (performance.now() - lastReport > 15_000) {
@@ -149,6 +149,7 @@ async function main() {
     }
   })
   const soakSeconds = (performance.now() - started) / 1000
+  errors.unsent = planned - sent
   await new Promise((r) => setTimeout(r, 1000)) // the last broadcasts land
   const soakAcknowledged = acknowledged - starts
   const soakUsage = usage.stop()

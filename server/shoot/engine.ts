@@ -74,19 +74,20 @@ export function createShootEngine({ store, broadcast, now = Date.now, newId = ()
 
     /** Applies one command from `actor` (a member or device already let into the shoot). */
     async apply(shootId: number, command: unknown, actor: ShootActor): Promise<CommandOutcome> {
-      let change: { message: ShootEventMessage; state: ShootState } | null = null
+      let sent: { message: ShootEventMessage; state: ShootState } | null = null
       const outcome = await store.transaction(async (tx): Promise<CommandOutcome> => {
         const state = stateOf(await tx.read(shootId), shootId)
         const at = now()
         const result = applyShootCommand(state, command, { nowServerMs: at, actor, newId })
         if (!result.ok) return { ok: false, error: result.error }
         const type = (command as { type: string }).type
-        await tx.write(shootId, result.state, { type, command, actor, serverMs: at })
-        const message = { shootId, seq: result.state.seq, type, by: actor, events: result.events, ...patchOf(state, result.state), serverNow: at }
-        change = { message, state: result.state }
+        const change = patchOf(state, result.state)
+        await tx.write(shootId, result.state, { type, command, actor, serverMs: at, patch: change.patch })
+        const message = { shootId, seq: result.state.seq, type, by: actor, events: result.events, ...change, serverNow: at }
+        sent = { message, state: result.state }
         return { ok: true, seq: result.state.seq }
       })
-      send(change)
+      send(sent)
       return outcome
     },
 
@@ -103,9 +104,10 @@ export function createShootEngine({ store, broadcast, now = Date.now, newId = ()
           const t = now()
           const { state: next, due } = markDueTimers(row.state, t)
           if (!due.length) return
-          await tx.write(shootId, next, { type: 'timer.due', command: { type: 'timer.due', timerIds: due.map((d) => d.id) }, actor: null, serverMs: t })
+          const patch = patchOf(row.state, next)
+          await tx.write(shootId, next, { type: 'timer.due', command: { type: 'timer.due', timerIds: due.map((d) => d.id) }, actor: null, serverMs: t, patch: patch.patch })
           const message = {
-            shootId, seq: next.seq, type: 'timer.due', by: null, serverNow: t, ...patchOf(row.state, next),
+            shootId, seq: next.seq, type: 'timer.due', by: null, serverNow: t, ...patch,
             events: due.map((d) => ({ type: 'timer.due' as const, timerId: d.id, label: d.label, slot: d.slot, sound: d.sound, dueAtServerMs: d.dueAtServerMs ?? t })),
           }
           change = { message, state: next }
