@@ -155,10 +155,15 @@ async function main() {
   const soakUsage = usage.stop()
   const ownCpuSeconds = (process.cpuUsage(ownCpu).user + process.cpuUsage(ownCpu).system) / 1e6
   const latencies: number[] = []
+  /** p99 by 10 s of the run: a tail that is one moment (a pause, a checkpoint) or all along. */
+  const windows: number[][] = []
   for (const { key, sent: at, by } of timed) {
     const others = [...(arrivals.get(key) ?? [])].filter((_, i) => i !== by)
     if (others.length !== shape.screens - 1 || others.some(Number.isNaN)) errors.missing++
-    else latencies.push(Math.max(...others) - at)
+    else {
+      latencies.push(Math.max(...others) - at)
+      ;(windows[Math.floor((at - started) / 10_000)] ??= []).push(Math.max(...others) - at)
+    }
   }
   arrivals.clear()
   log(`soak done: ${sent} sent, ${soakAcknowledged} answered in ${soakSeconds.toFixed(1)} s; flat out for ${burstSeconds} s`)
@@ -213,6 +218,7 @@ async function main() {
   console.table(rows)
   console.log(`broadcast size ≈ ${bytes} bytes; ${sent} commands sent in ${soakSeconds.toFixed(1)} s (${(soakAcknowledged / soakSeconds).toFixed(1)}/s answered); `
     + `${latencies.length} fan-outs timed; the soak's own clients used ${(ownCpuSeconds / soakSeconds).toFixed(2)} of a core`)
+  console.log(`fan-out p99 by 10 s: ${windows.map((w) => percentile(w, 99).toFixed(0)).join(' ')} ms`)
   if (refusals.size) console.log('refusals:', Object.fromEntries(refusals))
   const pass = rows.every((r) => r.result !== 'FAIL')
   console.log(pass ? 'PASS' : 'FAIL')
