@@ -13,7 +13,6 @@ import { clockFilterAdd, clockFilterBest, ntpSample, serverNow, type ClockSample
 import { shootCommandAllowed } from '~~/shared/utils/shoot-commands'
 import { shootCursorMoved, shootCursorRef, shootStepRefAt } from '~~/shared/utils/shoot'
 import { applyKnownShootCommand } from '~~/shared/utils/shoot-apply'
-import { applyShootMessage } from '~~/shared/utils/shoot-wire'
 import { refusal, type Refusal } from '~~/shared/utils/domain-error'
 import { keepLastSnapshot, readLastSnapshot } from '~/composables/last-snapshot'
 
@@ -64,6 +63,14 @@ function withIds(cmd: ShootCommand): ShootCommand {
   if (cmd.type === 'marker.add' && !cmd.markerId) return { ...cmd, markerId: newItemId() }
   if (cmd.type === 'camera.set' && !cmd.cameraId) return { ...cmd, cameraId: newItemId() }
   return cmd
+}
+
+/** The patch apply (shared/utils/shoot-wire.ts) loads with the first event, outside the prompter's
+ * first bundle; until it has loaded (or when it cannot), an event brings a snapshot instead. */
+let applyMessage: typeof import('~~/shared/utils/shoot-wire').applyShootMessage | null = null
+let loadingWire: Promise<unknown> | null = null
+function loadWire() {
+  loadingWire ??= import('~~/shared/utils/shoot-wire').then((m) => (applyMessage = m.applyShootMessage), () => (loadingWire = null))
 }
 
 export const useShootStore = defineStore('shoot', () => {
@@ -200,7 +207,8 @@ export const useShootStore = defineStore('shoot', () => {
     highestSeen = Math.max(highestSeen, message.seq)
     if (message.seq <= seq.value) return
     // A state read back from storage may be another database's: the server's snapshot comes first.
-    const next = message.seq === seq.value + 1 && !fromStorage.value ? applyShootMessage(snapshot.value.state, message) : null
+    if (!applyMessage) loadWire()
+    const next = applyMessage && !fromStorage.value ? applyMessage(snapshot.value.state, message) : null
     if (!next) {
       void resync()
       return

@@ -12,46 +12,37 @@ export type ShootPatchOperation =
   | { op: 'add' | 'replace'; path: string; value: unknown }
   | { op: 'remove'; path: string }
 
-type Node = Record<string, unknown> | unknown[]
-
-const isIndex = (token: string) => /^(0|[1-9]\d*)$/.test(token)
+/** Throws: the operation cannot apply (RFC 6902 §5: the whole patch fails). */
+const refuse = (): never => {
+  throw new Error('patch')
+}
 
 /** The value at `keys` under `node` with `op` done there, copying only the objects on the way (the old state is left as it was). */
 function change(node: unknown, keys: string[], op: ShootPatchOperation): unknown {
-  if (!node || typeof node !== 'object') throw new Error('no such path')
+  if (!node || typeof node !== 'object') refuse()
   const [key, ...rest] = keys as [string, ...string[]]
-  const copy: Node = Array.isArray(node) ? node.slice() : { ...(node as Record<string, unknown>) }
-  if (Array.isArray(copy)) {
-    const at = key === '-' && op.op === 'add' && !rest.length ? copy.length : isIndex(key) ? Number(key) : -1
-    const limit = op.op === 'add' && !rest.length ? copy.length : copy.length - 1
-    if (at < 0 || at > limit) throw new Error('no such index')
+  const add = op.op === 'add' && !rest.length
+  if (Array.isArray(node)) {
+    const copy = node.slice()
+    // An index (no leading zero), or "-" past the end (RFC 6901 §4, RFC 6902 §4.1), only where an add may insert.
+    const at = key === '-' ? copy.length : /^(0|[1-9]\d*)$/.test(key) ? Number(key) : -1
+    if (at < 0 || at > copy.length - (add ? 0 : 1)) refuse()
     if (rest.length) copy[at] = change(copy[at], rest, op)
-    else if (op.op === 'add') copy.splice(at, 0, op.value)
-    else if (op.op === 'remove') copy.splice(at, 1)
-    else copy[at] = op.value
+    else copy.splice(at, add ? 0 : 1, ...(op.op === 'remove' ? [] : [op.value]))
     return copy
   }
-  if (key === '__proto__') throw new Error('not a member of the state')
-  const has = Object.prototype.hasOwnProperty.call(copy, key)
-  if (!has && (rest.length || op.op !== 'add')) throw new Error('no such member')
-  if (rest.length) copy[key] = change(copy[key], rest, op)
-  else if (op.op !== 'remove') copy[key] = op.value
-  else return Object.fromEntries(Object.entries(copy).filter(([k]) => k !== key))
-  return copy
+  if (key === '__proto__' || (!add && !Object.prototype.hasOwnProperty.call(node, key))) refuse()
+  const { [key]: old, ...others } = node as Record<string, unknown>
+  if (op.op === 'remove' && !rest.length) return others
+  return { ...(node as Record<string, unknown>), [key]: rest.length ? change(old, rest, op) : (op as { value: unknown }).value }
 }
 
 /** `state` with `patch` applied, a new object sharing what did not change; throws on an operation it cannot apply. */
 export function applyShootPatch<T>(state: T, patch: readonly ShootPatchOperation[]): T {
   let next: unknown = state
   for (const op of patch) {
-    if (op.op !== 'add' && op.op !== 'remove' && op.op !== 'replace') throw new Error('unknown operation')
-    if (op.path === '') {
-      if (op.op === 'remove') throw new Error('cannot remove the whole state')
-      next = op.value
-      continue
-    }
-    if (!op.path.startsWith('/')) throw new Error('not a JSON Pointer')
-    next = change(next, op.path.slice(1).split('/').map((t) => t.replace(/~1/g, '/').replace(/~0/g, '~')), op)
+    if (!['add', 'remove', 'replace'].includes(op.op) || (op.path && op.path[0] !== '/') || (!op.path && op.op === 'remove')) refuse()
+    next = op.path ? change(next, op.path.slice(1).split('/').map((t) => t.replace(/~1/g, '/').replace(/~0/g, '~')), op) : (op as { value: unknown }).value
   }
   return next as T
 }
