@@ -193,6 +193,7 @@ async function main() {
   const logged = (await get<{ n: number }>('SELECT COUNT(*) AS n FROM shoot_events WHERE shoot_id IN (SELECT value FROM json_each(?)) AND type != ?', [list, 'timer.due'])).n
   const behind = (await get<{ n: number }>(`SELECT COUNT(*) AS n FROM shoots s WHERE s.id IN (SELECT value FROM json_each(?))
     AND (s.seq != (SELECT MAX(seq) FROM shoot_events e WHERE e.shoot_id = s.id) OR json_extract(s.state, '$.seq') != s.seq)`, [list])).n
+  const integrity = (await get<{ integrity_check: string }>('PRAGMA integrity_check', [])).integrity_check
   db.close()
 
   log(`baselines: bare socket.io for ${Math.min(30, shape.seconds)} s, bare SQLite inserts for 5 s`)
@@ -204,13 +205,14 @@ async function main() {
   const bareP50 = percentile(bare.latencies, 50), bareP99 = percentile(bare.latencies, 99)
   const persistedRate = soakAcknowledged / soakSeconds
   const errorCount = Object.values(errors).reduce((a, b) => a + b, 0)
-  const everyPersisted = logged === acknowledged && behind === 0
+  const everyPersisted = logged === acknowledged && behind === 0 && integrity === 'ok'
   const rows = [
     { figure: 'fan-out p50 (command sent → every other screen of its shoot)', hobline: `${p50.toFixed(2)} ms`, baseline: `${bareP50.toFixed(2)} ms`, ratio: `${(p50 / bareP50).toFixed(2)}×`, bound: '—', result: '' },
     { figure: 'fan-out p99', hobline: `${p99.toFixed(2)} ms`, baseline: `${bareP99.toFixed(2)} ms`, ratio: `${(p99 / bareP99).toFixed(2)}×`, bound: `≤ ${BOUNDS.p99Ms} ms`, result: p99 <= BOUNDS.p99Ms ? 'pass' : 'FAIL' },
     { figure: 'commands persisted a second (soak, offered rate)', hobline: persistedRate.toFixed(1), baseline: `${bareRate.toFixed(0)} inserts/s`, ratio: `${(persistedRate / bareRate).toFixed(3)}×`, bound: `${shape.rate} offered`, result: '' },
     { figure: 'commands persisted a second (flat out, markers)', hobline: burstRate.toFixed(1), baseline: `${bareRate.toFixed(0)} inserts/s`, ratio: `${(burstRate / bareRate).toFixed(3)}×`, bound: '—', result: '' },
-    { figure: 'every acknowledged command persisted', hobline: `${logged} logged / ${acknowledged} acknowledged, ${behind} shoots behind`, baseline: '—', ratio: '—', bound: 'equal, 0 behind', result: everyPersisted ? 'pass' : 'FAIL' },
+    { figure: 'every acknowledged command persisted', hobline: `${logged} logged / ${acknowledged} acknowledged, ${behind} shoots behind, integrity ${integrity}`, baseline: '—', ratio: '—',
+      bound: 'equal, 0 behind, ok', result: everyPersisted ? 'pass' : 'FAIL' },
     { figure: 'server RSS, peak', hobline: `${soakUsage.peakRssMb.toFixed(1)} MB`, baseline: '—', ratio: '—', bound: `≤ ${BOUNDS.rssMb} MB`, result: soakUsage.peakRssMb <= BOUNDS.rssMb ? 'pass' : 'FAIL' },
     { figure: 'server CPU, mean / peak (1 = one core)', hobline: `${soakUsage.meanCpu.toFixed(2)} / ${soakUsage.peakCpu.toFixed(2)}`, baseline: '—', ratio: '—', bound: '—', result: '' },
     { figure: 'errors', hobline: JSON.stringify(errors), baseline: `bare missing ${bare.missing}`, ratio: '—', bound: '0', result: errorCount === 0 ? 'pass' : 'FAIL' },
@@ -220,6 +222,7 @@ async function main() {
     + `${latencies.length} fan-outs timed; the soak's own clients used ${(ownCpuSeconds / soakSeconds).toFixed(2)} of a core`)
   console.log(`fan-out p99 by 10 s: ${windows.map((w) => percentile(w, 99).toFixed(0)).join(' ')} ms`)
   if (refusals.size) console.log('refusals:', Object.fromEntries(refusals))
+  console.log(`database: ${app.databasePath}`)
   const pass = rows.every((r) => r.result !== 'FAIL')
   console.log(pass ? 'PASS' : 'FAIL')
   process.exit(pass ? 0 : 1)
