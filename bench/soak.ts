@@ -4,6 +4,7 @@
 // loop measured in the same run. Prints each figure with its ratio to its baseline and PASS/FAIL
 // against the bounds; exits 1 on FAIL. Options: --quick (20 s), --seconds N, --shoots N,
 // --screens N, --rate N, --burst N (or HOBLINE_SOAK_SECONDS, _SHOOTS, _SCREENS, _RATE, _BURST).
+import { monitorEventLoopDelay } from 'node:perf_hooks'
 import { isDeepStrictEqual, parseArgs } from 'node:util'
 import type { Socket } from 'socket.io-client'
 import sqlite3 from 'sqlite3'
@@ -138,6 +139,9 @@ async function main() {
 
   const usage = sampleProcess(app.pid)
   const ownCpu = process.cpuUsage()
+  // The soak's own event loop: a late callback here adds to the fan-out it times.
+  const ownDelay = monitorEventLoopDelay({ resolution: 10 })
+  ownDelay.enable()
   const started = performance.now()
   let lastReport = started
   const { sent, planned } = await paced(shape, shape.seconds, async (g, n) => {
@@ -153,6 +157,7 @@ async function main() {
   await new Promise((r) => setTimeout(r, 1000)) // the last broadcasts land
   const soakAcknowledged = acknowledged - starts
   const soakUsage = usage.stop()
+  ownDelay.disable()
   const ownCpuSeconds = (process.cpuUsage(ownCpu).user + process.cpuUsage(ownCpu).system) / 1e6
   const latencies: number[] = []
   /** p99 by 10 s of the run: a tail that is one moment (a pause, a checkpoint) or all along. */
@@ -219,7 +224,8 @@ async function main() {
   ]
   console.table(rows)
   console.log(`broadcast size ≈ ${bytes} bytes; ${sent} commands sent in ${soakSeconds.toFixed(1)} s (${(soakAcknowledged / soakSeconds).toFixed(1)}/s answered); `
-    + `${latencies.length} fan-outs timed; the soak's own clients used ${(ownCpuSeconds / soakSeconds).toFixed(2)} of a core`)
+    + `${latencies.length} fan-outs timed; the soak's own clients used ${(ownCpuSeconds / soakSeconds).toFixed(2)} of a core, `
+    + `their event loop's delay p99 ${(ownDelay.percentile(99) / 1e6).toFixed(1)} ms, max ${(ownDelay.max / 1e6).toFixed(1)} ms`)
   console.log(`fan-out p99 by 10 s: ${windows.map((w) => percentile(w, 99).toFixed(0)).join(' ')} ms`)
   if (refusals.size) console.log('refusals:', Object.fromEntries(refusals))
   console.log(`database: ${app.databasePath}`)
