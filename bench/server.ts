@@ -7,14 +7,14 @@ import { getRandomPort } from 'get-port-please'
 
 export const rootDir = resolve(import.meta.dirname, '..')
 
-export async function startBuiltApp(): Promise<{ url: string; databasePath: string; stop: () => Promise<void> }> {
+export async function startBuiltApp(): Promise<{ url: string; databasePath: string; pid: number; stop: () => Promise<void> }> {
   if (!existsSync(resolve(rootDir, '.output/server/index.mjs'))) {
     const build = spawnSync('npx', ['nuxt', 'build'], { cwd: rootDir, stdio: ['ignore', 'ignore', 'inherit'] })
     if (build.status !== 0) throw new Error('the app did not build')
   }
   const databasePath = join(mkdtempSync(join(tmpdir(), 'hobline-bench-')), 'hobline.sqlite')
   const port = await getRandomPort('127.0.0.1')
-  const child: ChildProcess = spawn(process.execPath, [resolve(rootDir, '.output/server/index.mjs')], {
+  const child: ChildProcess = spawn(process.execPath, [...(process.env.HOBLINE_BENCH_NODE_ARGS?.split(' ').filter(Boolean) ?? []), resolve(rootDir, '.output/server/index.mjs')], {
     env: {
       ...process.env, PORT: String(port), HOST: '127.0.0.1', NUXT_DATABASE_PATH: databasePath, NUXT_DATABASE_SEED: 'always', NUXT_PUBLIC_SITE_URL: `http://127.0.0.1:${port}`,
       NUXT_SESSION_PASSWORD: 'bench-session-password-of-at-least-32-characters', NUXT_PHOTOS_DIR: join(databasePath, '..', 'photos'),
@@ -37,6 +37,7 @@ export async function startBuiltApp(): Promise<{ url: string; databasePath: stri
   return {
     url,
     databasePath,
+    pid: child.pid!,
     stop: () => new Promise((done) => {
       process.off('exit', killOnExit)
       if (child.exitCode !== null || child.signalCode !== null) return done()

@@ -1,6 +1,7 @@
 // The live shoot on a screen. Every socket listener is bound here, once (bind); components read the
-// state and call the actions. The server is authoritative: the store takes its state from each
-// `shoot:event` in sequence, asks for a snapshot when it sees a gap or (re)connects, and shows a
+// state and call the actions. The server is authoritative: the store applies each `shoot:event`'s
+// JSON Patch in sequence (shared/utils/shoot-wire.ts), asks for a snapshot when it sees a gap, a
+// patch that does not apply or (re)connects, and shows a
 // command's effect early only by applying the same reducer to a copy until the server answers.
 // Times: `offset` turns this device's clock into the server clock (RFC 5905 samples through
 // shared/utils/clock.ts); every countdown is drawn from deadline − (local now + offset).
@@ -62,6 +63,14 @@ function withIds(cmd: ShootCommand): ShootCommand {
   if (cmd.type === 'marker.add' && !cmd.markerId) return { ...cmd, markerId: newItemId() }
   if (cmd.type === 'camera.set' && !cmd.cameraId) return { ...cmd, cameraId: newItemId() }
   return cmd
+}
+
+/** The patch apply (shared/utils/shoot-wire.ts) loads with the first event, outside the prompter's
+ * first bundle; until it has loaded (or when it cannot), an event brings a snapshot instead. */
+let applyMessage: typeof import('~~/shared/utils/shoot-wire').applyShootMessage | null = null
+let loadingWire: Promise<unknown> | null = null
+function loadWire() {
+  loadingWire ??= import('~~/shared/utils/shoot-wire').then((m) => (applyMessage = m.applyShootMessage), () => (loadingWire = null))
 }
 
 export const useShootStore = defineStore('shoot', () => {
@@ -197,11 +206,14 @@ export const useShootStore = defineStore('shoot', () => {
     if (message.shootId !== shootId.value || !snapshot.value) return // a join in flight brings it
     highestSeen = Math.max(highestSeen, message.seq)
     if (message.seq <= seq.value) return
-    if (message.seq !== seq.value + 1) {
+    // A state read back from storage may be another database's: the server's snapshot comes first.
+    if (!applyMessage) loadWire()
+    const next = applyMessage && !fromStorage.value ? applyMessage(snapshot.value.state, message) : null
+    if (!next) {
       void resync()
       return
     }
-    snapshot.value = { ...snapshot.value, state: message.state, serverNow: message.serverNow }
+    snapshot.value = { ...snapshot.value, state: next, serverNow: message.serverNow }
     seq.value = message.seq
     heard()
     const { seq: s, type, by, events, serverNow: atServerMs } = message

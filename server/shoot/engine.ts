@@ -1,9 +1,11 @@
 // The live shoot's engine: one command is authorised (the role table in shoot-commands.ts, through
 // applyShootCommand), reduced, persisted with its sequence number in one transaction, and
-// broadcast to the shoot's room. The latest state of each shoot that has not ended is kept in
+// broadcast to the shoot's room as a JSON Patch (RFC 6902, fast-json-patch's compare) from the
+// state before to the state after, with both sequence numbers (shared/utils/shoot-wire.ts). The latest state of each shoot that has not ended is kept in
 // memory for the ticker; the database is what counts (a restart reloads it, and timers that fell
 // due while the server was down fire at once).
 import { randomUUID } from 'node:crypto'
+import jsonPatch from 'fast-json-patch'
 import type { ShootActor, ShootMode, ShootPlan, ShootSegment, ShootState } from '../../shared/types/shoot'
 import type { ShootEventMessage } from '../../shared/types/socket-events'
 import { DomainError, type DomainErrorBody } from '../../shared/utils/domain-error'
@@ -41,11 +43,13 @@ export function createShootEngine({ store, broadcast, now = Date.now, newId = ()
     if (state.status === 'ended') live.delete(shootId)
     else live.set(shootId, state)
   }
-  const send = (message: ShootEventMessage | null) => {
-    if (!message) return
-    remember(message.shootId, message.state)
-    broadcast(message.shootId, message)
+  const send = (change: { message: ShootEventMessage; state: ShootState } | null) => {
+    if (!change) return
+    remember(change.message.shootId, change.state)
+    broadcast(change.message.shootId, change.message)
   }
+  /** The change from `before` to `after` as the screens get it. */
+  const patchOf = (before: ShootState, after: ShootState) => ({ baseSeq: before.seq, patch: jsonPatch.compare(before, after) as ShootEventMessage['patch'] })
   const stateOf = (row: ShootRow | null, shootId: number): ShootState => {
     if (!row) throw new DomainError('not-found', 'There is no such shoot.')
     remember(shootId, row.state)
@@ -70,18 +74,20 @@ export function createShootEngine({ store, broadcast, now = Date.now, newId = ()
 
     /** Applies one command from `actor` (a member or device already let into the shoot). */
     async apply(shootId: number, command: unknown, actor: ShootActor): Promise<CommandOutcome> {
-      let message: ShootEventMessage | null = null
+      let sent: { message: ShootEventMessage; state: ShootState } | null = null
       const outcome = await store.transaction(async (tx): Promise<CommandOutcome> => {
         const state = stateOf(await tx.read(shootId), shootId)
         const at = now()
         const result = applyShootCommand(state, command, { nowServerMs: at, actor, newId })
         if (!result.ok) return { ok: false, error: result.error }
         const type = (command as { type: string }).type
-        await tx.write(shootId, result.state, { type, command, actor, serverMs: at })
-        message = { shootId, seq: result.state.seq, type, by: actor, events: result.events, state: result.state, serverNow: at }
+        const change = patchOf(state, result.state)
+        await tx.write(shootId, result.state, { type, command, actor, serverMs: at, patch: change.patch })
+        const message = { shootId, seq: result.state.seq, type, by: actor, events: result.events, ...change, serverNow: at }
+        sent = { message, state: result.state }
         return { ok: true, seq: result.state.seq }
       })
-      send(message)
+      send(sent)
       return outcome
     },
 
@@ -91,20 +97,22 @@ export function createShootEngine({ store, broadcast, now = Date.now, newId = ()
       const candidates = [...live.entries()]
         .filter(([, s]) => s.timers.some((t) => t.state === 'running' && t.deadlineServerMs !== null && t.deadlineServerMs <= at))
       for (const [shootId] of candidates) {
-        let message: ShootEventMessage | null = null
+        let change: { message: ShootEventMessage; state: ShootState } | null = null
         await store.transaction(async (tx) => {
           const row = await tx.read(shootId)
           if (!row) return live.delete(shootId)
           const t = now()
           const { state: next, due } = markDueTimers(row.state, t)
           if (!due.length) return
-          await tx.write(shootId, next, { type: 'timer.due', command: { type: 'timer.due', timerIds: due.map((d) => d.id) }, actor: null, serverMs: t })
-          message = {
-            shootId, seq: next.seq, type: 'timer.due', by: null, serverNow: t, state: next,
+          const patch = patchOf(row.state, next)
+          await tx.write(shootId, next, { type: 'timer.due', command: { type: 'timer.due', timerIds: due.map((d) => d.id) }, actor: null, serverMs: t, patch: patch.patch })
+          const message = {
+            shootId, seq: next.seq, type: 'timer.due', by: null, serverNow: t, ...patch,
             events: due.map((d) => ({ type: 'timer.due' as const, timerId: d.id, label: d.label, slot: d.slot, sound: d.sound, dueAtServerMs: d.dueAtServerMs ?? t })),
           }
+          change = { message, state: next }
         })
-        send(message)
+        send(change)
       }
       return candidates.length
     },

@@ -1,5 +1,6 @@
 // The socket.io event map, shared by the server plugin and the client store.
 import type { ShootEvent, ShootState } from './shoot'
+import type { ShootPatchOperation } from '../utils/shoot-wire'
 import type { Refusal } from '../utils/domain-error'
 import type { StepTextSegment } from '../utils/step-text'
 import type { RenderedScript } from '../utils/live-fields'
@@ -108,7 +109,7 @@ export interface ShootPresence {
   screens: Array<{ role: string; audibleWhileRolling: boolean }>
 }
 
-/** Broadcast to a shoot's room for every accepted command and every timer that falls due. */
+/** Broadcast to a shoot's room for every accepted command and every timer that falls due: the change, not the whole state. */
 export interface ShootEventMessage {
   shootId: number
   seq: number
@@ -116,7 +117,10 @@ export interface ShootEventMessage {
   type: string
   by: { role: string; id: string; name?: string } | null
   events: ShootEvent[]
-  state: ShootState
+  /** The sequence number of the state `patch` applies to (seq − 1): a screen holding another asks for a snapshot. */
+  baseSeq: number
+  /** JSON Patch (RFC 6902) from the state at baseSeq to the state at seq (shared/utils/shoot-wire.ts). */
+  patch: ShootPatchOperation[]
   serverNow: number
   /** Wall-clock ms (sub-millisecond) when the server handed the message to socket.io. */
   sentAt?: number

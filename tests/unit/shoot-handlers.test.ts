@@ -14,7 +14,9 @@ import { createPresence } from '../../server/shoot/presence'
 import { createScriptCache, type ShootScript } from '../../server/shoot/script'
 import { openShootStore, type ShootStore } from '../../server/shoot/store'
 import type { ShootEventMessage, ShootPresence, ShootSnapshot } from '../../shared/types/socket-events'
+import type { ShootState } from '../../shared/types/shoot'
 import { DomainError } from '../../shared/utils/domain-error'
+import { applyShootMessage } from '../../shared/utils/shoot-wire'
 import type { StudioRole } from '../../shared/utils/roles'
 
 const STUDIO = 1
@@ -36,6 +38,8 @@ const authorize = async (s: { user?: { id: number; name: string; role: StudioRol
 let sequelize: Sequelize
 let store: ShootStore
 let shoot = 0
+/** The host screen's state: the join's snapshot, then the patches broadcast. */
+let held: ShootState
 let clock = Date.UTC(2026, 11, 2, 9, 0, 0)
 const events: ShootEventMessage[] = []
 const presences: Array<{ shootId: number } & ShootPresence> = []
@@ -86,6 +90,7 @@ describe('shoot handlers', () => {
     expect(snapshot.shoot).toEqual({ id: shoot, studioId: STUDIO, episodeId: null, title: 'Thursday rehearsal', mode: 'rehearsal' })
     expect(snapshot.state.runOrder).toEqual(RUN_ORDER)
     expect(snapshot.state.seq).toBe(0)
+    held = snapshot.state
     expect(snapshot.you).toEqual({ kind: 'member', role: 'host', actorId: 'user:1' })
     expect(snapshot.serverNow).toBe(clock)
     expect(host.rooms.joined.has(shoot)).toBe(true)
@@ -101,7 +106,10 @@ describe('shoot handlers', () => {
     clock += 5_000
     await expect(handlers.command(host, { shootId: shoot, type: 'step.next' })).resolves.toEqual({ ok: true, seq: 2 })
     expect(events.slice(before).map((e) => [e.seq, e.type, e.by?.role])).toEqual([[1, 'shoot.start', 'producer'], [2, 'step.next', 'host']])
-    expect(events.at(-1)!.state.cursor).toEqual({ segment: 0, step: 1 })
+    // The screen follows from the patches broadcast (RFC 6902, shared/utils/shoot-wire.ts) alone.
+    held = events.slice(before).reduce<ShootState>((s, m) => applyShootMessage(s, m)!, held)
+    expect(held.cursor).toEqual({ segment: 0, step: 1 })
+    expect(held).toEqual((await store.read(shoot))!.state)
     const log = await store.events(shoot)
     expect(log.map((e) => [e.seq, e.type])).toEqual([[1, 'shoot.start'], [2, 'step.next']])
     expect(log[1]!.command).toEqual({ type: 'step.next' })
@@ -134,13 +142,16 @@ describe('shoot handlers', () => {
 
   it('a screen that missed events (a gap in sequence numbers) catches up from one snapshot', async () => {
     const seen = events.at(-1)!.seq
+    const behind = (await store.read(shoot))!.state
     await handlers.command(host, { shootId: shoot, type: 'step.next' })
     await handlers.command(host, { shootId: shoot, type: 'step.previous' })
     // This screen heard only the last one: seq jumped by two, so it asks for the whole picture.
     expect(events.at(-1)!.seq).toBe(seen + 2)
     const reply = (await handlers.snapshot(camera, { shootId: shoot })) as { ok: true } & ShootSnapshot
     expect(reply.state.seq).toBe(seen + 2)
-    expect(reply.state).toEqual(events.at(-1)!.state)
+    // The last patch does not apply to the state it heard before the gap; both in order give the snapshot.
+    expect(applyShootMessage(behind, events.at(-1)!)).toBeNull()
+    expect(events.slice(-2).reduce<ShootState>((s, m) => applyShootMessage(s, m)!, behind)).toEqual(reply.state)
     expect(reply.state).toEqual((await store.read(shoot))!.state)
   })
 

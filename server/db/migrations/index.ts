@@ -18,6 +18,7 @@ import m0014 from './0014-shopping-checks'
 import m0015 from './0015-call-sheets'
 import m0017 from './0017-range-adoptions'
 import m0018 from './0018-publish-kit'
+import m0019 from './0019-event-patches'
 
 export interface MigrationContext {
   queryInterface: QueryInterface
@@ -32,4 +33,6 @@ export interface Migration {
   down: (ctx: MigrationContext) => Promise<void>
 }
 
-export const migrations: Migration[] = [m0001, m0002, m0003, m0004, m0005, m0006, m0007, m0008, m0009, m0010, m0011, m0012, m0013, m0014, m0015, m0017, m0018]
+export const migrations: Migration[] = [
+  m0001, m0002, m0003, m0004, m0005, m0006, m0007, m0008, m0009, m0010, m0011, m0012, m0013, m0014, m0015, m0017, m0018, m0019,
+]
