@@ -1,6 +1,7 @@
 import { resolveDatabasePath } from '../db/connection'
-import { databaseAddress, databaseLabel } from '../db/dialect'
+import { databaseAddress, databaseLabel, isServerDatabase } from '../db/dialect'
 import { shouldSeed, startDatabase } from '../db'
+import { accessMayHaveChanged, keepAccessReads, mayChangeAccess } from '../utils/access-reads'
 import { setDatabaseHandle, type DatabaseHandle } from '../utils/db'
 
 export default defineNitroPlugin((nitroApp) => {
@@ -22,6 +23,16 @@ export default defineNitroPlugin((nitroApp) => {
   // A failed start is reported by /api/health and by useDb(); keep the rejection from crashing the process.
   handle.ready.catch(() => {})
   setDatabaseHandle(handle)
+
+  // The guard's reads are kept in memory only on the embedded database (access-reads.ts says why), and
+  // emptied when a request that may change them starts and again when it is answered.
+  keepAccessReads(!isServerDatabase(path))
+  const changing = (event: { method: string; path: string }) => {
+    if (mayChangeAccess(event.method, event.path)) accessMayHaveChanged()
+  }
+  nitroApp.hooks.hook('request', changing)
+  nitroApp.hooks.hook('afterResponse', changing)
+  nitroApp.hooks.hook('error', (_error, { event }) => event && changing(event))
 
   nitroApp.hooks.hook('close', async () => {
     await handle.sequelize?.close()

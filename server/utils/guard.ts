@@ -1,12 +1,14 @@
 // The one guard: who is asking, and may they do this in this studio (or on this shoot)?
 // Every route calls it first; the socket handshake and every socket command use `authorizeSession`.
-// The membership is read from the database on every call, so a changed or removed role takes
-// effect at once, without waiting for the session cookie to expire. So is the account's session
+// The membership is read from the database (or access-reads.ts's memory of it, emptied by every
+// request that may change it) on every call, so a changed or removed role takes effect at once,
+// without waiting for the session cookie to expire. So is the account's session
 // version: a member session made before the account's last "sign out everywhere", password reset
 // or removal from a studio is refused (401), and over HTTP its cookie is cleared.
 import type { H3Event } from 'h3'
 import type { User, UserSession } from '#auth-utils'
 import { JoinCode, Membership, User as Account } from '../db/models'
+import { accessRead } from './access-reads'
 import { DomainError } from '../../shared/utils/domain-error'
 import { deviceCan, roleCan, type DeviceRole, type StudioAction, type StudioRole } from '../../shared/utils/roles'
 
@@ -41,8 +43,9 @@ const SESSION_ENDED_MESSAGE = 'This session was ended (signed out everywhere, a 
 export async function sessionIsCurrent(session: UserSession): Promise<boolean> {
   if (!session.user) return true
   await useDb()
-  const account = await Account.findByPk(session.user.id, { attributes: ['sessionVersion'] })
-  return !!account && account.sessionVersion === (session.sessionVersion ?? 0)
+  const userId = session.user.id
+  const version = await accessRead(`version:${userId}`, async () => (await Account.findByPk(userId, { attributes: ['sessionVersion'] }))?.sessionVersion ?? null)
+  return version !== null && version === (session.sessionVersion ?? 0)
 }
 
 /** The request's session; an ended member session is cleared (its cookie too) and answered 401. */
@@ -71,19 +74,22 @@ export async function authorizeSession(session: UserSession, target: Target, act
   }
 
   if (session.user) {
-    const membership = await Membership.findOne({ where: { userId: session.user.id, studioId }, attributes: ['role'] })
+    const userId = session.user.id
+    const role = await accessRead(`role:${userId}:${studioId}`,
+      async () => (await Membership.findOne({ where: { userId, studioId }, attributes: ['role'] }))?.role ?? null)
     // Not a member: answer as if it did not exist, so ids cannot be probed.
-    if (!membership) throw new DomainError('not-found', shootId ? 'There is no such shoot.' : 'There is no such studio on your account.')
-    if (!roleCan(membership.role, action)) {
-      throw new DomainError('forbidden', `Your role here (${membership.role}) may not ${ACTION_WORDS[action]}. Ask the studio's producer.`)
+    if (!role) throw new DomainError('not-found', shootId ? 'There is no such shoot.' : 'There is no such studio on your account.')
+    if (!roleCan(role, action)) {
+      throw new DomainError('forbidden', `Your role here (${role}) may not ${ACTION_WORDS[action]}. Ask the studio's producer.`)
     }
-    return { kind: 'member', user: session.user, studioId, role: membership.role, shootId }
+    return { kind: 'member', user: session.user, studioId, role, shootId }
   }
 
   if (session.device) {
     const device = session.device
-    const code = await JoinCode.findByPk(device.codeId, { attributes: ['id', 'revokedAt'] })
-    if (!code || code.revokedAt || device.until < Date.now()) {
+    const usable = await accessRead(`code:${device.codeId}`,
+      async () => { const code = await JoinCode.findByPk(device.codeId, { attributes: ['id', 'revokedAt'] }); return !!code && !code.revokedAt })
+    if (!usable || device.until < Date.now()) {
       throw new DomainError('signed-out', 'This device is no longer joined to the shoot. Enter a new join code from the control desk.')
     }
     if (shootId === undefined || shootId !== device.shootId || studioId !== device.studioId) {

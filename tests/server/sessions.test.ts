@@ -91,8 +91,20 @@ describe('sessions', async () => {
     const joined = await member.post(`/api/invites/${token}/accept`, { name: 'Removed Cook', password: 'a long member password' })
     expect(joined.status).toBe(200)
     expect((await member.get(`/api/studios/${studioId}/members`)).status).toBe(200)
+    // A socket on a shoot of the studio: its guard reads are kept in memory between changes
+    // (server/utils/access-reads.ts), and the removal must reach its very next message.
+    const shootId = await insertShoot(databasePath, studioId, 'Removal shoot')
+    const live = await connect(member)
+    try {
+      const join = () => emitAck<{ ok: boolean; error?: { code: string } }>(live, 'shoot:join', { shootId })
+      expect((await join()).ok).toBe(true)
+      expect((await join()).ok).toBe(true)
 
-    expect((await producer.delete(`/api/studios/${studioId}/members/${joined.body.user.id}`)).status).toBe(204)
+      expect((await producer.delete(`/api/studios/${studioId}/members/${joined.body.user.id}`)).status).toBe(204)
+      expect((await join()).error?.code).toBe('signed-out')
+    } finally {
+      live.disconnect()
+    }
     expectEnded(await member.get('/api/me'))
     // The producer who removed them is not affected.
     expect((await producer.get(`/api/studios/${studioId}/members`)).status).toBe(200)
