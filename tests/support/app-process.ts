@@ -5,7 +5,7 @@
 import { io } from 'socket.io-client'
 import { serverPort } from './app'
 import type { Json, Reply } from './client'
-import type { TestSocket } from './sockets'
+import { heldFromEvents, type TestSocket } from './sockets'
 import { spawnBuiltApp, waitForHealth, type SpawnedApp } from './spawned'
 
 export type AppProcess = SpawnedApp
@@ -49,9 +49,8 @@ export function connectTo(app: AppProcess, client: ProcessClient): Promise<TestS
     reconnection: false,
     forceNew: true,
   }) as TestSocket & { presences: Json[] }
-  socket.received = []
+  heldFromEvents(socket)
   socket.presences = []
-  socket.on('shoot:event', (m) => socket.received.push(m))
   socket.on('shoot:presence', (m) => socket.presences.push(m))
   return new Promise((resolve, reject) => {
     socket.once('connect', () => resolve(socket))

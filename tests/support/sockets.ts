@@ -12,6 +12,17 @@ export type ReceivedMessage = ShootEventMessage & { state: ShootState }
 /** `held`: the state of each shoot as a screen builds it, from the last join or snapshot answered through emitAck and the patches since. */
 export type TestSocket = Socket<ServerToClientEvents, ClientToServerEvents> & { received: ReceivedMessage[]; held: Map<number, ShootState> }
 
+/** Keeps `received` and `held` on a new socket as a screen does: each event's patch applied to the state held. */
+export function heldFromEvents(socket: TestSocket) {
+  socket.received = []
+  socket.held = new Map()
+  socket.on('shoot:event', (m) => {
+    const state = applyShootMessage(socket.held.get(m.shootId) ?? null, m)
+    if (state) socket.held.set(m.shootId, state)
+    socket.received.push({ ...m, state: state as ShootState })
+  })
+}
+
 /** A socket of `client` (to its server: the file's built app, or the one at client.base). */
 export function connect(client: Client | null, transport: 'websocket' | 'polling' = 'websocket'): Promise<TestSocket> {
   const socket = io(client?.url('/') ?? url('/'), {
@@ -22,13 +33,7 @@ export function connect(client: Client | null, transport: 'websocket' | 'polling
     reconnection: false,
     forceNew: true,
   }) as TestSocket
-  socket.received = []
-  socket.held = new Map()
-  socket.on('shoot:event', (m) => {
-    const state = applyShootMessage(socket.held.get(m.shootId) ?? null, m)
-    if (state) socket.held.set(m.shootId, state)
-    socket.received.push({ ...m, state: state as ShootState })
-  })
+  heldFromEvents(socket)
   return new Promise((resolve, reject) => {
     socket.once('connect', () => resolve(socket))
     socket.once('connect_error', reject)
