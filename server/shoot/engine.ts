@@ -1,17 +1,17 @@
 // The live shoot's engine: one command is authorised (the role table in shoot-commands.ts, through
 // applyShootCommand), reduced, persisted with its sequence number in one transaction, and
-// broadcast to the shoot's room as a JSON Patch (RFC 6902, fast-json-patch's compare) from the
+// broadcast to the shoot's room as a JSON Patch (RFC 6902, state-diff.ts, walking only what changed) from the
 // state before to the state after, with both sequence numbers (shared/utils/shoot-wire.ts). The latest state of each shoot that has not ended is kept in
 // memory for the ticker; the database is what counts (a restart reloads it, and timers that fell
 // due while the server was down fire at once).
 import { randomUUID } from 'node:crypto'
-import jsonPatch from 'fast-json-patch'
 import type { ShootActor, ShootMode, ShootPlan, ShootSegment, ShootState } from '../../shared/types/shoot'
 import type { ShootEventMessage } from '../../shared/types/socket-events'
 import { DomainError, type DomainErrorBody } from '../../shared/utils/domain-error'
 import { createShootState } from '../../shared/utils/shoot'
 import { applyShootCommand } from '../../shared/utils/shoot-reducer'
 import { markDueTimers } from '../../shared/utils/shoot-timers'
+import { diffStates } from './state-diff'
 import type { ShootRow, ShootStore } from './store'
 
 export type CommandOutcome = { ok: true; seq: number } | { ok: false; error: DomainErrorBody }
@@ -49,7 +49,7 @@ export function createShootEngine({ store, broadcast, now = Date.now, newId = ()
     broadcast(change.message.shootId, change.message)
   }
   /** The change from `before` to `after` as the screens get it. */
-  const patchOf = (before: ShootState, after: ShootState) => ({ baseSeq: before.seq, patch: jsonPatch.compare(before, after) as ShootEventMessage['patch'] })
+  const patchOf = (before: ShootState, after: ShootState) => ({ baseSeq: before.seq, patch: diffStates(before, after) })
   const stateOf = (row: ShootRow | null, shootId: number): ShootState => {
     if (!row) throw new DomainError('not-found', 'There is no such shoot.')
     remember(shootId, row.state)
