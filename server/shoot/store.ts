@@ -12,6 +12,7 @@
 import sqlite3 from 'sqlite3'
 import { BUSY_TIMEOUT_MS } from '../db/connection'
 import { queueWrite } from '../db/write-queue'
+import { startCheckpoints, type Checkpoints } from './wal-checkpoint'
 import type { ShootActor, ShootMode, ShootState } from '../../shared/types/shoot'
 import { applyShootPatch, type ShootPatchOperation } from '../../shared/utils/shoot-wire'
 
@@ -172,8 +173,9 @@ function open(path: string): Promise<sqlite3.Database> {
       if (err) return reject(err)
       conn.configure('busyTimeout', BUSY_TIMEOUT_MS)
       // As connection.ts sets Sequelize's: foreign keys, and with WAL a commit that survives a
-      // crashed process without an fsync each time.
-      conn.exec('PRAGMA foreign_keys = ON; PRAGMA synchronous = NORMAL;', (e) => (e ? reject(e) : resolve(conn)))
+      // crashed process without an fsync each time; checkpoints are wal-checkpoint.ts's, not a commit's.
+      const checkpoints = path === ':memory:' ? '' : ' PRAGMA wal_autocheckpoint = 0;'
+      conn.exec(`PRAGMA foreign_keys = ON; PRAGMA synchronous = NORMAL;${checkpoints}`, (e) => (e ? reject(e) : resolve(conn)))
     })
   })
 }
@@ -181,7 +183,12 @@ function open(path: string): Promise<sqlite3.Database> {
 /** `ready` is awaited before the file is first opened (the migrations that make its tables). */
 export function openShootStore(path: string, ready: () => Promise<unknown> = async () => {}): ShootStore {
   let db: Promise<sqlite3.Database> | undefined
-  const conn = () => (db ??= ready().then(() => open(path)))
+  let checkpoints: Checkpoints | undefined
+  const conn = () => (db ??= ready().then(async () => {
+    const opened = await open(path)
+    if (path !== ':memory:') checkpoints = startCheckpoints(path)
+    return opened
+  }))
   const run = async (sql: string, params: unknown[] = []) => {
     const c = await conn()
     return new Promise<number>((resolve, reject) =>
@@ -358,6 +365,8 @@ export function openShootStore(path: string, ready: () => Promise<unknown> = asy
       if (db) await catchUp().catch((error) => console.error('[hobline] the shoot rows could not be brought up to their event log on close:', error))
       const c = await db
       db = undefined
+      await checkpoints?.stop()
+      checkpoints = undefined
       await Promise.all([...statements.values()].map((st) => new Promise<void>((resolve) => st.finalize(() => resolve()))))
       statements.clear()
       rows.clear()
