@@ -70,7 +70,7 @@ describe('sessions', async () => {
       expect(refused.ok).toBe(false)
       expect(refused.error).toMatchObject({ code: 'signed-out', message: expect.stringMatching(/^This session was ended/) })
       // A new socket with the old cookie: the socket session check reads it as no one's session.
-      const late = await connect({ cookie: otherCookie } as Client)
+      const late = await connect(Object.assign(new Client(), { cookie: otherCookie }))
       try {
         expect((await join(late)).error).toMatchObject({ code: 'signed-out', message: 'Sign in first.' })
       } finally {

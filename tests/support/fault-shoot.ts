@@ -63,12 +63,16 @@ export interface LoggedEvent {
   command: Record<string, unknown>
 }
 
-/** The shoot's event log and its stored row (both seq columns and the state), read from the file. */
+/**
+ * The shoot's event log and its stored row (both seq columns and the state), read from the file.
+ * `logSeq` is the shoot's seq: its last event's. The row takes the whole state only every few
+ * commands (server/shoot/store.ts, CHECKPOINT_EVERY), so while the server runs `rowSeq` may be behind.
+ */
 export async function shootOnFile(databasePath: string, shootId: number) {
   const events = (await queryFile<{ seq: number; type: string; command: string }>(databasePath,
     `SELECT seq, type, command FROM shoot_events WHERE shoot_id = ${shootId} ORDER BY seq`))
     .map((e) => ({ seq: e.seq, type: e.type, command: JSON.parse(e.command) as Record<string, unknown> }))
   const [row] = await queryFile<{ seq: number; state: string }>(databasePath, `SELECT seq, state FROM shoots WHERE id = ${shootId}`)
   const state = JSON.parse(row!.state) as ShootSnapshot['state']
-  return { events, rowSeq: row!.seq, state }
+  return { events, rowSeq: row!.seq, logSeq: events.at(-1)?.seq ?? row!.seq, state }
 }
