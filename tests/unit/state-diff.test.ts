@@ -45,6 +45,8 @@ describe('diffStates', () => {
   it('any two JSON documents: applied by fast-json-patch and by the screens, the patch gives the second', () => {
     const doc = fc.jsonValue({ maxDepth: 4 })
     fc.assert(fc.property(doc, doc, (a, b) => {
+      // A "__proto__" member is refused by both appliers by design (no shoot state has one).
+      fc.pre(!JSON.stringify([a, b]).includes('"__proto__"'))
       const [before, after] = [wire(a), wire(b)]
       const patch = wire(diffStates(before, after))
       expect(jsonPatch.applyPatch(wire(before), wire(patch), true, false).newDocument).toEqual(after)
@@ -55,6 +57,7 @@ describe('diffStates', () => {
   it('a document changed in part: the patch from the shared structure equals in effect fast-json-patch\'s compare', () => {
     fc.assert(fc.property(fc.dictionary(fc.string({ maxLength: 4 }), fc.jsonValue({ maxDepth: 3 })), fc.string({ maxLength: 4 }), fc.jsonValue({ maxDepth: 2 }),
       (base, key, value) => {
+        fc.pre(!JSON.stringify([base, key, value]).includes('__proto__'))
         const before = wire(base)
         const after = { ...before, [key]: wire(value) }
         const ours = applyShootPatch(wire(before), wire(diffStates(before, after)))
