@@ -9,6 +9,8 @@ import type { ShootPatchOperation } from '../../shared/utils/shoot-wire'
 /** A JSON Pointer reference token (RFC 6901 §3: "~" as "~0", "/" as "~1"). */
 const token = (key: string) => key.replace(/~/g, '~0').replace(/\//g, '~1')
 const isNode = (v: unknown): v is Record<string, unknown> => v !== null && typeof v === 'object'
+/** A member of the object itself ("valueOf" of {} is not one). */
+const own = (node: Record<string, unknown>, key: string) => (Object.prototype.hasOwnProperty.call(node, key) ? node[key] : undefined)
 
 export function diffStates(before: unknown, after: unknown, path = '', ops: ShootPatchOperation[] = []): ShootPatchOperation[] {
   if (before === after) return ops
@@ -29,11 +31,11 @@ export function diffStates(before: unknown, after: unknown, path = '', ops: Shoo
   // A key whose value is undefined is not in the JSON at all.
   for (const key of Object.keys(before)) {
     if (before[key] === undefined) continue
-    if (after[key] === undefined) ops.push({ op: 'remove', path: `${path}/${token(key)}` })
+    if (own(after, key) === undefined) ops.push({ op: 'remove', path: `${path}/${token(key)}` })
     else diffStates(before[key], after[key], `${path}/${token(key)}`, ops)
   }
   for (const key of Object.keys(after)) {
-    if (after[key] !== undefined && before[key] === undefined) ops.push({ op: 'add', path: `${path}/${token(key)}`, value: after[key] })
+    if (after[key] !== undefined && own(before, key) === undefined) ops.push({ op: 'add', path: `${path}/${token(key)}`, value: after[key] })
   }
   return ops
 }

@@ -36,6 +36,11 @@ describe('diffStates', () => {
     expect(diffStates(before, after)).toEqual([{ op: 'replace', path: '/seq', value: 5 }, { op: 'replace', path: '/timers/0/state', value: 'paused' }])
   })
 
+  it('reads only the objects\' own members ("valueOf" and "toString" of {} are not members)', () => {
+    expect(diffStates({}, { valueOf: 0 })).toEqual([{ op: 'add', path: '/valueOf', value: 0 }])
+    expect(diffStates({ toString: '' }, {})).toEqual([{ op: 'remove', path: '/toString' }])
+  })
+
   it('treats undefined members as absent, as JSON does', () => {
     expect(diffStates({ a: 1, b: undefined }, { a: 1 })).toEqual([])
     expect(diffStates({ a: 1 }, { a: undefined })).toEqual([{ op: 'remove', path: '/a' }])
