@@ -4,6 +4,7 @@
 // the shoot's row under lock (SELECT … FOR UPDATE on PostgreSQL, store-postgres.ts) and only marks
 // what is still running, so two processes' tickers never ring the same timer twice.
 import type { ShootEngine } from './engine'
+import { repeatWithoutOverlap } from './ticker'
 
 /** How often each process reads the live shoots again (NUXT_SHOOT_RELOAD_MS, default 2 s, at least 100 ms). */
 export function reloadEveryMs(value: unknown): number {
@@ -12,18 +13,7 @@ export function reloadEveryMs(value: unknown): number {
 }
 
 export function watchLiveShoots(engine: Pick<ShootEngine, 'loadLive'>, everyMs = 2000) {
-  let loading = false
-  const timer = setInterval(async () => {
-    if (loading) return
-    loading = true
-    try {
-      await engine.loadLive()
-    } catch (error) {
-      console.error('[hobline] could not read the live shoots again:', error)
-    } finally {
-      loading = false
-    }
-  }, everyMs)
-  timer.unref()
-  return { stop: () => clearInterval(timer) }
+  const reloads = repeatWithoutOverlap(() => engine.loadLive(), everyMs, 'could not read the live shoots again')
+  reloads.timer.unref()
+  return { stop: reloads.stop }
 }

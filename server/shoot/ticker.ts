@@ -5,25 +5,29 @@ import type { ShootEngine } from './engine'
 
 export const TICK_MS = 250
 
-export function startTicker(engine: Pick<ShootEngine, 'tick' | 'loadLive'>, everyMs = TICK_MS) {
-  let ticking = false
-  const tick = async () => {
-    if (ticking) return
-    ticking = true
+/**
+ * `work` every `everyMs`, a turn skipped while the one before still runs; a failure is logged with
+ * `failed` and the next turn comes as usual. `run` is one turn now (skipped too if one is under way).
+ */
+export function repeatWithoutOverlap(work: () => Promise<unknown>, everyMs: number, failed: string) {
+  let running = false
+  const run = async () => {
+    if (running) return
+    running = true
     try {
-      await engine.tick()
+      await work()
     } catch (error) {
-      console.error('[hobline] due-timer tick failed:', error)
+      console.error(`[hobline] ${failed}:`, error)
     } finally {
-      ticking = false
+      running = false
     }
   }
-  const started = engine.loadLive().then(tick).catch((error) => console.error('[hobline] could not load live shoots:', error))
-  const timer = setInterval(tick, everyMs)
-  return {
-    started,
-    stop() {
-      clearInterval(timer)
-    },
-  }
+  const timer = setInterval(run, everyMs)
+  return { run, timer, stop: () => clearInterval(timer) }
+}
+
+export function startTicker(engine: Pick<ShootEngine, 'tick' | 'loadLive'>, everyMs = TICK_MS) {
+  const ticks = repeatWithoutOverlap(() => engine.tick(), everyMs, 'due-timer tick failed')
+  const started = engine.loadLive().then(ticks.run).catch((error) => console.error('[hobline] could not load live shoots:', error))
+  return { started, stop: ticks.stop }
 }
